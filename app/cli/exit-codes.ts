@@ -1,0 +1,15 @@
+/** Documented exit codes of the `thermoshift` command (README, "Command line"). */
+export const EXIT = {
+  /** Everything worked (warnings may have been printed). */
+  ok: 0,
+  /** The data could not be read or analysed (bad file, unknown unit, nothing to shift …). */
+  dataError: 1,
+  /** The command line itself was wrong (unknown option, missing argument). */
+  usage: 2,
+  /** An output file exists and --force was not given, or it could not be written. */
+  outputError: 3,
+  /** A batch finished, but at least one sample failed. */
+  batchPartialFailure: 4,
+  /** A bug in Thermoshift: please report it with --debug output. */
+  internal: 70,
+} as const;

@@ -1,0 +1,165 @@
+/**
+ * Synthetic isotherms from a known Prony model and a known shift law: the yardstick for every
+ * accuracy test and the source of the invented demo samples. Everything is reproducible from the
+ * seed. Sign conventions as in DOMAIN.md: measured at T, G(ω) = G_ref(aT·ω) / bT.
+ */
+import type { Dataset, DeformationMode, Isotherm, QuantityId, TestKind } from '../data/types';
+import type { PronySeries } from '../spectrum/prony-model';
+import { pronyLoss, pronyRelaxation, pronyStorage } from '../spectrum/prony-model';
+import {
+  arrheniusLog10aT,
+  densityFromExpansion,
+  entropicBT,
+  wlfLog10aT,
+} from '../models/shift-laws';
+import { seededRandom } from './random';
+
+export type ShiftLaw =
+  { kind: 'wlf'; c1: number; c2K: number } | { kind: 'arrhenius'; activationEnergyJPerMol: number };
+
+export interface SyntheticComponent {
+  prony: PronySeries;
+  law: ShiftLaw;
+}
+
+export interface SyntheticOptions {
+  testKind: Exclude<TestKind, 'creep'>;
+  deformation: DeformationMode;
+  /** Reference temperature of the true model, K. */
+  referenceK: number;
+  temperaturesK: number[];
+  /** One component for a thermorheologically simple material; two or more make it complex. */
+  components: SyntheticComponent[];
+  /** Measurement window of the instrument: ω in rad/s or t in s. */
+  xMin: number;
+  xMax: number;
+  pointsPerDecade: number;
+  /** Multiplicative noise, relative standard deviation (0.02 = 2 %). */
+  relativeNoise: number;
+  /** Optional low-torque outliers: the lowest `count` points of each listed isotherm get `relativeNoise`. */
+  outliers?: { isothermIndices: number[]; count: number; relativeNoise: number };
+  /** Optional density model for an entropic vertical shift. */
+  density?: { referenceDensity: number; volumetricExpansionPerK: number };
+  seed: number;
+  name?: string;
+}
+
+export interface SyntheticTruth {
+  log10aT: number[];
+  log10bT: number[];
+}
+
+export function shiftLawLog10aT(law: ShiftLaw, temperatureK: number, referenceK: number): number {
+  return law.kind === 'wlf'
+    ? wlfLog10aT(temperatureK, law.c1, law.c2K, referenceK)
+    : arrheniusLog10aT(temperatureK, law.activationEnergyJPerMol, referenceK);
+}
+
+function logGrid(min: number, max: number, perDecade: number): number[] {
+  const n = Math.max(2, Math.round(Math.log10(max / min) * perDecade) + 1);
+  const step = Math.log10(max / min) / (n - 1);
+  return Array.from({ length: n }, (_, i) => min * 10 ** (i * step));
+}
+
+export function syntheticIsotherms(o: SyntheticOptions): {
+  dataset: Dataset;
+  truth: SyntheticTruth;
+} {
+  const rng = seededRandom(o.seed);
+  const xs = logGrid(o.xMin, o.xMax, o.pointsPerDecade);
+  const file = `${o.name ?? 'synthetic'}.csv`;
+  const truth: SyntheticTruth = { log10aT: [], log10bT: [] };
+  let row = 1;
+  const isotherms: Isotherm[] = o.temperaturesK.map((T, k) => {
+    const bT = o.density
+      ? entropicBT(
+          T,
+          o.referenceK,
+          densityFromExpansion(
+            T,
+            o.referenceK,
+            o.density.referenceDensity,
+            o.density.volumetricExpansionPerK,
+          ),
+          o.density.referenceDensity,
+        )
+      : 1;
+    truth.log10aT.push(shiftLawLog10aT(o.components[0].law, T, o.referenceK));
+    truth.log10bT.push(Math.log10(bT));
+    const shifts = o.components.map((c) => 10 ** shiftLawLog10aT(c.law, T, o.referenceK));
+    const noisy = (v: number, i: number): number => {
+      const outlier = o.outliers && o.outliers.isothermIndices.includes(k) && i < o.outliers.count;
+      const sd = outlier ? o.outliers!.relativeNoise : o.relativeNoise;
+      return v * Math.exp(sd * rng.normal());
+    };
+    const quantities: Partial<Record<QuantityId, number[]>> = {};
+    if (o.testKind === 'oscillatory') {
+      const gp: number[] = [];
+      const gpp: number[] = [];
+      xs.forEach((w, i) => {
+        let s = 0;
+        let l = 0;
+        o.components.forEach((c, j) => {
+          s += pronyStorage(c.prony, shifts[j] * w);
+          l += pronyLoss(c.prony, shifts[j] * w);
+        });
+        gp.push(noisy(s / bT, i));
+        gpp.push(noisy(l / bT, i));
+      });
+      quantities.storageModulus = gp;
+      quantities.lossModulus = gpp;
+      quantities.tanDelta = gpp.map((v, i) => v / gp[i]);
+    } else {
+      quantities.relaxationModulus = xs.map((t, i) => {
+        let s = 0;
+        o.components.forEach((c, j) => (s += pronyRelaxation(c.prony, t / shifts[j])));
+        return noisy(s / bT, i);
+      });
+    }
+    const source = xs.map(() => ({ file, row: ++row }));
+    return {
+      id: `T${String(k + 1).padStart(2, '0')}`,
+      temperatureK: T,
+      temperatureSpreadK: 0,
+      x: [...xs],
+      quantities,
+      mask: xs.map(() => true),
+      source,
+    };
+  });
+  const dataset: Dataset = {
+    name: o.name ?? 'synthetic',
+    testKind: o.testKind,
+    deformation: o.deformation,
+    abscissa: o.testKind === 'oscillatory' ? 'angularFrequency' : 'time',
+    isotherms,
+    files: [file],
+    metadata: { invented: 'yes', generator: 'core/synthetic', seed: String(o.seed) },
+  };
+  return { dataset, truth };
+}
+
+/**
+ * A smooth relaxation spectrum: `modesPerDecade` Maxwell modes between tauMin and tauMax with
+ * strengths following a log-normal-like bump on top of a power law, so that G' and G'' are smooth
+ * and every part of the window has curvature for the shift to grip.
+ */
+export function smoothProny(opts: {
+  tauMinS: number;
+  tauMaxS: number;
+  modesPerDecade: number;
+  glassyModulusPa: number;
+  equilibriumModulusPa: number;
+  slope?: number;
+}): PronySeries {
+  const taus = logGrid(opts.tauMinS, opts.tauMaxS, opts.modesPerDecade);
+  const slope = opts.slope ?? 0.5;
+  const raw = taus.map((t) => (t / opts.tauMinS) ** -slope);
+  const sum = raw.reduce((a, b) => a + b, 0);
+  const total = opts.glassyModulusPa - opts.equilibriumModulusPa;
+  return {
+    equilibriumModulusPa: opts.equilibriumModulusPa,
+    tauS: taus,
+    modulusPa: raw.map((r) => (r / sum) * total),
+  };
+}
