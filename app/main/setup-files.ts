@@ -1,0 +1,111 @@
+/**
+ * File handlers: open data files, save exports, open/save an analysis, recent files. Every path is
+ * chosen here through a native dialog; the renderer only proposes a bare file name.
+ */
+import { dialog, type BrowserWindow, type FileFilter } from 'electron';
+import { extname } from 'node:path';
+import { handleChannel, type HandleOptions } from './ipc';
+import type { RecentStore } from './recent-files';
+import { readTextFile, writeFileAtomic } from './text-files';
+
+const DATA_FILTERS: FileFilter[] = [
+  { name: 'Measurement tables', extensions: ['csv', 'txt', 'tsv', 'dat', 'asc'] },
+  { name: 'All files', extensions: ['*'] },
+];
+const ANALYSIS_FILTERS: FileFilter[] = [
+  { name: 'Thermoshift analysis', extensions: ['thermoshift.json', 'json'] },
+];
+
+function filtersFor(name: string): FileFilter[] {
+  const ext = extname(name).slice(1).toLowerCase();
+  return ext ? [{ name: ext.toUpperCase(), extensions: [ext] }] : [];
+}
+
+export interface FileSetup extends HandleOptions {
+  getWindow: () => BrowserWindow | null;
+  recent: RecentStore;
+}
+
+export function setupFiles({ getWindow, recent, ...ipc }: FileSetup): void {
+  const parent = (): BrowserWindow => {
+    const w = getWindow();
+    if (!w) throw new Error('The Thermoshift window is not open.');
+    return w;
+  };
+
+  handleChannel(
+    'data-files:open',
+    async () => {
+      const r = await dialog.showOpenDialog(parent(), {
+        title: 'Open measurement files',
+        properties: ['openFile', 'multiSelections'],
+        filters: DATA_FILTERS,
+      });
+      if (r.canceled || r.filePaths.length === 0) return [];
+      const files = await Promise.all(r.filePaths.map(readTextFile));
+      await recent.remember('data', r.filePaths);
+      return files;
+    },
+    ipc,
+  );
+
+  handleChannel(
+    'file:save',
+    async ({ suggestedName, content, encoding }) => {
+      const r = await dialog.showSaveDialog(parent(), {
+        title: 'Export',
+        defaultPath: suggestedName,
+        filters: filtersFor(suggestedName),
+      });
+      if (r.canceled || !r.filePath) return null;
+      await writeFileAtomic(r.filePath, content, encoding);
+      return { name: r.filePath.split(/[/\\]/).pop() ?? suggestedName };
+    },
+    ipc,
+  );
+
+  handleChannel(
+    'analysis:open',
+    async () => {
+      const r = await dialog.showOpenDialog(parent(), {
+        title: 'Open analysis',
+        properties: ['openFile'],
+        filters: ANALYSIS_FILTERS,
+      });
+      if (r.canceled || r.filePaths.length === 0) return null;
+      const file = await readTextFile(r.filePaths[0]);
+      await recent.remember('analysis', [r.filePaths[0]]);
+      return file;
+    },
+    ipc,
+  );
+
+  handleChannel(
+    'analysis:save',
+    async ({ suggestedName, text }) => {
+      const r = await dialog.showSaveDialog(parent(), {
+        title: 'Save analysis',
+        defaultPath: suggestedName,
+        filters: ANALYSIS_FILTERS,
+      });
+      if (r.canceled || !r.filePath) return null;
+      await writeFileAtomic(r.filePath, text);
+      await recent.remember('analysis', [r.filePath]);
+      return { name: r.filePath.split(/[/\\]/).pop() ?? suggestedName };
+    },
+    ipc,
+  );
+
+  handleChannel('recent:list', () => recent.list(), ipc);
+
+  handleChannel(
+    'recent:open',
+    async ({ id }) => {
+      const { kind, paths } = await recent.paths(id);
+      const files = await Promise.all(paths.map(readTextFile));
+      await recent.remember(kind, paths);
+      return { kind, files };
+    },
+    ipc,
+  );
+}
