@@ -1,0 +1,46 @@
+import type { ShiftModelSpec } from './types';
+
+/** Why a shift-model answer at some temperature must be read with care. */
+export interface ShiftRangeFlags {
+  /** T is outside the temperature range the constants were fitted over: an extrapolation. */
+  outsideFittedRange: boolean;
+  /** WLF used below the glass transition temperature: not valid there. */
+  belowGlassTransition: boolean;
+  /** WLF at or below its pole Tr − C2: the law has no meaning there. */
+  beyondPole: boolean;
+  /** One sentence per raised flag, for the user. */
+  messages: string[];
+}
+
+const c = (k: number): string => `${(k - 273.15).toFixed(1)} °C`;
+
+/**
+ * Flags for using a shift model at `temperatureK` (DOMAIN.md §3, §6): outside the fitted range is
+ * extrapolation; WLF constants fitted above Tg must not be used below Tg; WLF diverges at Tr − C2.
+ */
+export function checkShiftModelRange(model: ShiftModelSpec, temperatureK: number): ShiftRangeFlags {
+  const messages: string[] = [];
+  const range = model.fittedRangeK;
+  const outsideFittedRange =
+    !!range && (temperatureK < range[0] - 1e-9 || temperatureK > range[1] + 1e-9);
+  if (outsideFittedRange && range) {
+    messages.push(
+      `${c(temperatureK)} is outside the fitted range ${c(range[0])} to ${c(range[1])}: the shift factor is extrapolated.`,
+    );
+  }
+  const isWlf = model.kind === 'wlf';
+  const belowGlassTransition =
+    isWlf && model.glassTransitionK !== undefined && temperatureK < model.glassTransitionK;
+  if (belowGlassTransition) {
+    messages.push(
+      `${c(temperatureK)} is below Tg (${c(model.glassTransitionK!)}): WLF does not hold below the glass transition.`,
+    );
+  }
+  const beyondPole = isWlf && temperatureK <= model.referenceK - model.values[1];
+  if (beyondPole) {
+    messages.push(
+      `${c(temperatureK)} is at or below the WLF pole (${c(model.referenceK - model.values[1])}): no shift factor exists there.`,
+    );
+  }
+  return { outsideFittedRange, belowGlassTransition, beyondPole, messages };
+}
