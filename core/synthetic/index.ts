@@ -1,2 +1,12 @@
 export * from './random';
 export * from './isotherm-set';
+export * from './spectrum-shapes';
+export * from './wander';
+export * from './number-text';
+export type * from './demo-types';
+export * from './demo-scenarios';
+export { demoModelAt, demoShiftAt, demoXToSI, measureDemoScenario } from './demo-measure';
+export type { DemoTruth, DemoTruthIsotherm, DemoTruthLaw } from './demo-truth';
+export { demoTruth } from './demo-truth';
+export type { DemoSample } from './demo-samples';
+export { buildDemoSample, demoDataset, demoSampleFiles } from './demo-samples';
