@@ -38,7 +38,7 @@ function meltLong(): DemoScenario {
       'plates), frequency sweeps from 100 down to 0.1 rad/s at nine temperatures from 150 to ' +
       '230 °C. The measured temperature wanders up to ±0.3 K around each set point. A torque ' +
       'floor makes the smallest moduli noisy: at the highest temperatures the lowest frequencies ' +
-      'are low-torque points whose G′ scatters by 10–30 %.',
+      'are low-torque points whose G′ scatters by 10–30 % (one standard deviation).',
     layout: 'long',
     testKind: 'oscillatory',
     deformation: 'shear',
