@@ -1,0 +1,21 @@
+export { importFiles } from './import-files';
+export { ImportError } from './import-error';
+export type { ImportErrorCode } from './import-error';
+export { resolveImportOptions } from './options';
+export { COLUMN_ROLES } from './roles';
+export { groupTemperatures } from './grouping';
+export type { TemperatureBand } from './grouping';
+export { temperatureFromFileName } from './file-name';
+export type {
+  ColumnMapping,
+  ColumnReport,
+  ColumnRole,
+  DelimiterName,
+  FileReport,
+  ImportOptions,
+  ImportResult,
+  IsothermGroupReport,
+  Layout,
+  ResolvedImportOptions,
+  SourceFile,
+} from './types';
