@@ -24,7 +24,7 @@ function meltTable(m: DemoMeasurements): { head: string[]; rows: string[] } {
     ['temperatures', `measured at the plate; set points ${setPointSpan(s.setPointsC)}`],
   ]);
   head.push(
-    'Temperature,Angular frequency,Storage modulus,Loss modulus,Complex viscosity',
+    "Temperature,Angular frequency,Storage modulus G',Loss modulus G'',Complex viscosity",
     `°C,${s.xUnit},${s.modulusUnit},${s.modulusUnit},${s.modulusUnit}·s`,
   );
   const rows = m.isotherms.flatMap((iso) =>
