@@ -58,7 +58,11 @@ export function deformationFromMetadata(
   metadata: Record<string, string>,
 ): DeformationMode | undefined {
   for (const [key, value] of Object.entries(metadata)) {
-    if (!/^(?:mode|deformation(?: mode)?|test mode|geometry|clamp|fixture)$/i.test(key.trim()))
+    if (
+      !/^(?:mode|deformation(?: mode)?|test mode|geometry|clamp|fixture|instrument|test|method)$/i.test(
+        key.trim(),
+      )
+    )
       continue;
     if (/tens|bend|flex|cantilever|dma|compress/i.test(value)) return 'tension';
     if (/shear|torsion|plate|cone|couette|rheomet/i.test(value)) return 'shear';

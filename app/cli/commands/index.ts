@@ -1,6 +1,8 @@
 import type { Command } from 'commander';
+import { registerInspect } from './inspect.ts';
 
 /** Every command of the CLI; each module adds one `registerX(program)`. */
 export function registerCommands(program: Command): void {
   void program;
+  registerInspect(program);
 }

@@ -1,0 +1,282 @@
+/**
+ * `thermoshift inspect FILE…`: shows what the importer recognised in the files of one sample
+ * (layout, delimiter, columns and units, isotherms, warnings) without analysing anything.
+ */
+import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { basename, join } from 'node:path';
+import { Command, Option } from 'commander';
+import { quantitySymbol } from '../../../core/data/quantities.ts';
+import type {
+  ColumnMapping,
+  ColumnRole,
+  ImportResult,
+  SourceFile,
+} from '../../../core/io/index.ts';
+import { COLUMN_ROLES, ImportError, importFiles } from '../../../core/io/index.ts';
+import { parseTemperatureText } from '../../../core/units/index.ts';
+import { CliError } from '../cli-error.ts';
+import { EXIT } from '../exit-codes.ts';
+
+/** File endings taken from a folder argument. */
+const DATA_FILE = /\.(csv|tsv|txt|dat|tab|asc|prn)$/i;
+
+interface InspectOptions {
+  json?: boolean;
+  tolerance?: string;
+  column?: string[];
+  fileTemperature?: string[];
+  testKind?: 'oscillatory' | 'relaxation' | 'creep';
+  deformation?: 'shear' | 'tension';
+}
+
+const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
+
+/** Reads bytes as text: UTF-16 when a byte-order mark says so, UTF-8 otherwise. */
+function decode(bytes: Buffer): string {
+  if (bytes[0] === 0xff && bytes[1] === 0xfe) return new TextDecoder('utf-16le').decode(bytes);
+  if (bytes[0] === 0xfe && bytes[1] === 0xff) return new TextDecoder('utf-16be').decode(bytes);
+  return new TextDecoder('utf-8').decode(bytes);
+}
+
+/** Files named on the command line; a folder stands for the data files directly inside it. */
+export function readSourceFiles(paths: string[]): SourceFile[] {
+  const names: string[] = [];
+  for (const p of paths) {
+    let isDir: boolean;
+    try {
+      isDir = statSync(p).isDirectory();
+    } catch {
+      throw new CliError(`${p}: no such file or folder`);
+    }
+    if (!isDir) {
+      names.push(p);
+      continue;
+    }
+    const inside = readdirSync(p, { withFileTypes: true })
+      .filter((d) => d.isFile() && !d.name.startsWith('.') && DATA_FILE.test(d.name))
+      .map((d) => join(p, d.name))
+      .sort((a, b) => a.localeCompare(b, 'en', { numeric: true }));
+    if (inside.length === 0)
+      throw new CliError(`${p}: the folder holds no data files (.csv, .tsv, .txt, .dat)`);
+    names.push(...inside);
+  }
+  return [...new Set(names)].map((name) => {
+    try {
+      return { name, text: decode(readFileSync(name)) };
+    } catch (e) {
+      throw new CliError(`${name}: cannot read it (${(e as Error).message})`);
+    }
+  });
+}
+
+/** "COL=ROLE[:UNIT][@TEMPERATURE]" → a column mapping; COL is a 1-based index or header text. */
+export function parseColumnSpec(text: string): ColumnMapping {
+  const m = /^(.+)=([A-Za-z]+)(?::([^@]*))?(?:@(.+))?$/.exec(text.trim());
+  const role = m?.[2] as ColumnRole | undefined;
+  if (!m || !role || !COLUMN_ROLES.includes(role)) {
+    throw new CliError(
+      `--column "${text}": write COLUMN=ROLE[:UNIT][@TEMPERATURE], e.g. "3=storageModulus:MPa"; ` +
+        `ROLE is one of ${COLUMN_ROLES.join(', ')}`,
+      EXIT.usage,
+    );
+  }
+  const col = m[1].trim();
+  const mapping: ColumnMapping = { column: /^\d+$/.test(col) ? Number(col) : col, role };
+  if (m[3] !== undefined && m[3].trim() !== '') mapping.unit = m[3].trim();
+  if (m[4] !== undefined) {
+    const t = parseTemperatureText(m[4]);
+    if (!t)
+      throw new CliError(
+        `--column "${text}": "${m[4]}" is not a temperature (e.g. 40C or 313.15K)`,
+        EXIT.usage,
+      );
+    mapping.temperatureK = t.temperatureK;
+  }
+  return mapping;
+}
+
+function fileTemperatures(specs: string[], files: SourceFile[]): Record<string, number> {
+  const out: Record<string, number> = {};
+  for (const spec of specs) {
+    const eq = spec.lastIndexOf('=');
+    const t = eq > 0 ? parseTemperatureText(spec.slice(eq + 1)) : undefined;
+    if (!t)
+      throw new CliError(
+        `--file-temperature "${spec}": write FILE=TEMPERATURE, e.g. "seal_a.txt=40C"`,
+        EXIT.usage,
+      );
+    const key = spec.slice(0, eq).trim();
+    const hits = files.filter((f) => f.name === key || basename(f.name) === key);
+    if (hits.length === 0)
+      throw new CliError(
+        `--file-temperature "${spec}": no input file is called "${key}"`,
+        EXIT.usage,
+      );
+    for (const f of hits) out[f.name] = t.temperatureK;
+  }
+  return out;
+}
+
+function tolerance(text: string | undefined): number | undefined {
+  if (text === undefined) return undefined;
+  const v = Number(text);
+  if (!(text.trim() !== '' && Number.isFinite(v) && v >= 0)) {
+    throw new CliError(`--tolerance: "${text}" is not a number of kelvin ≥ 0`, EXIT.usage);
+  }
+  return v;
+}
+
+const C = (k: number): number => Number((k - 273.15).toFixed(2));
+const g = (v: number): string => Number(v.toPrecision(4)).toString();
+
+/** The inspection as plain data: what `--json` prints. */
+export function inspection(r: ImportResult) {
+  const d = r.dataset;
+  const xUnit = d.abscissa === 'time' ? 's' : 'rad/s';
+  return {
+    sample: {
+      name: d.name,
+      testKind: d.testKind,
+      deformation: d.deformation,
+      abscissa: d.abscissa,
+      xUnit,
+    },
+    groupingToleranceK: r.options.groupingToleranceK,
+    files: r.files,
+    isotherms: r.groups.map((gr) => ({
+      id: gr.id,
+      temperatureC: C(gr.temperatureK),
+      temperatureK: Number(gr.temperatureK.toFixed(3)),
+      spreadK: Number(gr.temperatureSpreadK.toFixed(3)),
+      points: gr.points,
+      xMin: gr.xMin,
+      xMax: gr.xMax,
+      quantities: gr.quantities.map((q) => ({
+        id: q,
+        symbol: quantitySymbol(q, d.deformation),
+        unit: r.units[q] ?? '',
+        derived: r.derived.includes(q),
+      })),
+      files: gr.files,
+    })),
+    warnings: r.warnings,
+    metadata: d.metadata,
+  };
+}
+
+const DELIMITER_WORDS = {
+  comma: 'comma',
+  semicolon: 'semicolon',
+  tab: 'tab',
+  spaces: 'spaces',
+} as const;
+const LAYOUT_WORDS = {
+  long: 'long table (temperature column)',
+  perIsotherm: 'one isotherm',
+  wide: 'wide table (one column per temperature)',
+} as const;
+
+/** The inspection as text for people. */
+export function inspectionText(r: ImportResult): string {
+  const v = inspection(r);
+  const xName = r.abscissa === 'time' ? 't (s)' : 'ω (rad/s)';
+  const out: string[] = [
+    `Sample "${v.sample.name}": ${v.sample.testKind}, ${v.sample.deformation}, x = ${xName}, ${r.files.length} file(s)`,
+  ];
+  for (const f of r.files) {
+    const t =
+      f.temperatureK !== undefined
+        ? `, temperature ${C(f.temperatureK)} °C (from ${f.temperatureFrom})`
+        : '';
+    out.push(
+      '',
+      `${f.file}: ${LAYOUT_WORDS[f.layout]}${t}; delimiter ${DELIMITER_WORDS[f.delimiter]}, decimal "${f.decimalSeparator}"; ` +
+        `header row ${f.headerRow || '–'}, units row ${f.unitsRow || '–'}; ${f.usedRows} of ${f.dataRows} rows used`,
+    );
+    for (const c of f.columns) {
+      const temp = c.temperatureK !== undefined ? ` at ${C(c.temperatureK)} °C` : '';
+      const what =
+        c.role === 'ignore'
+          ? `ignored${c.note ? ` (${c.note})` : ''}`
+          : `${c.role}${temp}, ${c.unit || '–'} → ${c.siUnit || '–'}${c.note ? ` (${c.note})` : ''}`;
+      out.push(`  column ${c.index} "${c.header}": ${what}`);
+    }
+  }
+  out.push('', `Isotherms (grouping tolerance ${v.groupingToleranceK} K):`);
+  out.push(
+    `  ${'id'.padEnd(5)}${'T (°C)'.padStart(9)}${'spread (K)'.padStart(12)}${'points'.padStart(8)}  ${`${xName} range`.padEnd(22)}quantities`,
+  );
+  for (const i of v.isotherms) {
+    const qs = i.quantities
+      .map((q) => `${q.symbol}${q.unit ? ` (${q.unit})` : ''}${q.derived ? ' derived' : ''}`)
+      .join(', ');
+    out.push(
+      `  ${i.id.padEnd(5)}${i.temperatureC.toFixed(2).padStart(9)}${i.spreadK.toFixed(2).padStart(12)}${String(i.points).padStart(8)}  ${`${g(i.xMin)} – ${g(i.xMax)}`.padEnd(22)}${qs}`,
+    );
+  }
+  out.push('', r.warnings.length === 0 ? 'No warnings.' : `Warnings (${r.warnings.length}):`);
+  for (const w of r.warnings) {
+    const where = [w.file, w.row ? `row ${w.row}` : '', w.column ? `column ${w.column}` : '']
+      .filter(Boolean)
+      .join(', ');
+    out.push(`  ${where}: ${w.message}`);
+  }
+  return `${out.join('\n')}\n`;
+}
+
+export function registerInspect(program: Command): void {
+  program
+    .command('inspect')
+    .description(
+      'Show what is recognised in FILE… (one sample): columns, units, isotherms, warnings',
+    )
+    .argument('<files...>', 'data files, or a folder standing for the data files in it')
+    .option('--json', 'print the inspection as JSON')
+    .option(
+      '--tolerance <K>',
+      'measured temperatures closer than this many kelvin form one isotherm (default 1)',
+    )
+    .option(
+      '--column <COL=ROLE[:UNIT][@T]>',
+      'explicit column mapping, e.g. "3=storageModulus:MPa" or "2=relaxationModulus:MPa@40C"; repeatable',
+      collect,
+    )
+    .option(
+      '--file-temperature <FILE=T>',
+      'temperature of a one-isotherm file, e.g. "run7.txt=40C"; repeatable',
+      collect,
+    )
+    .addOption(
+      new Option('--test-kind <kind>', 'override the test kind').choices([
+        'oscillatory',
+        'relaxation',
+        'creep',
+      ]),
+    )
+    .addOption(
+      new Option('--deformation <mode>', 'override the deformation mode').choices([
+        'shear',
+        'tension',
+      ]),
+    )
+    .action((paths: string[], o: InspectOptions) => {
+      const files = readSourceFiles(paths);
+      const toleranceK = tolerance(o.tolerance);
+      let result: ImportResult;
+      try {
+        result = importFiles(files, {
+          ...(toleranceK !== undefined ? { groupingToleranceK: toleranceK } : {}),
+          columns: (o.column ?? []).map(parseColumnSpec),
+          fileTemperatureK: fileTemperatures(o.fileTemperature ?? [], files),
+          ...(o.testKind ? { testKind: o.testKind } : {}),
+          ...(o.deformation ? { deformation: o.deformation } : {}),
+        });
+      } catch (e) {
+        if (e instanceof ImportError) throw new CliError(e.message, EXIT.dataError);
+        throw e;
+      }
+      process.stdout.write(
+        o.json ? `${JSON.stringify(inspection(result), null, 2)}\n` : inspectionText(result),
+      );
+    });
+}
