@@ -9,6 +9,7 @@
  * so we run it in short rounds and stop when a round no longer improves the fit.
  */
 import { levenbergMarquardt } from 'ml-levenberg-marquardt';
+import { invert, normalEquations } from './linear-algebra';
 import type { FitStatus } from './types';
 
 export interface NonlinearFitProblem {
@@ -43,6 +44,11 @@ export interface NonlinearFitResult extends FitStatus {
   params: number[];
   /** Σ w_i r_i² at the returned parameters. */
   weightedSumSquares: number;
+  /**
+   * Parameter covariance (JᵀWJ)⁻¹·s², s² = Σ w r²/(n − p) (the weights taken as relative), from a
+   * central-difference Jacobian at the returned parameters. NaN where not determined.
+   */
+  covariance: number[][];
 }
 
 function resolveOptions(o: NonlinearFitOptions, initial: number[]): Required<NonlinearFitOptions> {
@@ -73,6 +79,30 @@ function sumSquares(p: NonlinearFitProblem, params: number[], w: ArrayLike<numbe
   return s;
 }
 
+/** Covariance of the parameters from a central-difference Jacobian (see NonlinearFitResult). */
+function covarianceAt(
+  p: NonlinearFitProblem,
+  params: number[],
+  w: ArrayLike<number>,
+  step: number[],
+  ss: number,
+): number[][] {
+  const n = p.x.length;
+  const jac = Array.from({ length: n }, () => new Array<number>(params.length).fill(0));
+  params.forEach((v, k) => {
+    const h = Math.max(step[k], 1e-6 * Math.abs(v));
+    const up = p.model(params.map((q, j) => (j === k ? q + h : q)));
+    const dn = p.model(params.map((q, j) => (j === k ? q - h : q)));
+    for (let i = 0; i < n; i++) jac[i][k] = (up(p.x[i]) - dn(p.x[i])) / (2 * h);
+  });
+  const dof = n - params.length;
+  const s2 = dof > 0 ? ss / dof : NaN;
+  const wArr = Array.from({ length: n }, (_, i) => w[i]);
+  return invert(normalEquations(jac, wArr, new Array<number>(n).fill(0)).matrix).map((row) =>
+    row.map((c) => c * s2),
+  );
+}
+
 /** Weighted nonlinear least squares by Levenberg–Marquardt. */
 export function levenbergMarquardtFit(
   problem: NonlinearFitProblem,
@@ -99,6 +129,7 @@ export function levenbergMarquardtFit(
     return {
       params,
       weightedSumSquares: ss,
+      covariance: params.map(() => params.map(() => NaN)),
       converged: false,
       iterations: 0,
       reason: 'The model cannot be evaluated at the starting values.',
@@ -129,6 +160,7 @@ export function levenbergMarquardtFit(
       return {
         params,
         weightedSumSquares: ss,
+        covariance: covarianceAt(problem, params, w, o.step, ss),
         converged: true,
         iterations,
         reason: 'The fit settled: a further round no longer lowered the residual.',
@@ -138,6 +170,7 @@ export function levenbergMarquardtFit(
   return {
     params,
     weightedSumSquares: ss,
+    covariance: covarianceAt(problem, params, w, o.step, ss),
     converged: false,
     iterations,
     reason: `The fit stopped after ${iterations} iterations without settling; treat the constants with care.`,

@@ -1,0 +1,160 @@
+import { describe, expect, it } from 'vitest';
+import { fitProny } from '../../../core/spectrum/prony-fit';
+import { pronyLoss, pronyRelaxation, pronyStorage } from '../../../core/spectrum/prony-model';
+import { seededRandom, smoothProny, syntheticIsotherms } from '../../../core/synthetic';
+import { expectAbsClose, expectRelClose } from '../../helpers/assert-close';
+
+/** Reduced master-curve points from synthetic isotherms shifted by their true aT. */
+function syntheticMaster(noise: number, seed: number) {
+  const prony = smoothProny({
+    tauMinS: 1e-7,
+    tauMaxS: 1e3,
+    modesPerDecade: 3,
+    glassyModulusPa: 2e9,
+    equilibriumModulusPa: 2e6,
+  });
+  const { dataset, truth } = syntheticIsotherms({
+    testKind: 'oscillatory',
+    deformation: 'shear',
+    referenceK: 303.15,
+    temperaturesK: [263.15, 273.15, 283.15, 293.15, 303.15, 313.15, 323.15, 333.15],
+    components: [{ prony, law: { kind: 'wlf', c1: 9, c2K: 100 } }],
+    xMin: 0.1,
+    xMax: 100,
+    pointsPerDecade: 10,
+    relativeNoise: noise,
+    seed,
+  });
+  const x: number[] = [];
+  const storage: number[] = [];
+  const loss: number[] = [];
+  dataset.isotherms.forEach((iso, k) => {
+    iso.x.forEach((w, i) => {
+      x.push(w * 10 ** truth.log10aT[k]);
+      storage.push(iso.quantities.storageModulus![i]);
+      loss.push(iso.quantities.lossModulus![i]);
+    });
+  });
+  return { prony, x, storage, loss };
+}
+
+describe('fitProny()', () => {
+  it('fitProny() recovers one Maxwell element plus Ge exactly when τ lies on the grid', () => {
+    const truth = { equilibriumModulusPa: 1e5, tauS: [0.1], modulusPa: [1e7] };
+    const x = Array.from({ length: 41 }, (_, i) => 10 ** (-2 + i * 0.1)); // 1e-2 … 1e2 rad/s
+    const f = fitProny(
+      { x, storage: x.map((w) => pronyStorage(truth, w)), loss: x.map((w) => pronyLoss(truth, w)) },
+      { modesPerDecade: 1 },
+    );
+    expect(f.converged).toBe(true);
+    const k = f.series.tauS.findIndex((t) => Math.abs(Math.log10(t) + 1) < 1e-9);
+    expectRelClose(f.series.modulusPa[k], 1e7, 1e-6, 'g at τ = 0.1 s'); // exact data: solver precision
+    expectRelClose(f.series.equilibriumModulusPa, 1e5, 1e-6, 'Ge');
+    expect(f.activeModes).toBe(1);
+    expectAbsClose(f.fitError.storageRms, 0, 1e-6);
+  });
+
+  // Acceptance (issue 4): G' and G'' reproduced within 3 % RMS on synthetic master-curve data
+  // with 2 % noise (8 isotherms, WLF shifts, 2 modes per decade).
+  it('fitProny() reproduces G′ and G″ within 3 % RMS on a noisy synthetic master curve', () => {
+    const { prony, x, storage, loss } = syntheticMaster(0.02, 11);
+    const f = fitProny({ x, storage, loss }, { modesPerDecade: 2 });
+    expect(f.converged).toBe(true);
+    expect(f.fitError.storageRms).toBeLessThan(0.03);
+    expect(f.fitError.lossRms).toBeLessThan(0.03);
+    // against the noise-free truth the error is far below the noise
+    const rel = (a: number, b: number) => (a / b - 1) ** 2;
+    const vsTruthS = Math.sqrt(
+      x.reduce((s, w) => s + rel(pronyStorage(f.series, w), pronyStorage(prony, w)), 0) / x.length,
+    );
+    const vsTruthL = Math.sqrt(
+      x.reduce((s, w) => s + rel(pronyLoss(f.series, w), pronyLoss(prony, w)), 0) / x.length,
+    );
+    expect(vsTruthS).toBeLessThan(0.01);
+    expect(vsTruthL).toBeLessThan(0.01);
+  });
+
+  it('fitProny() normalised form sums to 1 and G0 = Ge + Σ g_i', () => {
+    const { x, storage, loss } = syntheticMaster(0.02, 12);
+    const f = fitProny({ x, storage, loss });
+    const sum = f.normalised.fractions.reduce((a, b) => a + b, f.normalised.equilibriumFraction);
+    expectAbsClose(sum, 1, 1e-12);
+    expectRelClose(
+      f.normalised.instantaneousModulusPa,
+      f.series.modulusPa.reduce((a, b) => a + b, f.series.equilibriumModulusPa),
+      1e-12,
+    );
+    expect(f.series.modulusPa.every((g) => g >= 0)).toBe(true);
+  });
+
+  it('fitProny() on a melt returns Ge ≈ 0', () => {
+    const truth = smoothProny({
+      tauMinS: 1e-4,
+      tauMaxS: 10,
+      modesPerDecade: 2,
+      glassyModulusPa: 1e6,
+      equilibriumModulusPa: 0,
+      slope: 0.3,
+    });
+    const x = Array.from({ length: 61 }, (_, i) => 10 ** (-3 + i * 0.1));
+    const rng = seededRandom(4);
+    const f = fitProny({
+      x,
+      storage: x.map((w) => pronyStorage(truth, w) * Math.exp(0.02 * rng.normal())),
+      loss: x.map((w) => pronyLoss(truth, w) * Math.exp(0.02 * rng.normal())),
+    });
+    // Ge below 1 % of G' at the lowest frequency (the terminal zone, where G' ∝ ω²)
+    expect(f.series.equilibriumModulusPa).toBeLessThan(0.01 * pronyStorage(truth, 1e-3));
+  });
+
+  it('fitProny() fits relaxation data G(t) within 3 % RMS at 2 % noise', () => {
+    const truth = smoothProny({
+      tauMinS: 1e-2,
+      tauMaxS: 1e5,
+      modesPerDecade: 3,
+      glassyModulusPa: 1e9,
+      equilibriumModulusPa: 1e6,
+    });
+    const rng = seededRandom(9);
+    const t = Array.from({ length: 71 }, (_, i) => 10 ** (-1 + i * 0.1));
+    const f = fitProny(
+      { x: t, relaxation: t.map((v) => pronyRelaxation(truth, v) * Math.exp(0.02 * rng.normal())) },
+      { modesPerDecade: 1 },
+    );
+    expect(f.window.abscissa).toBe('time');
+    expect(f.fitError.relaxationRms).toBeLessThan(0.03);
+    expect(Number.isNaN(f.fitError.storageRms)).toBe(true);
+  });
+
+  it('fitProny() warns about non-positive values, names the point, and fits the rest', () => {
+    const truth = { equilibriumModulusPa: 0, tauS: [1], modulusPa: [1e5] };
+    const x = [0.1, 0.3, 1, 3, 10, -1];
+    const storage = x.map((w) => pronyStorage(truth, Math.abs(w)));
+    storage[2] = NaN;
+    const f = fitProny(
+      { x, storage, loss: x.map((w) => pronyLoss(truth, Math.abs(w))) },
+      { modesPerDecade: 1 },
+    );
+    expect(f.warnings.map((w) => w.pointIndex)).toEqual([2, 5]);
+    expect(f.warnings[0].message).toMatch(/Point 3: storage modulus NaN/);
+    expect(f.pointCount).toBe(5);
+  });
+
+  it('fitProny() with loss modulus only sets Ge to 0 and says so', () => {
+    const truth = { equilibriumModulusPa: 0, tauS: [1], modulusPa: [1e5] };
+    const x = [0.1, 0.3, 1, 3, 10];
+    const f = fitProny({ x, loss: x.map((w) => pronyLoss(truth, w)) });
+    expect(f.series.equilibriumModulusPa).toBe(0);
+    expect(f.warnings[0].message).toMatch(/Ge set to 0/);
+  });
+
+  it('fitProny() rejects wrong calls', () => {
+    expect(() => fitProny({ x: [1, 2] })).toThrow(/storage, loss or relaxation/);
+    expect(() => fitProny({ x: [1, 2], storage: [1] })).toThrow(/curve.storage/);
+    expect(() => fitProny({ x: [1, 2], storage: [1, 2], relaxation: [1, 2] })).toThrow(/not both/);
+    expect(() => fitProny({ x: [1, 2], storage: [1, 2] }, { modesPerDecade: 0 })).toThrow(
+      /modesPerDecade/,
+    );
+    expect(() => fitProny({ x: [1], storage: [1] })).toThrow(/two usable/);
+  });
+});
