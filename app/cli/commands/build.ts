@@ -1,0 +1,94 @@
+/**
+ * `thermoshift build FILE…`: all files (or the data files of a folder) form ONE sample; runs the
+ * whole job and prints the JSON summary (--json) and/or writes the output files (--out DIR).
+ */
+import { Command } from 'commander';
+import { analysisSummary } from '../../../core/pipeline/summary.ts';
+import { toCelsius } from '../../../core/pipeline/temperature.ts';
+import type { Analysis } from '../../../core/pipeline/types.ts';
+import { addSampleOptions, resolveSettings, type SampleOptionValues } from '../sample-options.ts';
+import { readInputs } from '../io/read-inputs.ts';
+import { analyseSample } from '../run-sample.ts';
+import { today, writeOutputs } from '../outputs.ts';
+import { toCliError } from '../error-map.ts';
+import { CliError } from '../cli-error.ts';
+import { EXIT } from '../exit-codes.ts';
+
+interface BuildOptions extends SampleOptionValues {
+  json?: boolean;
+  out?: string;
+  force?: boolean;
+  date?: string;
+  quiet?: boolean;
+}
+
+export function printWarnings(a: Analysis, label = ''): void {
+  for (const w of a.warnings) {
+    const where = [w.file, w.row ? `row ${w.row}` : '', w.column ? `column ${w.column}` : '']
+      .filter(Boolean)
+      .join(', ');
+    process.stderr.write(`warning${label}: ${where ? `${where}: ` : ''}${w.message} [${w.code}]\n`);
+  }
+}
+
+export function checkDate(date: string | undefined): string {
+  if (date === undefined) return today();
+  if (!/^\d{4}-\d{2}-\d{2}$/.test(date))
+    throw new CliError(`--date: "${date}" is not YYYY-MM-DD`, EXIT.usage);
+  return date;
+}
+
+export function registerBuild(program: Command): void {
+  const cmd = program
+    .command('build')
+    .description(
+      'Build one master curve from FILE… (one sample: e.g. one file per isotherm, or a folder of them)',
+    )
+    .argument('<files...>', 'data files, or a folder standing for the data files in it')
+    .option('--json', 'print the JSON summary on stdout')
+    .option(
+      '--out <dir>',
+      'write the shift table, master curve, models, Prony terms, summary.json and report.html into DIR',
+    )
+    .option('--force', 'overwrite existing output files')
+    .option('--date <YYYY-MM-DD>', 'date printed in the report (default: today)')
+    .option('--quiet', 'do not print warnings on stderr');
+  addSampleOptions(cmd);
+  cmd.action((files: string[], o: BuildOptions) => {
+    try {
+      const date = checkDate(o.date);
+      const settings = resolveSettings(o);
+      const analysis = analyseSample(readInputs(files), settings, o.settings ?? 'command line');
+      if (!o.quiet) printWarnings(analysis);
+      if (o.out) {
+        const written = writeOutputs(analysis, o.out, {
+          force: !!o.force,
+          modulusUnit: settings.modulusUnit ?? 'Pa',
+          date,
+        });
+        if (!o.quiet) process.stderr.write(`wrote ${written.length} files to ${o.out}\n`);
+      }
+      if (o.json) process.stdout.write(`${JSON.stringify(analysisSummary(analysis), null, 2)}\n`);
+      if (!o.json && !o.out) process.stdout.write(textSummary(analysis));
+    } catch (e) {
+      throw toCliError(e);
+    }
+  });
+}
+
+/** A short plain-text summary when neither --json nor --out is given. */
+export function textSummary(a: Analysis): string {
+  const lines = [
+    `${a.sample.name}: ${a.curves.length} isotherms, Tref = ${toCelsius(a.referenceTemperatureK)} °C`,
+    ...a.curves.map(
+      (c) =>
+        `  ${c.isothermId} ${toCelsius(c.temperatureK).toFixed(2).padStart(8)} °C  log10 aT = ${c.log10aT === null ? '–' : c.log10aT.toFixed(3)} ± ${c.log10aTStdErr === null ? '–' : c.log10aTStdErr.toFixed(3)}${c.included ? '' : '  (not included)'}`,
+    ),
+  ];
+  const { wlf, arrhenius } = a.models;
+  if (wlf) lines.push(`WLF: C1 = ${wlf.c1.toPrecision(4)}, C2 = ${wlf.c2K.toPrecision(4)} K`);
+  if (arrhenius)
+    lines.push(`Arrhenius: Ea = ${arrhenius.activationEnergyKJPerMol.toPrecision(4)} kJ/mol`);
+  lines.push('(use --json for the full summary, --out DIR for tables and the report)');
+  return `${lines.join('\n')}\n`;
+}

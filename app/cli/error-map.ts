@@ -1,0 +1,25 @@
+/**
+ * Maps the core's typed errors to one-line CLI errors with the documented exit codes. Messages from
+ * the core already name the file, row and column (import) or the key (settings, options).
+ */
+import { ImportError } from '../../core/io/import-error.ts';
+import { SettingsError } from '../../core/pipeline/settings.ts';
+import { OptionsError } from '../../core/pipeline/options.ts';
+import { PipelineError } from '../../core/pipeline/errors.ts';
+import { CliError } from './cli-error.ts';
+import { EXIT } from './exit-codes.ts';
+
+export function toCliError(e: unknown): unknown {
+  if (e instanceof CliError) return e;
+  if (e instanceof ImportError) return new CliError(e.message, EXIT.dataError);
+  if (e instanceof SettingsError) return new CliError(e.message, EXIT.usage);
+  if (e instanceof OptionsError) return new CliError(e.message, EXIT.usage);
+  if (e instanceof PipelineError) return new CliError(e.message, EXIT.dataError);
+  return e;
+}
+
+/** The one-line message of any error (for batch progress and the index table). */
+export function oneLine(e: unknown): string {
+  const m = e instanceof Error ? e.message : String(e);
+  return m.replace(/\s*[\r\n]+\s*/g, ' ');
+}

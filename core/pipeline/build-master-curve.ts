@@ -1,0 +1,85 @@
+/**
+ * The single entry point of the Thermoshift core: one call runs the whole job on one sample —
+ * shifts → shift-factor models → Prony series → indicators — collecting every warning, and
+ * returns plain JSON-serialisable data with the resolved settings, so the analysis can be
+ * repeated exactly. The CLI (`thermoshift build`/`batch`) and the desktop app both call it.
+ * Pure and synchronous; `options.onProgress` reports the stages.
+ */
+import type { Dataset } from '../data/types';
+import { resolveAnalysisOptions, type AnalysisOptions } from './options';
+import { applyMasks, checkExcluded } from './apply-masks';
+import { runShift } from './run-shift';
+import { fitShiftModels } from './fit-models';
+import { reduceToMasterCurve } from './reduce';
+import { runSpectrum } from './run-spectrum';
+import { PipelineError } from './errors';
+import { THERMOSHIFT_VERSION } from './version';
+import type { Analysis, AnalysisWarning } from './types';
+
+/**
+ * Builds the master curve of one sample.
+ * @param dataset isotherms of one sample (from core/io `importFiles`, or core/synthetic)
+ * @param options analysis options; every field optional (see AnalysisOptions for defaults)
+ * @throws OptionsError for invalid options (naming the key), PipelineError when nothing can be shifted
+ */
+export function buildMasterCurve(dataset: Dataset, options: AnalysisOptions = {}): Analysis {
+  const progress = options.onProgress ?? (() => undefined);
+  if (!dataset || !Array.isArray(dataset.isotherms))
+    throw new TypeError('buildMasterCurve: dataset must be a Dataset with an isotherms array');
+  if (dataset.isotherms.length === 0)
+    throw new PipelineError(`Sample "${dataset.name}": the data holds no isotherm to shift`);
+  const excluded = new Set(options.excludedIsothermIds ?? []);
+  const active = dataset.isotherms.filter((i) => !excluded.has(i.id));
+  if (active.length === 0)
+    throw new PipelineError(
+      `Sample "${dataset.name}": every isotherm is excluded; nothing is left to shift`,
+    );
+  const settings = resolveAnalysisOptions(
+    options,
+    active.map((i) => i.temperatureK),
+  );
+  checkExcluded(dataset, settings.excludedIsothermIds);
+  const warnings: AnalysisWarning[] = (options.importWarnings ?? []).map((w) => ({
+    code: 'import',
+    message: w.message,
+    ...(w.file && { file: w.file }),
+    ...(w.row > 0 && { row: w.row }),
+    ...(w.column > 0 && { column: w.column }),
+  }));
+  const data = applyMasks(dataset, settings.maskedPoints, warnings);
+
+  progress(0.05, 'shift');
+  const { result, curves } = runShift(data, settings);
+  for (const w of result.warnings) warnings.push({ code: w.code, message: w.message });
+  const masterCurve = reduceToMasterCurve(data, curves);
+
+  progress(0.6, 'models');
+  const models = fitShiftModels(curves, settings, warnings);
+
+  progress(0.75, 'spectrum');
+  const { prony, indicators } = runSpectrum(data, masterCurve, models, settings, warnings);
+
+  progress(1, 'done');
+  return {
+    version: THERMOSHIFT_VERSION,
+    sample: {
+      name: dataset.name,
+      testKind: dataset.testKind,
+      deformation: dataset.deformation,
+      abscissa: dataset.abscissa,
+      files: [...dataset.files],
+      metadata: { ...dataset.metadata },
+    },
+    settings,
+    referenceTemperatureK: settings.referenceTemperatureK,
+    dataset: data,
+    shiftQuantities: [...result.settings.drivers],
+    curves,
+    overallQualityRmsDecades: result.rmsResidualDecades,
+    masterCurve,
+    models,
+    prony,
+    indicators,
+    warnings,
+  };
+}

@@ -1,0 +1,166 @@
+/**
+ * Step 2 of the pipeline: the shift-factor models (core/models) fitted to the included shifts,
+ * weighted by their standard errors, each with its 95 % band over the fitted range. A model that
+ * cannot be fitted (too few shifts, runaway constants) becomes a warning, not an error.
+ */
+import {
+  fitArrhenius,
+  fitPolynomial,
+  fitWlf,
+  rereferenceWlf,
+  shiftModelBand,
+  suggestShiftModel,
+  wlfApparentActivationEnergyKJPerMol,
+  wlfFreeVolume,
+} from '../models';
+import type { ShiftFitCommon, ShiftPoint } from '../models/types';
+import type { ResolvedAnalysisOptions } from './options';
+import type { AnalysisCurve, AnalysisModels, AnalysisWarning, ModelFitStats } from './types';
+
+const BAND_POINTS = 61;
+
+function stats(fit: ShiftFitCommon, ids: Map<number, string>): ModelFitStats {
+  const [lo, hi] = fit.fittedRangeK;
+  const grid = Array.from(
+    { length: BAND_POINTS },
+    (_, i) => lo + ((hi - lo) * i) / (BAND_POINTS - 1),
+  );
+  const band = shiftModelBand(fit, grid);
+  const finite = (v: number): number | null => (Number.isFinite(v) ? v : null);
+  return {
+    r2: finite(fit.rSquared),
+    rmsResidualDecades: finite(fit.rmsResidual),
+    residuals: fit.residuals.map((r) => ({
+      isothermId: ids.get(r.temperatureK) ?? '',
+      temperatureK: r.temperatureK,
+      residualDecades: r.residual,
+    })),
+    fittedRangeK: [lo, hi],
+    converged: fit.converged,
+    band: {
+      temperatureK: grid,
+      log10aT: band.map((b) => b.log10aT),
+      lower95: band.map((b) => b.lower95),
+      upper95: band.map((b) => b.upper95),
+    },
+  };
+}
+
+const param = (fit: ShiftFitCommon, i: number) => {
+  const p = fit.parameters[i];
+  return {
+    se: p && Number.isFinite(p.stdErr) ? p.stdErr : null,
+    ci: p && p.ci95.every(Number.isFinite) ? ([p.ci95[0], p.ci95[1]] as [number, number]) : null,
+  };
+};
+
+export function fitShiftModels(
+  curves: readonly AnalysisCurve[],
+  s: ResolvedAnalysisOptions,
+  warnings: AnalysisWarning[],
+): AnalysisModels {
+  const used = curves.filter((c) => c.included && c.log10aT !== null);
+  const points: ShiftPoint[] = used.map((c) => ({
+    temperatureK: c.temperatureK,
+    log10aT: c.log10aT as number,
+    ...(c.log10aTStdErr !== null && { stdErr: c.log10aTStdErr }),
+  }));
+  const ids = new Map(used.map((c) => [c.temperatureK, c.isothermId]));
+  const opts = {
+    referenceK: s.referenceTemperatureK,
+    ...(s.glassTransitionK !== null && { glassTransitionK: s.glassTransitionK }),
+  };
+  const models: AnalysisModels = {};
+  const fits: Parameters<typeof suggestShiftModel>[0] = {};
+  const attempt = <T extends ShiftFitCommon>(kind: string, f: () => T): T | undefined => {
+    try {
+      const fit = f();
+      for (const w of fit.warnings)
+        warnings.push({
+          code: `model-${kind}`,
+          message: `${kind.toUpperCase()} fit: ${w.message}`,
+        });
+      if (!fit.converged)
+        warnings.push({
+          code: `model-${kind}`,
+          message: `The ${kind} fit did not converge: ${fit.reason}`,
+        });
+      return fit;
+    } catch (e) {
+      warnings.push({
+        code: 'model-failed',
+        message: `The ${kind} model could not be fitted: ${e instanceof Error ? e.message : String(e)}`,
+      });
+      return undefined;
+    }
+  };
+  if (s.models.includes('wlf')) {
+    const f = attempt('wlf', () => fitWlf(points, opts));
+    if (f) {
+      fits.wlf = f;
+      let atTg: { c1: number; c2K: number; referenceK: number } | undefined;
+      if (s.glassTransitionK !== null)
+        try {
+          atTg = rereferenceWlf(f.c1, f.c2K, f.referenceK, s.glassTransitionK);
+        } catch (e) {
+          warnings.push({ code: 'model-wlf', message: e instanceof Error ? e.message : String(e) });
+        }
+      let freeVolume: { fractionalFreeVolume: number; expansionPerK: number } | null = null;
+      try {
+        freeVolume = wlfFreeVolume(f.c1, f.c2K);
+      } catch {
+        freeVolume = null; // negative constants: no free-volume reading, the fit itself is reported
+      }
+      models.wlf = {
+        c1: f.c1,
+        c1StdErr: param(f, 0).se,
+        c1Ci95: param(f, 0).ci,
+        c2K: f.c2K,
+        c2KStdErr: param(f, 1).se,
+        c2KCi95: param(f, 1).ci,
+        referenceK: f.referenceK,
+        ...(atTg && { atGlassTransition: atTg }),
+        apparentActivationEnergyKJPerMol: wlfApparentActivationEnergyKJPerMol(
+          f.referenceK,
+          f.c1,
+          f.c2K,
+          f.referenceK,
+        ),
+        freeVolume,
+        ...stats(f, ids),
+      };
+    }
+  }
+  if (s.models.includes('arrhenius')) {
+    const f = attempt('arrhenius', () => fitArrhenius(points, opts));
+    if (f) {
+      fits.arrhenius = f;
+      models.arrhenius = {
+        activationEnergyKJPerMol: f.activationEnergyKJPerMol,
+        activationEnergyKJPerMolStdErr: param(f, 0).se,
+        activationEnergyKJPerMolCi95: param(f, 0).ci,
+        referenceK: f.referenceK,
+        ...stats(f, ids),
+      };
+    }
+  }
+  if (s.models.includes('polynomial')) {
+    const f = attempt('polynomial', () => fitPolynomial(points, opts));
+    if (f) {
+      fits.polynomial = f;
+      models.polynomial = {
+        a1PerK: f.a1PerK,
+        a1PerKStdErr: param(f, 0).se,
+        a2PerK2: f.a2PerK2,
+        a2PerK2StdErr: param(f, 1).se,
+        referenceK: f.referenceK,
+        ...stats(f, ids),
+      };
+    }
+  }
+  if (fits.wlf || fits.arrhenius || fits.polynomial) {
+    const hint = suggestShiftModel(fits, s.glassTransitionK ?? undefined);
+    models.hint = { model: hint.recommended, reason: hint.reasons.join(' ') };
+  }
+  return models;
+}

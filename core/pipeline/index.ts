@@ -1,0 +1,37 @@
+/**
+ * The single entry point of the Thermoshift core (`buildMasterCurve`) and what goes with it: the
+ * options and settings schemas, the stable JSON summary, and the conventions stated everywhere.
+ */
+export { buildMasterCurve } from './build-master-curve';
+export {
+  analysisOptionsSchema,
+  resolveAnalysisOptions,
+  defaultReferenceK,
+  OptionsError,
+  DEFAULT_MODELS,
+  type AnalysisOptions,
+  type ResolvedAnalysisOptions,
+} from './options';
+export {
+  settingsSchema,
+  parseSettings,
+  mergeSettings,
+  settingsToAnalysisOptions,
+  settingsToImportOptions,
+  settingTemperatureK,
+  parseMask,
+  SettingsError,
+  type Settings,
+} from './settings';
+export {
+  analysisSummary,
+  SUMMARY_SCHEMA,
+  type AnalysisSummary,
+  type SummaryCurve,
+} from './summary';
+export { CONVENTIONS, conventionCommentLines } from './conventions';
+export { reduceToMasterCurve } from './reduce';
+export { PipelineError } from './errors';
+export { THERMOSHIFT_VERSION } from './version';
+export { toCelsius } from './temperature';
+export type * from './types';

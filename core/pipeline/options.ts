@@ -1,0 +1,159 @@
+/**
+ * Options of `buildMasterCurve`: a zod schema (so settings files and app state are validated with
+ * messages naming the bad key) and one `resolveAnalysisOptions()` that applies every default.
+ */
+import { z } from 'zod';
+import { QUANTITY_IDS, type DataWarning, type QuantityId } from '../data/types';
+
+const quantityId = z.enum(QUANTITY_IDS as [QuantityId, ...QuantityId[]]);
+
+/** Options of one analysis. Every field is optional; defaults are applied by `resolveAnalysisOptions`. */
+export const analysisOptionsSchema = z.strictObject({
+  /**
+   * Reference temperature Tref, K. Any temperature, measured or not.
+   * @default the measured isotherm temperature closest to the middle of the included range
+   */
+  referenceTemperatureK: z.number().positive().optional(),
+  /**
+   * Quantities that drive the horizontal shift, or 'auto'.
+   * @default 'auto' (the shift engine's choice for the data: see docs/cli.md)
+   */
+  shiftQuantities: z.union([z.literal('auto'), z.array(quantityId).min(1)]).optional(),
+  /**
+   * Vertical shift bT: none; the entropic estimate from density; or estimated from the data.
+   * @default 'none'
+   */
+  verticalShift: z.enum(['none', 'density', 'data']).optional(),
+  /** Density input for `verticalShift: 'density'`: ρ at Tref (kg/m³) and volumetric expansion αV (1/K). */
+  density: z
+    .strictObject({
+      referenceDensityKgPerM3: z.number().positive(),
+      volumetricExpansionPerK: z.number().min(0).max(0.01),
+    })
+    .optional(),
+  /**
+   * Shift-factor models to fit.
+   * @default ['wlf', 'arrhenius', 'polynomial']
+   */
+  models: z.array(z.enum(['wlf', 'arrhenius', 'polynomial'])).optional(),
+  /**
+   * Relaxation times per decade of the Prony series (1 or 2); 0 skips the Prony fit.
+   * @default 1
+   */
+  pronyModesPerDecade: z.union([z.literal(0), z.literal(1), z.literal(2)]).optional(),
+  /** Glass transition temperature Tg, K: WLF constants are also re-referenced to it. @default none */
+  glassTransitionK: z.number().positive().optional(),
+  /** Isotherms left out of the master curve, by id (e.g. "T03"). @default [] */
+  excludedIsothermIds: z.array(z.string().min(1)).optional(),
+  /** Points left out, by file name and 1-based row in that file. @default [] */
+  maskedPoints: z
+    .array(z.strictObject({ file: z.string().min(1), row: z.number().int().positive() }))
+    .optional(),
+  /** Manual shifts kept locked while the rest are fitted around them: isotherm id → log10 aT. @default {} */
+  lockedLog10aT: z.record(z.string(), z.number()).optional(),
+});
+
+export type AnalysisOptions = z.input<typeof analysisOptionsSchema> & {
+  /** Called with a fraction 0–1 and the stage name. Not part of the settings (not serialised). */
+  onProgress?: (fraction: number, stage: string) => void;
+  /** Warnings from the import, carried into the analysis's warnings. Not part of the settings. */
+  importWarnings?: readonly DataWarning[];
+};
+
+/** The options with every default applied: what the analysis really used. */
+export interface ResolvedAnalysisOptions {
+  referenceTemperatureK: number;
+  /** True when Tref was chosen automatically. */
+  referenceTemperatureAuto: boolean;
+  shiftQuantities: 'auto' | QuantityId[];
+  verticalShift: 'none' | 'density' | 'data';
+  density: { referenceDensityKgPerM3: number; volumetricExpansionPerK: number } | null;
+  models: ('wlf' | 'arrhenius' | 'polynomial')[];
+  pronyModesPerDecade: 0 | 1 | 2;
+  glassTransitionK: number | null;
+  excludedIsothermIds: string[];
+  maskedPoints: { file: string; row: number }[];
+  lockedLog10aT: Record<string, number>;
+}
+
+export const DEFAULT_MODELS: ResolvedAnalysisOptions['models'] = ['wlf', 'arrhenius', 'polynomial'];
+
+/** Wrong options, with the key that is wrong and what was expected. */
+export class OptionsError extends Error {
+  constructor(
+    message: string,
+    readonly key: string,
+  ) {
+    super(message);
+    this.name = 'OptionsError';
+  }
+}
+
+/** Formats a zod issue as "key: message" with the dotted path of the key. */
+export function describeIssue(issue: z.core.$ZodIssue, prefix = ''): { key: string; text: string } {
+  const path = issue.path.map(String).join('.');
+  let key = prefix && path ? `${prefix}.${path}` : prefix || path;
+  if (issue.code === 'unrecognized_keys') {
+    const keys = issue.keys.join(', ');
+    key = key ? `${key}.${issue.keys[0]}` : issue.keys[0];
+    return { key, text: `unknown setting ${keys}` };
+  }
+  return { key: key || '(top level)', text: `${key || 'settings'}: ${issue.message}` };
+}
+
+/**
+ * Validates options and applies defaults. `measuredTemperaturesK` (the included isotherms'
+ * temperatures) picks the default reference temperature.
+ * @throws OptionsError naming the bad key
+ */
+export function resolveAnalysisOptions(
+  options: AnalysisOptions,
+  measuredTemperaturesK: readonly number[],
+): ResolvedAnalysisOptions {
+  const { onProgress: _progress, importWarnings: _warnings, ...rest } = options;
+  const parsed = analysisOptionsSchema.safeParse(rest);
+  if (!parsed.success) {
+    const { key, text } = describeIssue(parsed.error.issues[0]);
+    throw new OptionsError(`Invalid analysis option ${text}`, key);
+  }
+  const o = parsed.data;
+  const verticalShift = o.verticalShift ?? 'none';
+  if (verticalShift === 'density' && !o.density)
+    throw new OptionsError(
+      'Invalid analysis option density: verticalShift "density" needs density.referenceDensityKgPerM3 and density.volumetricExpansionPerK',
+      'density',
+    );
+  const auto = o.referenceTemperatureK === undefined;
+  return {
+    referenceTemperatureK: o.referenceTemperatureK ?? defaultReferenceK(measuredTemperaturesK),
+    referenceTemperatureAuto: auto,
+    shiftQuantities: o.shiftQuantities ?? 'auto',
+    verticalShift,
+    density: o.density ?? null,
+    models: o.models ? [...new Set(o.models)] : [...DEFAULT_MODELS],
+    pronyModesPerDecade: o.pronyModesPerDecade ?? 1,
+    glassTransitionK: o.glassTransitionK ?? null,
+    excludedIsothermIds: o.excludedIsothermIds ?? [],
+    maskedPoints: o.maskedPoints ?? [],
+    lockedLog10aT: o.lockedLog10aT ?? {},
+  };
+}
+
+/**
+ * The default reference temperature: the measured temperature closest to the middle of the
+ * measured range, so the master curve extends about equally to both sides (common practice is a
+ * measured temperature, so that aT = 1 falls on real data).
+ */
+export function defaultReferenceK(temperaturesK: readonly number[]): number {
+  if (temperaturesK.length === 0)
+    throw new OptionsError(
+      'No isotherm left to pick a reference temperature from',
+      'referenceTemperatureK',
+    );
+  const lo = Math.min(...temperaturesK);
+  const hi = Math.max(...temperaturesK);
+  const mid = (lo + hi) / 2;
+  let best = temperaturesK[0];
+  for (const t of temperaturesK) if (Math.abs(t - mid) < Math.abs(best - mid) - 1e-9) best = t;
+  return best;
+}

@@ -1,0 +1,61 @@
+/**
+ * The reduced master curve from shift factors (DOMAIN.md §2): x_r = aT·ω or t/aT; moduli × bT,
+ * compliance / bT, |η*| × bT/aT, tan δ and δ unchanged. Only included isotherms and unmasked
+ * points; sorted by reduced abscissa.
+ */
+import type { AbscissaKind, Dataset, QuantityId } from '../data/types';
+import { QUANTITY_IDS } from '../data/types';
+import type { AnalysisCurve, AnalysisMasterCurve } from './types';
+
+function verticalFactor(q: QuantityId, aT: number, bT: number): number {
+  switch (q) {
+    case 'tanDelta':
+    case 'phaseAngle':
+      return 1;
+    case 'creepCompliance':
+      return 1 / bT;
+    case 'complexViscosity':
+      return bT / aT;
+    default:
+      return bT;
+  }
+}
+
+export function reduceToMasterCurve(
+  dataset: Dataset,
+  curves: readonly AnalysisCurve[],
+  abscissa: AbscissaKind = dataset.abscissa,
+): AnalysisMasterCurve {
+  const byId = new Map(curves.map((c) => [c.isothermId, c]));
+  const present = QUANTITY_IDS.filter((q) => dataset.isotherms.some((i) => i.quantities[q]));
+  const rows: { x: number; id: string; T: number; v: number[] }[] = [];
+  for (const iso of dataset.isotherms) {
+    const c = byId.get(iso.id);
+    if (!c || !c.included || c.log10aT === null) continue;
+    const aT = 10 ** c.log10aT;
+    const bT = 10 ** (c.log10bT ?? 0);
+    iso.x.forEach((x, i) => {
+      if (!iso.mask[i]) return;
+      rows.push({
+        x: abscissa === 'angularFrequency' ? aT * x : x / aT,
+        id: iso.id,
+        T: iso.temperatureK,
+        v: present.map((q) => {
+          const arr = iso.quantities[q];
+          return arr ? arr[i] * verticalFactor(q, aT, bT) : NaN;
+        }),
+      });
+    });
+  }
+  rows.sort((a, b) => a.x - b.x);
+  const quantities: AnalysisMasterCurve['quantities'] = {};
+  present.forEach((q, k) => {
+    quantities[q] = rows.map((r) => (Number.isFinite(r.v[k]) ? r.v[k] : null));
+  });
+  return {
+    reducedX: rows.map((r) => r.x),
+    quantities,
+    isothermId: rows.map((r) => r.id),
+    temperatureK: rows.map((r) => r.T),
+  };
+}

@@ -1,0 +1,57 @@
+/**
+ * Step 1 of the pipeline: the shift engine (core/shift) with the resolved options, its result
+ * turned into the analysis's curves (with a note on every isotherm that is not plainly shifted).
+ */
+import { shiftIsotherms } from '../shift';
+import type { ShiftOptions, ShiftResult } from '../shift/types';
+import type { Dataset } from '../data/types';
+import type { ResolvedAnalysisOptions } from './options';
+import type { AnalysisCurve } from './types';
+
+export function shiftOptionsFor(s: ResolvedAnalysisOptions): ShiftOptions {
+  return {
+    referenceK: s.referenceTemperatureK,
+    ...(s.shiftQuantities !== 'auto' && { drivers: s.shiftQuantities }),
+    vertical: s.verticalShift,
+    ...(s.density && {
+      density: {
+        kind: 'expansion' as const,
+        referenceDensityKgPerM3: s.density.referenceDensityKgPerM3,
+        volumetricExpansionPerK: s.density.volumetricExpansionPerK,
+      },
+    }),
+    excluded: s.excludedIsothermIds,
+    locked: Object.entries(s.lockedLog10aT).map(([id, log10aT]) => ({ id, log10aT })),
+  };
+}
+
+function noteOf(c: ShiftResult['curves'][number]): string | undefined {
+  const notes: string[] = [];
+  if (c.excluded) notes.push('excluded by the user');
+  if (c.overlapsNothing) notes.push('overlaps no other isotherm: no shift can be found');
+  if (c.locked) notes.push('shift fixed by hand');
+  if (c.outlierPoints.length) notes.push(`${c.outlierPoints.length} outlier point(s) left out`);
+  return notes.length ? notes.join('; ') : undefined;
+}
+
+export function runShift(
+  dataset: Dataset,
+  s: ResolvedAnalysisOptions,
+): { result: ShiftResult; curves: AnalysisCurve[] } {
+  const result = shiftIsotherms(dataset, shiftOptionsFor(s));
+  const curves = result.curves.map((c): AnalysisCurve => {
+    const note = noteOf(c);
+    return {
+      isothermId: c.id,
+      temperatureK: c.temperatureK,
+      log10aT: c.log10aT,
+      log10aTStdErr: c.log10aTStdErr,
+      log10bT: c.log10bT,
+      log10bTStdErr: c.log10bTStdErr,
+      included: c.included,
+      qualityRmsDecades: c.rmsResidualDecades,
+      ...(note && { note }),
+    };
+  });
+  return { result, curves };
+}

@@ -1,0 +1,104 @@
+/**
+ * Step 3 of the pipeline: the Prony series fitted to the master curve at Tref (core/spectrum),
+ * and the indicators computed from it. Each part that cannot be computed becomes a warning.
+ */
+import type { Dataset } from '../data/types';
+import { fitProny } from '../spectrum/prony-fit';
+import type { ReducedCurve } from '../spectrum/types';
+import type { ResolvedAnalysisOptions } from './options';
+import type {
+  AnalysisIndicator,
+  AnalysisMasterCurve,
+  AnalysisModels,
+  AnalysisProny,
+  AnalysisWarning,
+} from './types';
+import { computeIndicators } from './indicators';
+
+const positive = (v: number | null | undefined): v is number =>
+  typeof v === 'number' && Number.isFinite(v) && v > 0;
+
+/** The master curve as the Prony fit takes it; only points with every used value positive. */
+export function reducedCurveOf(dataset: Dataset, mc: AnalysisMasterCurve): ReducedCurve | null {
+  if (dataset.abscissa === 'angularFrequency') {
+    const s = mc.quantities.storageModulus;
+    const l = mc.quantities.lossModulus;
+    if (!s && !l) return null;
+    const idx = mc.reducedX
+      .map((_, i) => i)
+      .filter((i) => positive(mc.reducedX[i]) && (!s || positive(s[i])) && (!l || positive(l[i])));
+    return {
+      x: idx.map((i) => mc.reducedX[i]),
+      ...(s && { storage: idx.map((i) => s[i] as number) }),
+      ...(l && { loss: idx.map((i) => l[i] as number) }),
+    };
+  }
+  const g = mc.quantities.relaxationModulus;
+  if (!g) return null;
+  const idx = mc.reducedX
+    .map((_, i) => i)
+    .filter((i) => positive(mc.reducedX[i]) && positive(g[i]));
+  return { x: idx.map((i) => mc.reducedX[i]), relaxation: idx.map((i) => g[i] as number) };
+}
+
+export function runSpectrum(
+  dataset: Dataset,
+  masterCurve: AnalysisMasterCurve,
+  models: AnalysisModels,
+  settings: ResolvedAnalysisOptions,
+  warnings: AnalysisWarning[],
+): { prony: AnalysisProny | null; indicators: AnalysisIndicator[] } {
+  if (settings.pronyModesPerDecade === 0) return { prony: null, indicators: [] };
+  const curve = reducedCurveOf(dataset, masterCurve);
+  if (!curve) {
+    warnings.push({
+      code: 'prony-not-fitted',
+      message: `No Prony series: it is fitted to storage/loss or relaxation moduli, and this ${dataset.testKind} data has none.`,
+    });
+    return { prony: null, indicators: [] };
+  }
+  try {
+    const fit = fitProny(curve, { modesPerDecade: settings.pronyModesPerDecade });
+    if (!fit.converged)
+      warnings.push({
+        code: 'prony-not-converged',
+        message: `The Prony fit did not converge: ${fit.reason}`,
+      });
+    for (const w of fit.warnings.filter((x) => x.pointIndex < 0))
+      warnings.push({ code: 'prony', message: `Prony fit: ${w.message}` });
+    const errs = [fit.fitError.storageRms, fit.fitError.lossRms, fit.fitError.relaxationRms].filter(
+      Number.isFinite,
+    );
+    const rms = errs.length ? Math.sqrt(errs.reduce((a, e) => a + e * e, 0) / errs.length) : null;
+    const prony: AnalysisProny = {
+      fittedTo: curve.relaxation
+        ? ['relaxationModulus']
+        : [
+            ...(curve.storage ? (['storageModulus'] as const) : []),
+            ...(curve.loss ? (['lossModulus'] as const) : []),
+          ],
+      equilibriumModulusPa: fit.series.equilibriumModulusPa,
+      instantaneousModulusPa: fit.normalised.instantaneousModulusPa,
+      tauS: [...fit.series.tauS],
+      modulusPa: [...fit.series.modulusPa],
+      modesPerDecade: settings.pronyModesPerDecade,
+      rmsRelativeError: rms,
+      reducedWindow: [fit.window.min, fit.window.max],
+    };
+    const indicators = computeIndicators(
+      dataset,
+      masterCurve,
+      fit.series,
+      fit.window,
+      models,
+      warnings,
+    );
+    return { prony, indicators };
+  } catch (e) {
+    warnings.push({
+      code: 'prony-not-fitted',
+      message: `No Prony series could be fitted: ${e instanceof Error ? e.message : String(e)}`,
+    });
+    return { prony: null, indicators: [] };
+  }
+}

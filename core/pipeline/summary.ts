@@ -1,0 +1,204 @@
+/**
+ * The stable JSON summary of an analysis (`thermoshift build --json`, `summary.json`).
+ * Keys are documented in docs/cli.md; add keys, never rename or remove them.
+ * Temperatures in °C unless the key ends in K; log quantities in decades.
+ */
+import type { Analysis, AnalysisWarning, ModelFitStats } from './types';
+import type { ResolvedAnalysisOptions } from './options';
+import { CONVENTIONS } from './conventions';
+import { toCelsius } from './temperature';
+
+export const SUMMARY_SCHEMA = 'thermoshift-summary/1';
+
+export interface SummaryCurve {
+  isothermId: string;
+  /** °C */
+  temperature: number;
+  temperatureK: number;
+  log10aT: number | null;
+  log10aTStdErr: number | null;
+  log10bT: number | null;
+  log10bTStdErr: number | null;
+  included: boolean;
+  /** RMS residual against the master curve, decades. */
+  qualityRmsDecades: number | null;
+  note?: string;
+}
+
+interface SummaryFit {
+  r2: number | null;
+  rmsResidualDecades: number | null;
+  /** °C */
+  fittedRange: [number, number];
+  converged: boolean;
+}
+
+export interface AnalysisSummary {
+  schema: typeof SUMMARY_SCHEMA;
+  version: string;
+  sample: {
+    name: string;
+    testKind: string;
+    deformation: string;
+    abscissa: string;
+    files: string[];
+  };
+  /** °C */
+  referenceTemperature: number;
+  referenceTemperatureK: number;
+  conventions: typeof CONVENTIONS;
+  shiftQuantities: string[];
+  curves: SummaryCurve[];
+  overallQualityRmsDecades: number | null;
+  models: {
+    wlf?: SummaryFit & {
+      C1: number;
+      C1StdErr: number | null;
+      C1Ci95: [number, number] | null;
+      /** K */
+      C2: number;
+      C2StdErr: number | null;
+      C2Ci95: [number, number] | null;
+      /** °C */
+      referenceTemperature: number;
+      atGlassTransition?: { C1: number; C2: number; referenceTemperature: number };
+      apparentActivationEnergy?: number | null;
+      freeVolume?: { fractionalFreeVolume: number; expansionPerK: number } | null;
+    };
+    arrhenius?: SummaryFit & {
+      /** kJ/mol */
+      activationEnergy: number;
+      activationEnergyStdErr: number | null;
+      activationEnergyCi95: [number, number] | null;
+      referenceTemperature: number;
+    };
+    polynomial?: SummaryFit & {
+      a1: number;
+      a1StdErr: number | null;
+      a2: number;
+      a2StdErr: number | null;
+      referenceTemperature: number;
+    };
+    hint?: { model: string; reason: string };
+  };
+  prony: {
+    fittedTo: string[];
+    equilibriumModulusPa: number;
+    instantaneousModulusPa: number;
+    modesPerDecade: number;
+    rmsRelativeError: number | null;
+    reducedWindow: [number, number];
+    terms: { tauS: number; modulusPa: number; normalized: number }[];
+  } | null;
+  indicators: Record<string, { label: string; value: number; unit: string; note?: string }>;
+  warnings: AnalysisWarning[];
+  settings: ResolvedAnalysisOptions & { referenceTemperature: number };
+}
+
+function fitStats(m: ModelFitStats): SummaryFit {
+  return {
+    r2: m.r2,
+    rmsResidualDecades: m.rmsResidualDecades,
+    fittedRange: [toCelsius(m.fittedRangeK[0]), toCelsius(m.fittedRangeK[1])],
+    converged: m.converged,
+  };
+}
+
+/** The stable summary of an analysis; plain JSON (no NaN, no functions). */
+export function analysisSummary(analysis: Analysis): AnalysisSummary {
+  const { models: m, prony: p } = analysis;
+  const models: AnalysisSummary['models'] = {};
+  if (m.wlf)
+    models.wlf = {
+      C1: m.wlf.c1,
+      C1StdErr: m.wlf.c1StdErr,
+      C1Ci95: m.wlf.c1Ci95,
+      C2: m.wlf.c2K,
+      C2StdErr: m.wlf.c2KStdErr,
+      C2Ci95: m.wlf.c2KCi95,
+      referenceTemperature: toCelsius(m.wlf.referenceK),
+      ...(m.wlf.atGlassTransition && {
+        atGlassTransition: {
+          C1: m.wlf.atGlassTransition.c1,
+          C2: m.wlf.atGlassTransition.c2K,
+          referenceTemperature: toCelsius(m.wlf.atGlassTransition.referenceK),
+        },
+      }),
+      apparentActivationEnergy: m.wlf.apparentActivationEnergyKJPerMol ?? null,
+      freeVolume: m.wlf.freeVolume ?? null,
+      ...fitStats(m.wlf),
+    };
+  if (m.arrhenius)
+    models.arrhenius = {
+      activationEnergy: m.arrhenius.activationEnergyKJPerMol,
+      activationEnergyStdErr: m.arrhenius.activationEnergyKJPerMolStdErr,
+      activationEnergyCi95: m.arrhenius.activationEnergyKJPerMolCi95,
+      referenceTemperature: toCelsius(m.arrhenius.referenceK),
+      ...fitStats(m.arrhenius),
+    };
+  if (m.polynomial)
+    models.polynomial = {
+      a1: m.polynomial.a1PerK,
+      a1StdErr: m.polynomial.a1PerKStdErr,
+      a2: m.polynomial.a2PerK2,
+      a2StdErr: m.polynomial.a2PerK2StdErr,
+      referenceTemperature: toCelsius(m.polynomial.referenceK),
+      ...fitStats(m.polynomial),
+    };
+  if (m.hint) models.hint = { ...m.hint };
+  return {
+    schema: SUMMARY_SCHEMA,
+    version: analysis.version,
+    sample: {
+      name: analysis.sample.name,
+      testKind: analysis.sample.testKind,
+      deformation: analysis.sample.deformation,
+      abscissa: analysis.sample.abscissa,
+      files: [...analysis.sample.files],
+    },
+    referenceTemperature: toCelsius(analysis.referenceTemperatureK),
+    referenceTemperatureK: analysis.referenceTemperatureK,
+    conventions: CONVENTIONS,
+    shiftQuantities: [...analysis.shiftQuantities],
+    curves: analysis.curves.map((c) => ({
+      isothermId: c.isothermId,
+      temperature: toCelsius(c.temperatureK),
+      temperatureK: c.temperatureK,
+      log10aT: c.log10aT,
+      log10aTStdErr: c.log10aTStdErr,
+      log10bT: c.log10bT,
+      log10bTStdErr: c.log10bTStdErr,
+      included: c.included,
+      qualityRmsDecades: c.qualityRmsDecades,
+      ...(c.note !== undefined && { note: c.note }),
+    })),
+    overallQualityRmsDecades: analysis.overallQualityRmsDecades,
+    models,
+    prony: p
+      ? {
+          fittedTo: [...p.fittedTo],
+          equilibriumModulusPa: p.equilibriumModulusPa,
+          instantaneousModulusPa: p.instantaneousModulusPa,
+          modesPerDecade: p.modesPerDecade,
+          rmsRelativeError: p.rmsRelativeError,
+          reducedWindow: p.reducedWindow,
+          terms: p.tauS.map((tauS, i) => ({
+            tauS,
+            modulusPa: p.modulusPa[i],
+            normalized: p.modulusPa[i] / p.instantaneousModulusPa,
+          })),
+        }
+      : null,
+    indicators: Object.fromEntries(
+      analysis.indicators.map((i) => [
+        i.key,
+        { label: i.label, value: i.value, unit: i.unit, ...(i.note && { note: i.note }) },
+      ]),
+    ),
+    warnings: analysis.warnings.map((w) => ({ ...w })),
+    settings: {
+      ...analysis.settings,
+      referenceTemperature: toCelsius(analysis.settings.referenceTemperatureK),
+    },
+  };
+}

@@ -1,0 +1,6 @@
+import { kelvinToCelsius } from '../data/quantities';
+
+/** Kelvin to °C rounded to 1e-6 K, so 463.15 K prints as 190 and not 190.00000000000003. */
+export function toCelsius(temperatureK: number): number {
+  return Math.round(kelvinToCelsius(temperatureK) * 1e6) / 1e6;
+}

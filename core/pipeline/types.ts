@@ -1,0 +1,183 @@
+/**
+ * The result of one analysis: everything the CLI, the desktop app and the report show, as plain
+ * JSON-serialisable data (numbers that could not be determined are `null`, never NaN).
+ * Units are SI and carried in the names; temperatures in kelvin.
+ *
+ * Conventions (DOMAIN.md §2): reduced frequency ω_r = aT·ω, reduced time t_r = t/aT,
+ * aT(Tref) = 1, log10 aT < 0 above Tref; reduced modulus = bT × measured modulus,
+ * bT = Tref·ρref/(T·ρ(T)), bT(Tref) = 1.
+ */
+import type { AbscissaKind, Dataset, DeformationMode, QuantityId, TestKind } from '../data/types';
+import type { ResolvedAnalysisOptions } from './options';
+
+/** A problem found while analysing, shown to users; file/row/column when it concerns lab data. */
+export interface AnalysisWarning {
+  /** Stable machine-readable code, e.g. `superposition-poor`, `import`. */
+  code: string;
+  /** A sentence a lab technician understands. */
+  message: string;
+  file?: string;
+  /** 1-based row in `file`. */
+  row?: number;
+  /** 1-based column in `file`. */
+  column?: number;
+  /** The isotherm the warning concerns. */
+  isothermId?: string;
+}
+
+/** The shift of one isotherm. */
+export interface AnalysisCurve {
+  isothermId: string;
+  /** Mean measured temperature, K. */
+  temperatureK: number;
+  /** log10 aT (decades); `null` when it could not be determined (e.g. no overlap). */
+  log10aT: number | null;
+  /** Standard error of log10 aT, decades. */
+  log10aTStdErr: number | null;
+  /** log10 bT (decades), 0 without a vertical shift. */
+  log10bT: number | null;
+  /** Standard error of log10 bT, decades (0 when bT is computed, not estimated). */
+  log10bTStdErr: number | null;
+  /** True when the isotherm is part of the master curve. */
+  included: boolean;
+  /** RMS residual of the isotherm against the master curve, decades. */
+  qualityRmsDecades: number | null;
+  /** Why the isotherm is not included, or how its shift was set. */
+  note?: string;
+}
+
+/** The reduced master curve at the reference temperature, one entry per point, sorted by reducedX. */
+export interface AnalysisMasterCurve {
+  /** Reduced frequency aT·ω (rad/s) or reduced time t/aT (s). */
+  reducedX: number[];
+  /** Reduced quantities at Tref, SI units; null where the point has no value for that quantity. */
+  quantities: Partial<Record<QuantityId, (number | null)[]>>;
+  /** Isotherm each point came from. */
+  isothermId: string[];
+  /** Temperature each point was measured at, K. */
+  temperatureK: number[];
+}
+
+/** A model's predicted log10 aT with its 95 % confidence band on a temperature grid. */
+export interface ModelBand {
+  temperatureK: number[];
+  log10aT: number[];
+  lower95: number[];
+  upper95: number[];
+}
+
+/** Goodness of fit common to all shift-factor models. */
+export interface ModelFitStats {
+  /** Coefficient of determination. */
+  r2: number | null;
+  /** RMS residual of log10 aT, decades. */
+  rmsResidualDecades: number | null;
+  /** Residual of each fitted isotherm (log10 aT measured − model), decades, by isotherm id. */
+  residuals: { isothermId: string; temperatureK: number; residualDecades: number }[];
+  /** Temperature range the model was fitted over, K. */
+  fittedRangeK: [number, number];
+  converged: boolean;
+  band: ModelBand;
+}
+
+/** WLF: log10 aT = −C1 (T − Tr)/(C2 + T − Tr) (Williams, Landel & Ferry 1955). */
+export interface WlfModel extends ModelFitStats {
+  c1: number;
+  c1StdErr: number | null;
+  c1Ci95: [number, number] | null;
+  c2K: number;
+  c2KStdErr: number | null;
+  c2KCi95: [number, number] | null;
+  /** Tr of the constants, K. */
+  referenceK: number;
+  /** Constants re-referenced to Tg when one was given. */
+  atGlassTransition?: { c1: number; c2K: number; referenceK: number };
+  /** Apparent activation energy at Tref from WLF, kJ/mol. */
+  apparentActivationEnergyKJPerMol?: number | null;
+  /** Free-volume fraction f_r = B/(2.303·C1) with B = 1, and expansion α_f = f_r/C2 (Ferry 1980). */
+  freeVolume?: { fractionalFreeVolume: number; expansionPerK: number } | null;
+}
+
+/** Arrhenius: ln aT = (Ea/R)(1/T − 1/Tr). */
+export interface ArrheniusModel extends ModelFitStats {
+  activationEnergyKJPerMol: number;
+  activationEnergyKJPerMolStdErr: number | null;
+  activationEnergyKJPerMolCi95: [number, number] | null;
+  referenceK: number;
+}
+
+/** Polynomial: log10 aT = a1 (T − Tr) + a2 (T − Tr)². */
+export interface PolynomialModel extends ModelFitStats {
+  a1PerK: number;
+  a1PerKStdErr: number | null;
+  a2PerK2: number;
+  a2PerK2StdErr: number | null;
+  referenceK: number;
+}
+
+export type ShiftModelKind = 'wlf' | 'arrhenius' | 'polynomial';
+
+export interface AnalysisModels {
+  wlf?: WlfModel;
+  arrhenius?: ArrheniusModel;
+  polynomial?: PolynomialModel;
+  /** Which model suits the data range best, with the reason, when one can be said. */
+  hint?: { model: ShiftModelKind; reason: string };
+}
+
+/** Prony series fitted to the master curve at Tref (generalised Maxwell model). */
+export interface AnalysisProny {
+  /** The quantities it was fitted to, e.g. storage and loss modulus, or relaxation modulus. */
+  fittedTo: QuantityId[];
+  equilibriumModulusPa: number;
+  /** Instantaneous modulus G0 = Ge + Σ g_i, Pa. */
+  instantaneousModulusPa: number;
+  tauS: number[];
+  modulusPa: number[];
+  modesPerDecade: number;
+  /** RMS relative error of the fit over the fitted quantities (0.03 = 3 %). */
+  rmsRelativeError: number | null;
+  /** Reduced window the series was fitted over (rad/s or s). */
+  reducedWindow: [number, number];
+}
+
+/** One material indicator (crossover, zero-shear viscosity, plateau modulus, tan δ peak …). */
+export interface AnalysisIndicator {
+  key: string;
+  label: string;
+  value: number;
+  /** Unit as shown, e.g. `Pa`, `rad/s`, `Pa·s`, `K`. */
+  unit: string;
+  note?: string;
+}
+
+export interface AnalysisSample {
+  name: string;
+  testKind: TestKind;
+  deformation: DeformationMode;
+  abscissa: AbscissaKind;
+  files: string[];
+  metadata: Record<string, string>;
+}
+
+/** Everything one call of `buildMasterCurve` produces. */
+export interface Analysis {
+  /** Thermoshift version that produced it. */
+  version: string;
+  sample: AnalysisSample;
+  /** The options after defaults were applied: pass them back to repeat the analysis. */
+  settings: ResolvedAnalysisOptions;
+  referenceTemperatureK: number;
+  /** The measured data after masks and exclusions were applied (for plots). */
+  dataset: Dataset;
+  /** Quantities that drove the horizontal shift. */
+  shiftQuantities: QuantityId[];
+  curves: AnalysisCurve[];
+  /** Overall RMS residual of all included isotherms against the master curve, decades. */
+  overallQualityRmsDecades: number | null;
+  masterCurve: AnalysisMasterCurve;
+  models: AnalysisModels;
+  prony: AnalysisProny | null;
+  indicators: AnalysisIndicator[];
+  warnings: AnalysisWarning[];
+}

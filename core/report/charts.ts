@@ -1,0 +1,271 @@
+/**
+ * The report's four charts, built from an Analysis: measured isotherms, master curve (with the
+ * Prony series drawn through it), shift factors against temperature with each model's 95 % band,
+ * and the van Gurp–Palmen plot (δ against |G*|, van Gurp & Palmen, Rheology Bulletin 67, 1998).
+ */
+import type { Analysis } from '../pipeline/types';
+import type { QuantityId } from '../data/types';
+import { abscissaLabel, quantitySymbol } from '../data/quantities';
+import { pronyLoss, pronyRelaxation, pronyStorage } from '../spectrum/prony-model';
+import type { ChartSeries, ChartSpec, LegendEntry } from './svg/chart-types';
+import { temperatureColour } from './svg/colour';
+import { toCelsius } from '../pipeline/temperature';
+import { outputUnitLabel, toOutputUnit, type ModulusUnit } from './output-units';
+
+const W = 640;
+const H = 380;
+
+/** The quantities plotted for this kind of test, first one solid discs, second one rings. */
+export function plottedQuantities(a: Analysis): QuantityId[] {
+  const have = new Set(
+    a.dataset.isotherms.flatMap((i) => Object.keys(i.quantities) as QuantityId[]),
+  );
+  const wanted: QuantityId[] =
+    a.sample.testKind === 'oscillatory'
+      ? ['storageModulus', 'lossModulus']
+      : a.sample.testKind === 'creep'
+        ? ['creepCompliance']
+        : ['relaxationModulus'];
+  const found = wanted.filter((q) => have.has(q));
+  return found.length > 0 ? found : [...have].slice(0, 2);
+}
+
+function temperatureRange(a: Analysis): [number, number] {
+  const ts = a.dataset.isotherms.map((i) => i.temperatureK);
+  return ts.length ? [Math.min(...ts), Math.max(...ts)] : [0, 0];
+}
+
+const STYLE = [
+  { marker: 'disc', line: 'solid' },
+  { marker: 'ring', line: 'dashed' },
+] as const;
+
+function quantityLegend(a: Analysis, qs: QuantityId[], unit: ModulusUnit): LegendEntry[] {
+  return qs.map((q, k) => ({
+    name: `${quantitySymbol(q, a.sample.deformation)} (${outputUnitLabel(q, unit)})`,
+    colour: '#444',
+    ...STYLE[k % 2],
+  }));
+}
+
+function yLabel(a: Analysis, qs: QuantityId[], unit: ModulusUnit, reduced: boolean): string {
+  const sym = qs.map((q) => quantitySymbol(q, a.sample.deformation)).join(', ');
+  const u = qs.length ? outputUnitLabel(qs[0], unit) : '';
+  return `${reduced ? 'reduced ' : ''}${sym}${u ? ` (${u})` : ''}`;
+}
+
+export function isothermsChart(a: Analysis, unit: ModulusUnit): ChartSpec {
+  const qs = plottedQuantities(a);
+  const [lo, hi] = temperatureRange(a);
+  const series: ChartSeries[] = [];
+  for (const iso of a.dataset.isotherms) {
+    const colour = temperatureColour(iso.temperatureK, lo, hi);
+    qs.forEach((q, k) => {
+      const v = iso.quantities[q];
+      if (!v) return;
+      const idx = iso.x.map((_, i) => i).filter((i) => iso.mask[i]);
+      series.push({
+        name: `${toCelsius(iso.temperatureK)} °C ${q}`,
+        x: idx.map((i) => iso.x[i]),
+        y: idx.map((i) => toOutputUnit(q, v[i], unit)),
+        colour,
+        ...STYLE[k % 2],
+      });
+    });
+  }
+  return {
+    id: 'chart-isotherms',
+    title: 'Measured isotherms',
+    width: W,
+    height: H,
+    x: { kind: 'log', label: abscissaLabel(a.sample.abscissa) },
+    y: { kind: 'log', label: yLabel(a, qs, unit, false) },
+    series,
+    legend: quantityLegend(a, qs, unit),
+    colourBar: { minC: toCelsius(lo), maxC: toCelsius(hi) },
+  };
+}
+
+export function masterCurveChart(a: Analysis, unit: ModulusUnit): ChartSpec {
+  const qs = plottedQuantities(a);
+  const [lo, hi] = temperatureRange(a);
+  const mc = a.masterCurve;
+  const series: ChartSeries[] = [];
+  const ids = [...new Set(mc.isothermId)];
+  for (const id of ids) {
+    const idx = mc.isothermId.map((v, i) => (v === id ? i : -1)).filter((i) => i >= 0);
+    const colour = temperatureColour(mc.temperatureK[idx[0]], lo, hi);
+    qs.forEach((q, k) => {
+      const v = mc.quantities[q];
+      if (!v) return;
+      series.push({
+        name: `${id} ${q}`,
+        x: idx.map((i) => mc.reducedX[i]),
+        y: idx.map((i) => {
+          const value = v[i];
+          return value === null ? Number.NaN : toOutputUnit(q, value, unit);
+        }),
+        colour,
+        marker: STYLE[k % 2].marker,
+        line: 'none',
+      });
+    });
+  }
+  const legend: LegendEntry[] = quantityLegend(a, qs, unit).map((e) => ({ ...e, line: 'none' }));
+  if (a.prony && mc.reducedX.length > 1) {
+    const p = {
+      equilibriumModulusPa: a.prony.equilibriumModulusPa,
+      tauS: a.prony.tauS,
+      modulusPa: a.prony.modulusPa,
+    };
+    const xmin = Math.min(...mc.reducedX);
+    const xmax = Math.max(...mc.reducedX);
+    const n = 120;
+    const grid = Array.from({ length: n }, (_, i) => xmin * (xmax / xmin) ** (i / (n - 1)));
+    const curves: [QuantityId, (x: number) => number][] =
+      a.sample.abscissa === 'angularFrequency'
+        ? [
+            ['storageModulus', (w) => pronyStorage(p, w)],
+            ['lossModulus', (w) => pronyLoss(p, w)],
+          ]
+        : [['relaxationModulus', (t) => pronyRelaxation(p, t)]];
+    for (const [q, f] of curves.filter(([q]) => qs.includes(q)))
+      series.push({
+        name: `Prony ${q}`,
+        x: grid,
+        y: grid.map((x) => toOutputUnit(q, f(x), unit)),
+        colour: '#111',
+        line: 'solid',
+        marker: 'none',
+      });
+    legend.push({ name: 'Prony series', colour: '#111', marker: 'none', line: 'solid' });
+  }
+  const xLabel =
+    a.sample.abscissa === 'angularFrequency'
+      ? 'reduced frequency aT·ω (rad/s)'
+      : 'reduced time t/aT (s)';
+  return {
+    id: 'chart-master',
+    title: `Master curve at ${toCelsius(a.referenceTemperatureK)} °C`,
+    width: W,
+    height: H,
+    x: { kind: 'log', label: xLabel },
+    y: { kind: 'log', label: yLabel(a, qs, unit, true) },
+    series,
+    legend,
+    colourBar: { minC: toCelsius(lo), maxC: toCelsius(hi) },
+  };
+}
+
+const MODEL_STYLE = {
+  wlf: { colour: '#1d1d1d', line: 'solid', name: 'WLF' },
+  arrhenius: { colour: '#8a4f00', line: 'dashed', name: 'Arrhenius' },
+  polynomial: { colour: '#5a3d8a', line: 'dashed', name: 'polynomial' },
+} as const;
+
+export function shiftFactorChart(a: Analysis): ChartSpec {
+  const [lo, hi] = temperatureRange(a);
+  const series: ChartSeries[] = [];
+  const bands: NonNullable<ChartSpec['bands']> = [];
+  const legend: LegendEntry[] = [
+    { name: 'fitted log10 aT ± s.e.', colour: '#444', marker: 'disc', line: 'none' },
+  ];
+  for (const kind of ['wlf', 'arrhenius', 'polynomial'] as const) {
+    const m = a.models[kind];
+    if (!m) continue;
+    const st = MODEL_STYLE[kind];
+    const xC = m.band.temperatureK.map(toCelsius);
+    bands.push({
+      name: `${st.name} 95 %`,
+      x: xC,
+      lower: m.band.lower95,
+      upper: m.band.upper95,
+      colour: st.colour,
+    });
+    series.push({
+      name: st.name,
+      x: xC,
+      y: m.band.log10aT,
+      colour: st.colour,
+      line: st.line,
+      marker: 'none',
+    });
+    legend.push({ name: `${st.name} ± 95 %`, colour: st.colour, marker: 'none', line: st.line });
+  }
+  for (const c of a.curves) {
+    if (c.log10aT === null) continue;
+    series.push({
+      name: c.isothermId,
+      x: [toCelsius(c.temperatureK)],
+      y: [c.log10aT],
+      yError: [c.log10aTStdErr],
+      colour: c.included ? temperatureColour(c.temperatureK, lo, hi) : '#999',
+      line: 'none',
+      marker: c.included ? 'disc' : 'ring',
+    });
+  }
+  return {
+    id: 'chart-shift',
+    title: 'Shift factors against temperature',
+    width: W,
+    height: H,
+    x: { kind: 'linear', label: 'temperature (°C)' },
+    y: {
+      kind: 'linear',
+      label: `log10 aT (decades; Tref = ${toCelsius(a.referenceTemperatureK)} °C)`,
+    },
+    series,
+    bands,
+    legend,
+    colourBar: { minC: toCelsius(lo), maxC: toCelsius(hi) },
+  };
+}
+
+/** δ (degrees) against |G*| (bT-reduced when a vertical shift applies); null for non-oscillatory data. */
+export function vanGurpPalmenChart(a: Analysis, unit: ModulusUnit): ChartSpec | null {
+  if (a.sample.testKind !== 'oscillatory') return null;
+  const [lo, hi] = temperatureRange(a);
+  const bT = new Map(a.curves.map((c) => [c.isothermId, 10 ** (c.log10bT ?? 0)]));
+  const series: ChartSeries[] = [];
+  for (const iso of a.dataset.isotherms) {
+    const gp = iso.quantities.storageModulus;
+    const gpp = iso.quantities.lossModulus;
+    const gStar = iso.quantities.complexModulus;
+    const delta = iso.quantities.phaseAngle;
+    const x: number[] = [];
+    const y: number[] = [];
+    const b = bT.get(iso.id) ?? 1;
+    iso.x.forEach((_, i) => {
+      if (!iso.mask[i]) return;
+      const g = gp && gpp ? Math.hypot(gp[i], gpp[i]) : gStar?.[i];
+      const d = gp && gpp ? (Math.atan2(gpp[i], gp[i]) * 180) / Math.PI : delta?.[i];
+      if (g === undefined || d === undefined || !Number.isFinite(g) || !Number.isFinite(d)) return;
+      x.push(toOutputUnit('complexModulus', b * g, unit));
+      y.push(d);
+    });
+    if (x.length)
+      series.push({
+        name: iso.id,
+        x,
+        y,
+        colour: temperatureColour(iso.temperatureK, lo, hi),
+        line: 'none',
+        marker: 'disc',
+      });
+  }
+  if (series.length === 0) return null;
+  const sym = quantitySymbol('complexModulus', a.sample.deformation);
+  return {
+    id: 'chart-vgp',
+    title: 'van Gurp–Palmen plot',
+    width: W,
+    height: H,
+    x: {
+      kind: 'log',
+      label: `${a.settings.verticalShift === 'none' ? '' : 'bT·'}${sym} (${unit})`,
+    },
+    y: { kind: 'linear', label: 'phase angle δ (°)', domain: [0, 90] },
+    series,
+    colourBar: { minC: toCelsius(lo), maxC: toCelsius(hi) },
+  };
+}

@@ -1,0 +1,51 @@
+/** The master curve at Tref as CSV: reduced abscissa, reduced quantities, each point's source. */
+import type { Analysis } from '../../pipeline/types';
+import type { QuantityId } from '../../data/types';
+import { QUANTITY_IDS } from '../../data/types';
+import { conventionCommentLines } from '../../pipeline/conventions';
+import { toCelsius } from '../../pipeline/temperature';
+import { csvDocument, csvNumber } from './csv-format';
+import { outputUnitLabel, toOutputUnit, type ModulusUnit } from '../output-units';
+
+const COLUMN_STEM: Record<QuantityId, string> = {
+  storageModulus: 'storage_modulus',
+  lossModulus: 'loss_modulus',
+  tanDelta: 'tan_delta',
+  phaseAngle: 'phase_angle',
+  complexModulus: 'complex_modulus',
+  complexViscosity: 'complex_viscosity',
+  relaxationModulus: 'relaxation_modulus',
+  creepCompliance: 'creep_compliance',
+};
+
+/** Column name of a quantity with its unit, e.g. `storage_modulus_MPa`, `phase_angle_deg`. */
+export function quantityColumn(q: QuantityId, unit: ModulusUnit): string {
+  const u = outputUnitLabel(q, unit).replace('·', '_').replace('/', 'per_').replace('°', 'deg');
+  return u ? `${COLUMN_STEM[q]}_${u}` : COLUMN_STEM[q];
+}
+
+export function masterCurveCsv(a: Analysis, unit: ModulusUnit = 'Pa'): string {
+  const mc = a.masterCurve;
+  const qs = QUANTITY_IDS.filter((q) => mc.quantities[q] !== undefined);
+  const xCol =
+    a.sample.abscissa === 'angularFrequency' ? 'reduced_frequency_rad_per_s' : 'reduced_time_s';
+  return csvDocument(
+    [
+      `Thermoshift ${a.version} master curve — sample: ${a.sample.name}`,
+      `reference temperature: ${toCelsius(a.referenceTemperatureK)} C (${a.referenceTemperatureK} K); ${a.sample.deformation}, ${a.sample.testKind}`,
+      `${xCol}: ${a.sample.abscissa === 'angularFrequency' ? 'aT·ω' : 't/aT'}; quantities reduced to Tref (moduli × bT)`,
+      ...conventionCommentLines(),
+      'source_temperature_C and isotherm: where each point was measured',
+    ],
+    [xCol, ...qs.map((q) => quantityColumn(q, unit)), 'source_temperature_C', 'isotherm'],
+    mc.reducedX.map((x, i) => [
+      csvNumber(x),
+      ...qs.map((q) => {
+        const v = mc.quantities[q]?.[i];
+        return v === null || v === undefined ? '' : csvNumber(toOutputUnit(q, v, unit));
+      }),
+      csvNumber(toCelsius(mc.temperatureK[i])),
+      mc.isothermId[i],
+    ]),
+  );
+}

@@ -1,0 +1,44 @@
+/**
+ * Units for moduli in exports and reports. Inside Thermoshift everything is SI (Pa); users may
+ * want MPa in a datasheet. Compliance follows as the inverse unit, viscosity as unit·s.
+ */
+import type { QuantityId } from '../data/types';
+import { quantityUnit } from '../data/quantities';
+
+export type ModulusUnit = 'Pa' | 'kPa' | 'MPa' | 'GPa';
+export const MODULUS_UNITS: readonly ModulusUnit[] = ['Pa', 'kPa', 'MPa', 'GPa'];
+
+const FACTOR: Record<ModulusUnit, number> = { Pa: 1, kPa: 1e3, MPa: 1e6, GPa: 1e9 };
+
+/** Pascals per unit: value_in_unit = value_Pa / modulusFactor(unit). */
+export function modulusFactor(unit: ModulusUnit): number {
+  return FACTOR[unit];
+}
+
+/** Converts an SI value of quantity `q` to the chosen output unit. */
+export function toOutputUnit(q: QuantityId, valueSi: number, unit: ModulusUnit): number {
+  const f = FACTOR[unit];
+  switch (quantityUnit(q)) {
+    case 'Pa':
+    case 'Pa·s':
+      return valueSi / f;
+    case '1/Pa':
+      return valueSi * f;
+    default:
+      return valueSi;
+  }
+}
+
+/** The label of quantity `q`'s unit in the output unit system ('' for dimensionless). */
+export function outputUnitLabel(q: QuantityId, unit: ModulusUnit): string {
+  switch (quantityUnit(q)) {
+    case 'Pa':
+      return unit;
+    case 'Pa·s':
+      return `${unit}·s`;
+    case '1/Pa':
+      return `1/${unit}`;
+    default:
+      return quantityUnit(q);
+  }
+}

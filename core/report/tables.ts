@@ -1,0 +1,237 @@
+/**
+ * The report's tables: shift factors, model constants, Prony terms, indicators and settings.
+ * Every table that holds shift factors states the sign and bT conventions under it.
+ */
+import type { Analysis } from '../pipeline/types';
+import { CONVENTIONS } from '../pipeline/conventions';
+import { toCelsius } from '../pipeline/temperature';
+import { formatFixed, formatNumber } from './format';
+import type { TableSpec } from './html-table';
+import { modulusFactor, type ModulusUnit } from './output-units';
+
+const CONVENTION_NOTE = `Conventions: ${CONVENTIONS.horizontal}. ${CONVENTIONS.vertical}.`;
+
+export function shiftTable(a: Analysis): TableSpec {
+  return {
+    id: 'table-shift',
+    caption: `Shift factors (Tref = ${toCelsius(a.referenceTemperatureK)} °C)`,
+    head: [
+      'isotherm',
+      'T (°C)',
+      'log10 aT',
+      '± s.e.',
+      'log10 bT',
+      '± s.e.',
+      'RMS residual (dec.)',
+      'included',
+      'note',
+    ],
+    numeric: [1, 2, 3, 4, 5, 6],
+    rows: a.curves.map((c) => [
+      c.isothermId,
+      formatFixed(toCelsius(c.temperatureK), 2),
+      formatFixed(c.log10aT, 3),
+      formatFixed(c.log10aTStdErr, 3),
+      formatFixed(c.log10bT, 4),
+      formatFixed(c.log10bTStdErr, 4),
+      formatFixed(c.qualityRmsDecades, 3),
+      c.included ? 'yes' : 'no',
+      c.note ?? '',
+    ]),
+    rowClass: a.curves.map((c) => (c.included ? undefined : 'excluded')),
+    note: `${CONVENTION_NOTE} Overall RMS residual against the master curve: ${formatFixed(a.overallQualityRmsDecades, 3)} decades.`,
+  };
+}
+
+const ci = (v: [number, number] | null | undefined, d = 4): string =>
+  v ? `${formatNumber(v[0], d)} … ${formatNumber(v[1], d)}` : '–';
+
+export function modelTable(a: Analysis): TableSpec | null {
+  const { wlf, arrhenius, polynomial } = a.models;
+  const rows: string[][] = [];
+  const fit = (m: {
+    r2: number | null;
+    rmsResidualDecades: number | null;
+    fittedRangeK: [number, number];
+  }): string[] => [
+    formatFixed(m.r2, 4),
+    formatFixed(m.rmsResidualDecades, 3),
+    `${formatFixed(toCelsius(m.fittedRangeK[0]), 1)} … ${formatFixed(toCelsius(m.fittedRangeK[1]), 1)}`,
+  ];
+  if (wlf) {
+    const tr = formatFixed(toCelsius(wlf.referenceK), 2);
+    rows.push([
+      'WLF',
+      'C1',
+      formatNumber(wlf.c1),
+      formatNumber(wlf.c1StdErr, 2),
+      ci(wlf.c1Ci95),
+      '',
+      `Tr = ${tr} °C`,
+      ...fit(wlf),
+    ]);
+    rows.push([
+      'WLF',
+      'C2',
+      formatNumber(wlf.c2K),
+      formatNumber(wlf.c2KStdErr, 2),
+      ci(wlf.c2KCi95),
+      'K',
+      '',
+      '',
+      '',
+      '',
+    ]);
+    if (wlf.atGlassTransition)
+      rows.push([
+        'WLF at Tg',
+        'C1g / C2g',
+        `${formatNumber(wlf.atGlassTransition.c1)} / ${formatNumber(wlf.atGlassTransition.c2K)}`,
+        '',
+        '',
+        '– / K',
+        `Tg = ${formatFixed(toCelsius(wlf.atGlassTransition.referenceK), 2)} °C`,
+        '',
+        '',
+        '',
+      ]);
+    if (wlf.apparentActivationEnergyKJPerMol != null)
+      rows.push([
+        'WLF',
+        'apparent Ea at Tr',
+        formatNumber(wlf.apparentActivationEnergyKJPerMol),
+        '',
+        '',
+        'kJ/mol',
+        '',
+        '',
+        '',
+        '',
+      ]);
+  }
+  if (arrhenius)
+    rows.push([
+      'Arrhenius',
+      'Ea',
+      formatNumber(arrhenius.activationEnergyKJPerMol),
+      formatNumber(arrhenius.activationEnergyKJPerMolStdErr, 2),
+      ci(arrhenius.activationEnergyKJPerMolCi95),
+      'kJ/mol',
+      `Tr = ${formatFixed(toCelsius(arrhenius.referenceK), 2)} °C`,
+      ...fit(arrhenius),
+    ]);
+  if (polynomial) {
+    rows.push([
+      'polynomial',
+      'a1',
+      formatNumber(polynomial.a1PerK),
+      formatNumber(polynomial.a1PerKStdErr, 2),
+      '',
+      '1/K',
+      `Tr = ${formatFixed(toCelsius(polynomial.referenceK), 2)} °C`,
+      ...fit(polynomial),
+    ]);
+    rows.push([
+      'polynomial',
+      'a2',
+      formatNumber(polynomial.a2PerK2),
+      formatNumber(polynomial.a2PerK2StdErr, 2),
+      '',
+      '1/K²',
+      '',
+      '',
+      '',
+      '',
+    ]);
+  }
+  if (rows.length === 0) return null;
+  const hint = a.models.hint
+    ? ` Suggested model: ${a.models.hint.model} (${a.models.hint.reason}).`
+    : '';
+  return {
+    id: 'table-models',
+    caption: 'Shift-factor models (log10 aT against temperature)',
+    head: [
+      'model',
+      'constant',
+      'value',
+      'std. error',
+      '95 % interval',
+      'unit',
+      'reference',
+      'R²',
+      'RMS (dec.)',
+      'fitted range (°C)',
+    ],
+    numeric: [2, 3, 7, 8],
+    rows,
+    note:
+      'WLF: log10 aT = −C1 (T − Tr)/(C2 + T − Tr) (Williams, Landel & Ferry 1955). Arrhenius: ln aT = (Ea/R)(1/T − 1/Tr), T in K. ' +
+      'Polynomial: log10 aT = a1 (T − Tr) + a2 (T − Tr)². C1 and C2 are strongly correlated: read the predicted band in the chart rather than the constants alone. ' +
+      `Do not use a model outside its fitted range; WLF constants fitted above Tg do not hold below Tg.${hint} ${CONVENTION_NOTE}`,
+  };
+}
+
+export function pronyTable(a: Analysis, unit: ModulusUnit): TableSpec | null {
+  const p = a.prony;
+  if (!p) return null;
+  const f = modulusFactor(unit);
+  const rows = p.tauS.map((tau, i) => [
+    String(i + 1),
+    formatNumber(tau, 4),
+    formatNumber(p.modulusPa[i] / f, 4),
+    formatNumber(p.modulusPa[i] / p.instantaneousModulusPa, 4),
+  ]);
+  rows.push([
+    '∞ (equilibrium)',
+    '–',
+    formatNumber(p.equilibriumModulusPa / f, 4),
+    formatNumber(p.equilibriumModulusPa / p.instantaneousModulusPa, 4),
+  ]);
+  return {
+    id: 'table-prony',
+    caption: `Prony series at Tref = ${toCelsius(a.referenceTemperatureK)} °C (G0 = ${formatNumber(p.instantaneousModulusPa / f)} ${unit})`,
+    head: ['i', 'τ_i (s)', `g_i (${unit})`, 'g_i / G0'],
+    numeric: [1, 2, 3],
+    rows,
+    note:
+      `Generalised Maxwell model: G(t) = Ge + Σ g_i exp(−t/τ_i), G0 = Ge + Σ g_i; fitted to ${p.fittedTo.join(' and ')} with non-negative g_i, ` +
+      `${p.modesPerDecade} mode(s) per decade, RMS relative error ${p.rmsRelativeError === null ? '–' : `${formatFixed(p.rmsRelativeError * 100, 2)} %`}, ` +
+      `reduced window ${formatNumber(p.reducedWindow[0], 3)} … ${formatNumber(p.reducedWindow[1], 3)}. ` +
+      `Valid at Tref; at another temperature T use t/aT(T) with the shift model. ${CONVENTION_NOTE}`,
+  };
+}
+
+export function indicatorTable(a: Analysis): TableSpec | null {
+  if (a.indicators.length === 0) return null;
+  return {
+    id: 'table-indicators',
+    caption: 'Indicators',
+    head: ['indicator', 'value', 'unit', 'note'],
+    numeric: [1],
+    rows: a.indicators.map((i) => [i.label, formatNumber(i.value, 4), i.unit, i.note ?? '']),
+  };
+}
+
+function settingValue(v: unknown): string {
+  if (v === null || v === undefined) return '–';
+  if (Array.isArray(v))
+    return v.length === 0
+      ? '(none)'
+      : v.map((x) => (typeof x === 'object' ? JSON.stringify(x) : String(x))).join(', ');
+  if (typeof v === 'object') return Object.keys(v).length === 0 ? '(none)' : JSON.stringify(v);
+  return String(v);
+}
+
+/** Every resolved setting, so the analysis can be repeated exactly. */
+export function settingsTable(a: Analysis): TableSpec {
+  const rows = Object.entries(a.settings).map(([k, v]) => [k, settingValue(v)]);
+  rows.push(['shift quantities used', a.shiftQuantities.join(', ')]);
+  return {
+    id: 'table-settings',
+    caption: 'Settings used',
+    head: ['setting', 'value'],
+    rows,
+    note: `Reference temperature ${toCelsius(a.settings.referenceTemperatureK)} °C (${a.settings.referenceTemperatureK} K)${a.settings.referenceTemperatureAuto ? ', chosen automatically' : ''}. Temperatures in the settings are in kelvin.`,
+  };
+}

@@ -1,0 +1,45 @@
+/**
+ * Fixed wording of the report: the cautions (DOMAIN.md §6) and the method description, which is
+ * assembled from the resolved settings so it states exactly what was done.
+ */
+import type { Analysis } from '../pipeline/types';
+import { quantitySymbol } from '../data/quantities';
+import { toCelsius } from '../pipeline/temperature';
+
+export const CAUTIONS: readonly string[] = [
+  'Extrapolation: values outside the measured window of reduced frequency or time, or outside the temperature range the shift model was fitted to, are extrapolations and only estimates. WLF constants fitted above Tg do not hold below Tg.',
+  'Validity of superposition: time–temperature superposition holds only for thermorheologically simple materials. Blends, block copolymers, semicrystalline polymers near melting, filled rubbers beyond small strain and samples out of thermal equilibrium often violate it. The checks in this report can miss a failure; a missing warning is not proof.',
+  'Linear range: a master curve describes linear viscoelastic behaviour only; the data must come from within the linear viscoelastic range of the material.',
+  'Confirm by testing: use these results as engineering estimates. Confirm critical values by tests on the actual material and follow the applicable codes, standards and licensed engineering practice.',
+];
+
+export function methodParagraphs(a: Analysis): string[] {
+  const s = a.settings;
+  const sym = (q: Parameters<typeof quantitySymbol>[0]): string =>
+    quantitySymbol(q, a.sample.deformation);
+  const vertical =
+    s.verticalShift === 'none'
+      ? 'No vertical shift was applied (bT = 1).'
+      : s.verticalShift === 'density'
+        ? `The vertical shift is the entropic estimate bT = Tref·ρref/(T·ρ(T)) (Ferry 1980) with ρref = ${s.density?.referenceDensityKgPerM3} kg/m³ and αV = ${s.density?.volumetricExpansionPerK} 1/K.`
+        : 'The vertical shift bT was estimated from the data. Fitting aT and bT together weakens the physical meaning of both; treat large or erratic bT as a sign that superposition fails.';
+  const xName = a.sample.abscissa === 'angularFrequency' ? 'log ω' : 'log t';
+  const paragraphs = [
+    `${a.dataset.isotherms.length} isotherms (${a.sample.testKind}, ${a.sample.deformation}) were shifted to the reference temperature ${toCelsius(a.referenceTemperatureK)} °C${s.referenceTemperatureAuto ? ' (chosen automatically: the measured temperature nearest the middle of the range)' : ''}. ` +
+      `Horizontal shift factors were found by a global fit of all overlapping pairs of isotherms at once in ${xName}–log space, driven by ${a.shiftQuantities.map(sym).join(' and ')}, with a robust loss against outlying points; each log10 aT has a standard error and each isotherm an RMS residual against the master curve.`,
+    vertical,
+  ];
+  if (s.excludedIsothermIds.length || s.maskedPoints.length)
+    paragraphs.push(
+      `Left out by the user: ${s.excludedIsothermIds.length} isotherm(s) (${s.excludedIsothermIds.join(', ') || 'none'}) and ${s.maskedPoints.length} point(s).`,
+    );
+  if (s.models.length)
+    paragraphs.push(
+      `Shift-factor models (${s.models.join(', ')}) were fitted to log10 aT against temperature, weighted by the standard errors of the shifts; the bands are 95 % confidence bands of the predicted log10 aT.`,
+    );
+  if (a.prony)
+    paragraphs.push(
+      `A Prony series (generalised Maxwell model) with ${a.prony.modesPerDecade} relaxation time(s) per decade across the reduced window was fitted to the master curve by non-negative least squares on relative residuals.`,
+    );
+  return paragraphs;
+}
