@@ -136,7 +136,9 @@ function rampDma(): DemoScenario {
       'stepped heating ramp from 0 to 60 °C in 4 K steps. The temperature creeps upward while ' +
       'the four frequencies are measured, so each step spreads over about half a kelvin: the ' +
       'importer regroups the rows into isotherms. Each isotherm spans only one decade of ' +
-      'frequency, so neighbouring steps overlap by less than a decade.',
+      'frequency, so neighbouring steps overlap by less than a decade, and the rows of one step ' +
+      'are not quite isothermal: expect shifts recovered from the step means to be less accurate ' +
+      'than for the other samples (the truth is given at each step’s mean temperature).',
     layout: 'ramp',
     testKind: 'oscillatory',
     deformation: 'tension',
