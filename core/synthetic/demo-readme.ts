@@ -91,7 +91,7 @@ export function demoScenarioReadme(s: DemoScenario, t: DemoTruth): string {
     `- Shift law: ${lawText(t)}. Conventions: ${t.conventions.horizontal}.`,
     `- Vertical shift: ${verticalText(t)}. Convention: ${t.conventions.vertical}.`,
     `- Prony series at Tref: ${p.modes.length} modes, τ from ${sci(taus[0])} to ` +
-      `${sci(taus[taus.length - 1])} s, equilibrium modulus ${p.equilibriumModulusPa} Pa` +
+      `${sci(taus[taus.length - 1])} s, equilibrium modulus ${sci(p.equilibriumModulusPa)} Pa` +
       (p.zeroShearViscosityPaS === null
         ? '.'
         : `, zero-shear viscosity ${p.zeroShearViscosityPaS.toPrecision(4)} Pa·s.`),
