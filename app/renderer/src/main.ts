@@ -1,4 +1,5 @@
 import { createApp } from 'vue';
 import App from './App.vue';
+import './styles/base.css';
 
 createApp(App).mount('#app');

@@ -1,0 +1,136 @@
+/**
+ * Chart.js configuration from a PlotSpec: scatter datasets per series, filled bands between two
+ * invisible lines, log axes with decade ticks, no animation (plots follow drags frame by frame).
+ */
+import type { ChartConfiguration, ChartDataset, Plugin, Scale } from 'chart.js';
+import { decadeTicks } from './decade-ticks';
+import type { PlotSeries, PlotSpec, PlotWindow } from './plot-spec';
+import { withAlpha } from './temperature-colours';
+
+export type PlotChartConfig = ChartConfiguration<'scatter', { x: number; y: number }[]>;
+
+/** Index of the series behind each Chart.js dataset (-1 for band edges). */
+export interface DatasetMap {
+  seriesIndex: number[];
+}
+
+const INK = '#2b3338';
+const GRID = '#e3e6e1';
+
+/** Paints the canvas white first, so a PNG export is not transparent. */
+export const whiteBackground: Plugin<'scatter'> = {
+  id: 'thermoshiftWhiteBackground',
+  beforeDraw(chart) {
+    const { ctx, width, height } = chart;
+    ctx.save();
+    ctx.globalCompositeOperation = 'destination-over';
+    ctx.fillStyle = '#ffffff';
+    ctx.fillRect(0, 0, width, height);
+    ctx.restore();
+  },
+};
+
+function seriesDataset(
+  s: PlotSeries,
+  shiftDecades: number,
+): ChartDataset<'scatter', { x: number; y: number }[]> {
+  const factor = 10 ** shiftDecades;
+  const colour = s.faint ? withAlpha(s.colour, 0.3) : s.colour;
+  const line = s.style === 'line' || s.style === 'dashed';
+  return {
+    label: s.label,
+    data: s.points.map((p) => ({ x: p.x * factor, y: p.y })),
+    showLine: line,
+    borderColor: colour,
+    borderWidth: line ? 2 : 1.2,
+    borderDash: s.style === 'dashed' ? [6, 4] : [],
+    backgroundColor: s.style === 'disc' ? colour : 'rgba(255,255,255,0.9)',
+    pointRadius: line ? 0 : s.faint ? 2.5 : 3.2,
+    pointHoverRadius: line ? 0 : 5,
+    pointHitRadius: line ? 0 : 5,
+    pointBorderColor: colour,
+  };
+}
+
+function axisOptions(kind: 'log' | 'linear', label: string, min?: number, max?: number) {
+  return {
+    type: kind === 'log' ? ('logarithmic' as const) : ('linear' as const),
+    min,
+    max,
+    title: { display: true, text: label, color: INK, font: { size: 12 } },
+    grid: { color: GRID },
+    border: { color: '#9aa3a0' },
+    ticks: { color: INK, autoSkip: kind !== 'log', maxRotation: 0 },
+    afterBuildTicks:
+      kind === 'log'
+        ? (scale: Scale) => {
+            scale.ticks = decadeTicks(scale.min, scale.max).map((t) => ({
+              value: t.value,
+              label: t.label,
+              major: t.major,
+            }));
+          }
+        : undefined,
+  };
+}
+
+/**
+ * @param shift optional live shift of one isotherm's series while it is being dragged (decades).
+ */
+export function plotChartConfig(
+  spec: PlotSpec,
+  view: PlotWindow | undefined,
+  shift?: { isothermId: string; decades: number },
+): { config: PlotChartConfig; map: DatasetMap } {
+  const datasets: ChartDataset<'scatter', { x: number; y: number }[]>[] = [];
+  const seriesIndex: number[] = [];
+  for (const b of spec.bands) {
+    datasets.push(
+      {
+        label: `${b.label} (lower)`,
+        data: b.x.map((x, i) => ({ x, y: b.lower[i] })),
+        showLine: true,
+        pointRadius: 0,
+        pointHitRadius: 0,
+        borderWidth: 0,
+        borderColor: 'transparent',
+      },
+      {
+        label: b.label,
+        data: b.x.map((x, i) => ({ x, y: b.upper[i] })),
+        showLine: true,
+        pointRadius: 0,
+        pointHitRadius: 0,
+        borderWidth: 0,
+        borderColor: 'transparent',
+        backgroundColor: withAlpha(b.colour, 0.2),
+        fill: '-1',
+      },
+    );
+    seriesIndex.push(-1, -1);
+  }
+  spec.series.forEach((s, i) => {
+    const d = shift && s.isothermId === shift.isothermId ? shift.decades : 0;
+    datasets.push(seriesDataset(s, d));
+    seriesIndex.push(i);
+  });
+  const config: PlotChartConfig = {
+    type: 'scatter',
+    data: { datasets },
+    options: {
+      animation: false,
+      responsive: true,
+      maintainAspectRatio: false,
+      normalized: true,
+      events: ['mousemove', 'mouseout'],
+      layout: { padding: { top: 8, right: 14, bottom: 4, left: 4 } },
+      scales: {
+        x: axisOptions(spec.x.kind, spec.x.label, view?.xMin, view?.xMax),
+        y: axisOptions(spec.y.kind, spec.y.label, view?.yMin, view?.yMax),
+      },
+      plugins: { tooltip: { enabled: false }, legend: { display: false } },
+    },
+    plugins: [whiteBackground],
+  };
+  return { config, map: { seriesIndex } };
+}

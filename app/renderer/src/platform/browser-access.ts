@@ -1,0 +1,123 @@
+/**
+ * FileAccess for the plain browser: an <input type="file"> to open, a Blob link to download,
+ * IndexedDB for recent files (their text is kept, since a web page cannot reopen a path) and
+ * localStorage for the autosave (IndexedDB when it is too large for localStorage).
+ */
+import type { FileAccess, RecentEntry, TextFile } from './file-access';
+import { readFiles } from './file-access';
+import type { KeyValueStore } from './idb-store';
+
+export const AUTOSAVE_KEY = 'thermoshift.autosave';
+export const MAX_RECENT = 8;
+
+interface StoredRecent extends RecentEntry {
+  files: TextFile[];
+}
+
+/** Opens the browser's file picker; resolves [] when the user cancels. */
+export function pickFiles(accept: string, multiple: boolean): Promise<TextFile[]> {
+  return new Promise((resolve) => {
+    const input = document.createElement('input');
+    input.type = 'file';
+    input.accept = accept;
+    input.multiple = multiple;
+    input.style.display = 'none';
+    input.dataset.role = multiple ? 'pick-data-files' : 'pick-analysis';
+    const done = (files: TextFile[]): void => {
+      input.remove();
+      resolve(files);
+    };
+    input.addEventListener('change', () => void readFiles(input.files ?? []).then(done));
+    input.addEventListener('cancel', () => done([]));
+    document.body.append(input);
+    input.click();
+  });
+}
+
+/** Starts a download of `content` under `name`. */
+export function downloadBlob(name: string, content: string, encoding: 'utf8' | 'base64'): void {
+  const bytes =
+    encoding === 'base64' ? Uint8Array.from(atob(content), (c) => c.charCodeAt(0)) : content;
+  const type = encoding === 'base64' ? 'image/png' : 'text/plain;charset=utf-8';
+  const url = URL.createObjectURL(new Blob([bytes], { type }));
+  const a = document.createElement('a');
+  a.href = url;
+  a.download = name;
+  a.style.display = 'none';
+  document.body.append(a);
+  a.click();
+  a.remove();
+  setTimeout(() => URL.revokeObjectURL(url), 10_000);
+}
+
+function label(files: TextFile[]): string {
+  return files.length > 1 ? `${files[0].name} + ${files.length - 1} more` : (files[0]?.name ?? '');
+}
+
+export function browserAccess(store: KeyValueStore, storage: Storage | null): FileAccess {
+  const loadRecent = async (): Promise<StoredRecent[]> =>
+    (await store.get<StoredRecent[]>('recent').catch(() => undefined)) ?? [];
+  const remember = async (kind: RecentEntry['kind'], files: TextFile[]): Promise<void> => {
+    if (files.length === 0) return;
+    const key = label(files);
+    const rest = (await loadRecent()).filter((e) => !(e.label === key && e.kind === kind));
+    const entry: StoredRecent = {
+      id: `r${Date.now().toString(36)}${Math.floor(Math.random() * 1e6).toString(36)}`,
+      kind,
+      label: key,
+      openedAt: new Date().toISOString(),
+      files,
+    };
+    await store.set('recent', [entry, ...rest].slice(0, MAX_RECENT)).catch(() => undefined);
+  };
+  return {
+    kind: 'browser',
+    async openDataFiles() {
+      const files = await pickFiles('.csv,.txt,.tsv,.dat,.asc,text/*', true);
+      await remember('data', files);
+      return files;
+    },
+    async openAnalysis() {
+      const [file] = await pickFiles('.json,application/json', false);
+      if (file) await remember('analysis', [file]);
+      return file ?? null;
+    },
+    async saveFile({ suggestedName, content, encoding }) {
+      downloadBlob(suggestedName, content, encoding);
+      return suggestedName;
+    },
+    async saveAnalysis(name, text) {
+      downloadBlob(name, text, 'utf8');
+      return name;
+    },
+    async listRecent() {
+      return (await loadRecent()).map(({ id, kind, label: l, openedAt }) => ({
+        id,
+        kind,
+        label: l,
+        openedAt,
+      }));
+    },
+    async openRecent(id) {
+      const e = (await loadRecent()).find((x) => x.id === id);
+      if (!e) throw new Error('That recent file is no longer in the list.');
+      await remember(e.kind, e.files);
+      return { kind: e.kind, files: e.files };
+    },
+    rememberRecent: remember,
+    async writeAutosave(text) {
+      try {
+        storage?.setItem(AUTOSAVE_KEY, text);
+        await store.set(AUTOSAVE_KEY, null).catch(() => undefined);
+      } catch {
+        // localStorage is full (a few MB): keep the autosave in IndexedDB instead.
+        storage?.removeItem(AUTOSAVE_KEY);
+        await store.set(AUTOSAVE_KEY, text);
+      }
+    },
+    async readAutosave() {
+      const big = await store.get<string | null>(AUTOSAVE_KEY).catch(() => undefined);
+      return big ?? storage?.getItem(AUTOSAVE_KEY) ?? null;
+    },
+  };
+}
