@@ -63,7 +63,8 @@ export function demoScenarioReadme(s: DemoScenario, t: DemoTruth): string {
             .map((i) => `${i.lowTorquePointIndices.length} point(s) at ${i.setPointC} °C`)
             .join(', ') + '.')
     : '';
-  const sci = (x: number): string => (x < 1e-3 || x >= 1e4 ? x.toExponential(2) : x.toPrecision(3));
+  const sci = (x: number): string =>
+    x === 0 ? '0' : x < 1e-3 || x >= 1e4 ? x.toExponential(2) : x.toPrecision(3);
   return [
     `# ${s.product} — ${s.firm} (invented demo data)`,
     '',
