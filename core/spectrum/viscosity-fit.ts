@@ -27,6 +27,8 @@ export interface ViscosityFitResult extends FitStatus {
   transition: number;
   /** RMS of log10(model/measured), decades. */
   rmsLog10: number;
+  /** |η*| at the lowest frequency, Pa·s: a model-free lower bound for η0 of a melt. */
+  lowestFrequencyViscosityPaS: number;
   /** True when the lowest frequency's |η*| is below 90 % of η0: η0 lies beyond the data. */
   extrapolated: boolean;
   /** The Cox–Merz note to show with the result. */
@@ -44,11 +46,15 @@ function evaluate(model: ViscosityModel, p: number[], lw: number): number {
   return logEta0 + ((e - 1) / aRaw) * Math.log10(1 + x ** aRaw);
 }
 
-/** Fits the reduced |η*|(ω_r) curve (Pa·s against rad/s) with a Cross or Carreau–Yasuda law. */
+/**
+ * Fits the reduced |η*|(ω_r) curve (Pa·s against rad/s) with a Cross or Carreau–Yasuda law.
+ * Carreau–Yasuda is the default: its extra transition parameter follows broad transitions that
+ * make the Cross form overshoot η0 by several per cent (see the tests).
+ */
 export function fitViscosityCurve(
   omegaRadPerS: ArrayLike<number>,
   complexViscosityPaS: ArrayLike<number>,
-  model: ViscosityModel = 'cross',
+  model: ViscosityModel = 'carreau-yasuda',
 ): ViscosityFitResult {
   if (omegaRadPerS.length !== complexViscosityPaS.length) {
     throw new RangeError('omegaRadPerS and complexViscosityPaS must have the same length');
@@ -111,6 +117,7 @@ export function fitViscosityCurve(
     exponent: p[2],
     transition: model === 'cross' ? NaN : p[3],
     rmsLog10: Math.sqrt(res.reduce((s, r) => s + r * r, 0) / res.length),
+    lowestFrequencyViscosityPaS: lowest,
     extrapolated: lowest < 0.9 * zero,
     note: COX_MERZ,
     warnings,

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { levenbergMarquardtFit } from '../../../core/models/levenberg-marquardt-fit';
+import { weightedLinearFit } from '../../../core/models/weighted-linear-fit';
 import { expectAbsClose, expectRelClose } from '../../helpers/assert-close';
 
 /** Closed-form weighted straight line (any statistics text, e.g. Bevington & Robinson 2003, §6.3). */
@@ -39,6 +40,32 @@ describe('levenbergMarquardtFit()', () => {
     expectAbsClose(fit.params[0], a, 1e-8, 'intercept'); // iterative vs closed form, rounding only
     expectAbsClose(fit.params[1], b, 1e-8, 'slope');
     expect(Math.abs(fit.params[0] - a1)).toBeGreaterThan(1e-3);
+  });
+
+  it('levenbergMarquardtFit() covariance equals the closed-form (XᵀWX)⁻¹·s² of a weighted line', () => {
+    const x = [0, 1, 2, 3, 4, 5];
+    const y = [0.1, 1.2, 1.9, 3.2, 3.9, 6.0];
+    const w = [1, 1, 1, 1, 1, 10];
+    const fit = levenbergMarquardtFit({
+      x,
+      y,
+      weights: w,
+      model:
+        ([p, q]) =>
+        (t) =>
+          p + q * t,
+      initial: [0, 0],
+    });
+    const lin = weightedLinearFit(
+      x.map((t) => [1, t]),
+      y,
+      w,
+    );
+    const s2 = lin.weightedSumSquares / (x.length - 2);
+    for (let a = 0; a < 2; a++) {
+      for (let b = 0; b < 2; b++)
+        expectRelClose(fit.covariance[a][b], lin.unscaledCovariance[a][b] * s2, 1e-6); // finite-difference Jacobian
+    }
   });
 
   it('levenbergMarquardtFit() recovers an exponential decay from exact data', () => {
