@@ -39,9 +39,10 @@ function stats(fit: ShiftFitCommon, ids: Map<number, string>): ModelFitStats {
     converged: fit.converged,
     band: {
       temperatureK: grid,
-      log10aT: band.map((b) => b.log10aT),
-      lower95: band.map((b) => b.lower95),
-      upper95: band.map((b) => b.upper95),
+      // `+ 0` turns −0 into 0, so the analysis survives a JSON round trip unchanged
+      log10aT: band.map((b) => b.log10aT + 0),
+      lower95: band.map((b) => b.lower95 + 0),
+      upper95: band.map((b) => b.upper95 + 0),
     },
   };
 }

@@ -44,9 +44,10 @@ export function runShift(
     return {
       isothermId: c.id,
       temperatureK: c.temperatureK,
-      log10aT: c.log10aT,
+      // `+ 0` turns −0 (the reference isotherm) into 0: JSON has no −0
+      log10aT: c.log10aT === null ? null : c.log10aT + 0,
       log10aTStdErr: c.log10aTStdErr,
-      log10bT: c.log10bT,
+      log10bT: c.log10bT === null ? null : c.log10bT + 0,
       log10bTStdErr: c.log10bTStdErr,
       included: c.included,
       qualityRmsDecades: c.rmsResidualDecades,

@@ -95,6 +95,9 @@ export interface AnalysisSummary {
   settings: ResolvedAnalysisOptions & { referenceTemperature: number };
 }
 
+/** JSON has no −0: write 0 for the reference isotherm's shift. */
+const noNegativeZero = (v: number | null): number | null => (v === null ? null : v + 0);
+
 function fitStats(m: ModelFitStats): SummaryFit {
   return {
     r2: m.r2,
@@ -164,9 +167,9 @@ export function analysisSummary(analysis: Analysis): AnalysisSummary {
       isothermId: c.isothermId,
       temperature: toCelsius(c.temperatureK),
       temperatureK: c.temperatureK,
-      log10aT: c.log10aT,
+      log10aT: noNegativeZero(c.log10aT),
       log10aTStdErr: c.log10aTStdErr,
-      log10bT: c.log10bT,
+      log10bT: noNegativeZero(c.log10bT),
       log10bTStdErr: c.log10bTStdErr,
       included: c.included,
       qualityRmsDecades: c.qualityRmsDecades,
