@@ -1,0 +1,64 @@
+/**
+ * Turn a dataset into the internal FitProblem: one FitSeries per active isotherm and driver, in
+ * log space, masked points left out, fixed vertical offsets (bT from density or from a previous
+ * step) added to the ordinate.
+ */
+import type { Dataset, QuantityId } from '../data/types';
+import { alphaOf, betaOf, logOrdinate, quantityValues } from './drivers';
+import type { FitProblem, FitSeries } from './problem';
+import { buildSeries } from './series';
+import { candidatePairs } from './pairs';
+
+export interface ProblemSpec {
+  /** Dataset indices of the isotherms in the fit. */
+  active: number[];
+  drivers: QuantityId[];
+  /** Fixed log10 bT per dataset index (added as β·log10 bT), or null. */
+  fixedLog10bT: number[] | null;
+  joint: boolean;
+  minOverlapPoints: number;
+  maxPointsPerDecade: number;
+  /** Per curve (position in `active`): point indices to leave out (flagged outliers). */
+  dropped?: Set<number>[];
+  /** Abscissa per dataset index instead of iso.x (e.g. |G*| for the van Gurp–Palmen shift). */
+  abscissa?: (k: number) => ArrayLike<number>;
+  /** Ordinate per quantity and value instead of logOrdinate (e.g. δ in degrees). */
+  ordinate?: (q: QuantityId, value: number) => number;
+  /** Direction of the offset on the abscissa. @default from dataset.abscissa */
+  sigma?: 1 | -1;
+}
+
+export function buildProblem(dataset: Dataset, spec: ProblemSpec): FitProblem {
+  const curves: FitSeries[][] = spec.active.map((k, c) => {
+    const iso = dataset.isotherms[k];
+    const raw = spec.abscissa ? spec.abscissa(k) : iso.x;
+    const lx = Array.from(raw, (x) => (x > 0 ? Math.log10(x) : NaN));
+    const ordinate = spec.ordinate ?? logOrdinate;
+    const drop = spec.dropped?.[c];
+    return spec.drivers.map((q) => {
+      const values = quantityValues(q, iso.quantities) ?? [];
+      const offset = spec.fixedLog10bT ? betaOf(q) * spec.fixedLog10bT[k] : 0;
+      const xs: number[] = [];
+      const ys: number[] = [];
+      const idx: number[] = [];
+      for (let i = 0; i < iso.x.length; i++) {
+        if (!iso.mask[i] || drop?.has(i) || i >= values.length) continue;
+        xs.push(lx[i]);
+        ys.push(ordinate(q, values[i]) + offset);
+        idx.push(i);
+      }
+      return buildSeries(xs, ys, idx, spec.maxPointsPerDecade);
+    });
+  });
+  const problem: FitProblem = {
+    sigma: spec.sigma ?? (dataset.abscissa === 'time' ? -1 : 1),
+    alpha: Float64Array.from(spec.drivers, alphaOf),
+    beta: Float64Array.from(spec.drivers, betaOf),
+    joint: spec.joint,
+    curves,
+    pairs: new Int32Array(0),
+    minOverlapPoints: spec.minOverlapPoints,
+  };
+  problem.pairs = candidatePairs(problem);
+  return problem;
+}

@@ -1,0 +1,99 @@
+/**
+ * Superposition checks (DOMAIN.md §4): the van Gurp–Palmen dispersion (δ against |G*|, needs no
+ * horizontal shift; van Gurp & Palmen, Rheology Bulletin 67, 1998), the mismatch left after
+ * shifting compared with the noise inside each curve, and the disagreement between shifts found
+ * from different quantities. Each is expressed as a ratio to what noise alone would give, so the
+ * grade does not depend on how noisy the instrument is.
+ */
+import type { Dataset } from '../data/types';
+import { quantityValues } from './drivers';
+import { buildProblem } from './build-problem';
+import type { FitProblem } from './problem';
+import { allResiduals } from './residuals';
+import { noiseLevel } from './noise';
+import { StatsSink } from './stats-sink';
+import { MAD_TO_SIGMA, medianAbs } from './robust';
+import type { SuperpositionGrade } from './types';
+
+/** Mismatch below this is immaterial for a master curve whatever the noise, decades (≈ 1 %). */
+export const MISMATCH_FLOOR_DECADES = 0.005;
+/** The same for δ, degrees. */
+export const VGP_FLOOR_DEG = 0.3;
+
+/** Grade thresholds on the ratios (calibrated on the synthetic sets in tests/core/shift). */
+export const FAIR_RATIO = 1.6;
+export const POOR_RATIO = 2.5;
+/** Shifts from two quantities disagree when they differ by more than this and by > Z_LIMIT σ. */
+export const DISAGREE_DECADES = 0.1;
+export const DISAGREE_Z = 5;
+
+export function noiseOfProblem(p: FitProblem, included: Uint8Array): number {
+  const curves: { lx: Float64Array; y: Float64Array }[] = [];
+  p.curves.forEach((c, k) => {
+    if (included[k]) c.forEach((s) => curves.push(s));
+  });
+  return noiseLevel(curves);
+}
+
+export function mismatchRatio(robustSigma: number, noise: number): number | null {
+  if (!Number.isFinite(robustSigma) || !Number.isFinite(noise)) return null;
+  return robustSigma / Math.hypot(noise, MISMATCH_FLOOR_DECADES);
+}
+
+export interface VgpDispersion {
+  rmsDeg: number;
+  ratio: number;
+}
+
+/**
+ * δ (degrees) against log10(bT·|G*|) across the included isotherms, compared pairwise where their
+ * |G*| ranges overlap; no horizontal shift is involved.
+ */
+export function vanGurpPalmenDispersion(
+  dataset: Dataset,
+  active: number[],
+  included: Uint8Array,
+  log10bT: (k: number) => number,
+  minOverlapPoints: number,
+): VgpDispersion | null {
+  const use = active.filter((_, c) => included[c]);
+  const q0 = dataset.isotherms[0]?.quantities ?? {};
+  if (use.length < 2 || !quantityValues('phaseAngle', q0) || !quantityValues('complexModulus', q0))
+    return null;
+  const p = buildProblem(dataset, {
+    active: use,
+    drivers: ['phaseAngle'],
+    fixedLog10bT: null,
+    joint: false,
+    minOverlapPoints,
+    maxPointsPerDecade: 40,
+    abscissa: (k) => quantityValues('complexModulus', dataset.isotherms[k].quantities) ?? [],
+    ordinate: (_q, v) => (v > 0 && v < 90 ? v : NaN),
+    sigma: 1,
+  });
+  const theta = Float64Array.from(use, (k) => log10bT(k));
+  const stats = new StatsSink(p);
+  allResiduals(p, theta, stats);
+  if (stats.residuals.length === 0) return null;
+  const rmsDeg = stats.rms();
+  const robust = MAD_TO_SIGMA * medianAbs(stats.residuals);
+  const noise = noiseLevel(p.curves.map((c) => c[0]));
+  const ratio = robust / Math.hypot(Number.isFinite(noise) ? noise : 0, VGP_FLOOR_DEG);
+  return { rmsDeg, ratio };
+}
+
+export function gradeOf(
+  mismatch: number | null,
+  vgp: number | null,
+  disagreement: number | null,
+  z: number | null,
+): SuperpositionGrade {
+  const ratios = [mismatch, vgp].filter((r): r is number => r !== null && Number.isFinite(r));
+  const disagrees = (lim: number, zl: number): boolean =>
+    disagreement !== null && z !== null && disagreement > lim && z > zl;
+  if (ratios.length === 0 && disagreement === null) return 'unknown';
+  if (ratios.some((r) => r > POOR_RATIO) || disagrees(DISAGREE_DECADES, DISAGREE_Z)) return 'poor';
+  if (ratios.some((r) => r > FAIR_RATIO) || disagrees(DISAGREE_DECADES / 2, DISAGREE_Z / 2))
+    return 'fair';
+  return 'good';
+}

@@ -1,0 +1,65 @@
+/**
+ * Which quantities drive the horizontal shift, and how each enters the fit in log space.
+ * Default rule (documented in docs/shifting.md):
+ *   relaxation → G(t)/E(t); creep → J(t)/D(t);
+ *   oscillatory with vertical 'data' → tan δ (independent of bT, Mavridis & Shroff 1992);
+ *   oscillatory otherwise → G' and G'' together when both are present, else the first present of
+ *   tan δ, |G*|, δ, |η*|.
+ */
+import type { Dataset, QuantityId } from '../data/types';
+import type { VerticalMode } from './types';
+
+export function hasQuantity(dataset: Dataset, q: QuantityId): boolean {
+  return dataset.isotherms.some((iso) => (iso.quantities[q]?.length ?? 0) > 0);
+}
+
+export function defaultDrivers(dataset: Dataset, vertical: VerticalMode): QuantityId[] {
+  if (dataset.testKind === 'relaxation') return ['relaxationModulus'];
+  if (dataset.testKind === 'creep') return ['creepCompliance'];
+  const has = (q: QuantityId): boolean => hasQuantity(dataset, q);
+  if (vertical === 'data' && (has('tanDelta') || (has('storageModulus') && has('lossModulus'))))
+    return ['tanDelta'];
+  if (has('storageModulus') && has('lossModulus')) return ['storageModulus', 'lossModulus'];
+  const order: QuantityId[] = ['tanDelta', 'complexModulus', 'phaseAngle', 'complexViscosity'];
+  const first = order.find(has);
+  return first ? [first] : [];
+}
+
+/** Coefficient of log10 aT in the reduced log ordinate: reduced |η*| = |η*|·bT/aT. */
+export function alphaOf(q: QuantityId): number {
+  return q === 'complexViscosity' ? -1 : 0;
+}
+
+/** Coefficient of log10 bT in the reduced log ordinate (DOMAIN.md §2). */
+export function betaOf(q: QuantityId): number {
+  if (q === 'tanDelta' || q === 'phaseAngle') return 0;
+  return q === 'creepCompliance' ? -1 : 1;
+}
+
+/**
+ * The ordinate a quantity is fitted in: log10 of the value; δ enters as log10 tan δ so that all
+ * drivers are in decades. Non-positive values (and δ outside 0–90°) give NaN.
+ */
+export function logOrdinate(q: QuantityId, value: number): number {
+  if (q === 'phaseAngle') {
+    if (!(value > 0 && value < 90)) return NaN;
+    return Math.log10(Math.tan((value * Math.PI) / 180));
+  }
+  return value > 0 ? Math.log10(value) : NaN;
+}
+
+/** Values of a quantity, derived from G' and G'' when not stored (tan δ, |G*|, δ). */
+export function quantityValues(
+  q: QuantityId,
+  quantities: Partial<Record<QuantityId, number[]>>,
+): number[] | undefined {
+  const stored = quantities[q];
+  if (stored) return stored;
+  const gp = quantities.storageModulus;
+  const gpp = quantities.lossModulus;
+  if (!gp || !gpp) return undefined;
+  if (q === 'tanDelta') return gp.map((v, i) => gpp[i] / v);
+  if (q === 'complexModulus') return gp.map((v, i) => Math.hypot(v, gpp[i]));
+  if (q === 'phaseAngle') return gp.map((v, i) => (Math.atan2(gpp[i], v) * 180) / Math.PI);
+  return undefined;
+}

@@ -1,0 +1,260 @@
+/**
+ * One complete offset fit: overlap groups, starting values (scan or warm start), joint robust
+ * refinement under the reference constraint and the locks, outlier flagging with one re-fit,
+ * uncertainties and residual statistics. Used for log10 aT (and log10 bT in a joint fit) and,
+ * with log|G*| as abscissa, for bT from the van Gurp–Palmen curves.
+ */
+import type { FitProblem } from './problem';
+import { overlapGroups } from './pairs';
+import { allResiduals } from './residuals';
+import type { ReferenceWeights } from './reference';
+import { referenceWeights } from './reference';
+import { HUBER_K, MAD_TO_SIGMA, medianAbs } from './robust';
+import type { LinearConstraint } from './solve';
+import { solveOffsets } from './solve';
+import { startingOffsets } from './start';
+import { StatsSink } from './stats-sink';
+import type { FitInfo, RobustLoss } from './types';
+
+/** Cauchy tuning constant for 95 % efficiency under normal errors (Holland & Welsch 1977). */
+const CAUCHY_K = 2.385;
+const MIN_SCALE_DECADES = 0.002;
+
+export interface OffsetFitInput {
+  /** Builds the problem; `dropped` = per curve, entries' point indices to leave out. */
+  build: (dropped: Set<number>[] | undefined) => FitProblem;
+  temperaturesK: number[];
+  referenceK: number;
+  /** Curve index → fixed horizontal offset. */
+  locked: Map<number, number>;
+  /** Warm start per curve (NaN = unknown), or null. */
+  initial: Float64Array | null;
+  loss: RobustLoss;
+  scale: number | null;
+  flagOutliers: boolean;
+  outlierThreshold: number;
+  maxIterations: number;
+  scanStep: number;
+  directionAllowance: number | null;
+  maxOffset: number;
+}
+
+export interface OffsetFit {
+  problem: FitProblem;
+  theta: Float64Array;
+  /** Standard error of each parameter (NaN when unknown). */
+  stdErr: Float64Array;
+  included: Uint8Array;
+  overlapsNothing: Uint8Array;
+  disconnected: Uint8Array;
+  reference: ReferenceWeights | null;
+  /** Value of Σ c_k h_k implied by the locks when the reference cannot be honoured, else null. */
+  lockConflict: number | null;
+  curveRms: Float64Array;
+  rms: number;
+  /** Robust (MAD) spread of the final residuals, decades. */
+  robustSigma: number;
+  /** Per curve, point indices flagged as outliers. */
+  outliers: Set<number>[];
+  info: FitInfo;
+}
+
+function robustScale(loss: RobustLoss, residuals: number[]): number {
+  const sigma = MAD_TO_SIGMA * medianAbs(residuals);
+  const k = loss === 'cauchy' ? CAUCHY_K : HUBER_K;
+  return Math.max(MIN_SCALE_DECADES, Number.isFinite(sigma) ? k * sigma : MIN_SCALE_DECADES);
+}
+
+function chooseMainGroup(
+  groups: Int32Array,
+  temps: number[],
+  referenceK: number,
+  locked: Map<number, number>,
+): number {
+  const size = new Map<number, number>();
+  groups.forEach((g) => size.set(g, (size.get(g) ?? 0) + 1));
+  let best = -1;
+  let bestKey: [number, number, number] = [-1, -1, Infinity];
+  groups.forEach((g, k) => {
+    const lockedHere = [...locked.keys()].filter((c) => groups[c] === g).length;
+    const key: [number, number, number] = [
+      lockedHere,
+      size.get(g) ?? 0,
+      Math.abs(temps[k] - referenceK),
+    ];
+    const better =
+      key[0] > bestKey[0] ||
+      (key[0] === bestKey[0] &&
+        (key[1] > bestKey[1] || (key[1] === bestKey[1] && key[2] < bestKey[2])));
+    if (better) {
+      best = g;
+      bestKey = key;
+    }
+  });
+  return best;
+}
+
+export function fitOffsets(input: OffsetFitInput): OffsetFit {
+  let problem = input.build(undefined);
+  const n = problem.curves.length;
+  const size = problem.joint ? 2 * n : n;
+  const temps = input.temperaturesK;
+  const groups = overlapGroups(n, problem.pairs);
+  const partners = new Uint8Array(n);
+  for (let q = 0; q < problem.pairs.length; q++) partners[problem.pairs[q]] = 1;
+  const main = n > 0 ? chooseMainGroup(groups, temps, input.referenceK, input.locked) : -1;
+  const included = new Uint8Array(n);
+  const overlapsNothing = new Uint8Array(n);
+  const disconnected = new Uint8Array(n);
+  for (let k = 0; k < n; k++) {
+    const inMain = groups[k] === main && (partners[k] || n === 1);
+    if (inMain || input.locked.has(k)) included[k] = 1;
+    if (!partners[k]) overlapsNothing[k] = 1;
+    else if (!inMain) disconnected[k] = 1;
+  }
+  const restrict = (p: FitProblem): FitProblem => {
+    const keep: number[] = [];
+    for (let q = 0; q < p.pairs.length; q += 2)
+      if (included[p.pairs[q]] && included[p.pairs[q + 1]]) keep.push(p.pairs[q], p.pairs[q + 1]);
+    return { ...p, pairs: Int32Array.from(keep) };
+  };
+  problem = restrict(problem);
+
+  // Starting values.
+  const inc = [...Array(n).keys()].filter((k) => included[k]);
+  const warm =
+    input.initial !== null &&
+    inc.every((k) => input.locked.has(k) || Number.isFinite(input.initial![k]));
+  let theta: Float64Array = new Float64Array(size);
+  const known = new Map(input.locked);
+  if (warm) {
+    inc.forEach((k) => (theta[k] = input.locked.get(k) ?? input.initial![k]));
+  } else if (inc.length > 0) {
+    if (known.size === 0) {
+      const anchor = inc.reduce((a, b) =>
+        Math.abs(temps[a] - input.referenceK) <= Math.abs(temps[b] - input.referenceK) ? a : b,
+      );
+      known.set(anchor, 0);
+    }
+    const start = startingOffsets(problem, temps, known, new Map(), {
+      step: input.scanStep,
+      directionAllowance: input.directionAllowance,
+      maxOffset: input.maxOffset,
+    });
+    theta = start.theta;
+    for (const k of inc)
+      if (!start.placed[k]) {
+        included[k] = 0;
+        disconnected[k] = 1;
+      }
+    problem = restrict(problem);
+  }
+  const incFinal = [...Array(n).keys()].filter((k) => included[k]);
+  const reference =
+    incFinal.length > 0 ? referenceWeights(incFinal, temps, input.referenceK) : null;
+  const constraints: LinearConstraint[] = [];
+  let lockConflict: number | null = null;
+  if (reference) {
+    const ch = new Float64Array(size);
+    reference.coef.forEach((c, k) => (ch[k] = c));
+    const allLocked = [...reference.coef.keys()].every((k) => input.locked.has(k));
+    if (allLocked) {
+      let v = 0;
+      reference.coef.forEach((c, k) => (v += c * (input.locked.get(k) ?? 0)));
+      if (Math.abs(v) > 1e-9) lockConflict = v;
+    } else constraints.push({ coef: ch, rhs: 0 });
+    if (input.locked.size === 0) {
+      // Move all curves together so the reference holds without distorting the start.
+      let v = 0;
+      reference.coef.forEach((c, k) => (v += c * theta[k]));
+      for (const k of incFinal) theta[k] -= v;
+    }
+    if (problem.joint) {
+      const cv = new Float64Array(size);
+      reference.coef.forEach((c, k) => (cv[n + k] = c));
+      constraints.push({ coef: cv, rhs: 0 });
+    }
+  }
+  const fixed = new Uint8Array(size);
+  for (let k = 0; k < n; k++) {
+    if (!included[k] || input.locked.has(k)) fixed[k] = 1;
+    if (problem.joint && !included[k]) fixed[n + k] = 1;
+  }
+
+  const outliers: Set<number>[] = Array.from({ length: n }, () => new Set<number>());
+  const runPass = (t: Float64Array) => {
+    const pre = new StatsSink(problem);
+    allResiduals(problem, t, pre);
+    const scale = input.scale ?? robustScale(input.loss, pre.residuals);
+    return solveOffsets(problem, t, {
+      loss: input.loss,
+      scale,
+      maxIterations: input.maxIterations,
+      fixed,
+      constraints,
+    });
+  };
+  let outcome = runPass(theta);
+  let iterations = outcome.iterations;
+  let passes = 1;
+  if (input.flagOutliers && incFinal.length > 1) {
+    const stats = new StatsSink(problem);
+    allResiduals(problem, outcome.theta, stats);
+    const sigma = MAD_TO_SIGMA * medianAbs(stats.residuals);
+    const limit = input.outlierThreshold * Math.max(sigma, MIN_SCALE_DECADES / HUBER_K);
+    let flagged = 0;
+    problem.curves.forEach((curve, k) =>
+      curve.forEach((s, d) => {
+        for (let e = 0; e < s.lx.length; e++) {
+          const c = stats.entryCount[k][d][e];
+          if (c > 0 && Math.abs(stats.entrySum[k][d][e] / c) > limit) {
+            for (let q = s.binStart[e]; q < s.binStart[e + 1]; q++)
+              outliers[k].add(s.pointIndex[q]);
+            flagged++;
+          }
+        }
+      }),
+    );
+    if (flagged > 0) {
+      problem = restrict(input.build(outliers));
+      outcome = runPass(outcome.theta);
+      iterations += outcome.iterations;
+      passes = 2;
+    }
+  }
+  theta = outcome.theta;
+  const stats = new StatsSink(problem);
+  allResiduals(problem, theta, stats);
+  const curveRms = new Float64Array(n);
+  for (let k = 0; k < n; k++) curveRms[k] = stats.curveRms(k);
+  for (const k of incFinal)
+    if (!input.locked.has(k) && !(stats.curveW[k] > 0) && incFinal.length > 1) {
+      included[k] = 0;
+      overlapsNothing[k] = 1;
+    }
+  const stdErr = new Float64Array(size).fill(NaN);
+  if (outcome.covariance)
+    for (let i = 0; i < size; i++)
+      stdErr[i] = Math.sqrt(Math.max(0, outcome.covariance[i * size + i]));
+  return {
+    problem,
+    theta,
+    stdErr,
+    included,
+    overlapsNothing,
+    disconnected,
+    reference,
+    lockConflict,
+    curveRms,
+    rms: stats.rms(),
+    robustSigma: MAD_TO_SIGMA * medianAbs(stats.residuals),
+    outliers,
+    info: {
+      converged: outcome.converged,
+      iterations,
+      reason: outcome.reason,
+      passes,
+      warmStart: warm,
+    },
+  };
+}

@@ -1,0 +1,123 @@
+/**
+ * Pair residuals, the hot loop of the engine. For curves i and j of one driver and offsets θ, each
+ * point of i whose reduced abscissa falls inside j's range is compared with j linearly
+ * interpolated there (merge walk, O(n_i + n_j)), and vice versa:
+ *   r = [y_i + α h_i + β v_i] − [Y_j(lx_i + σ(h_i − h_j)) + α h_j + β v_j]      (decades)
+ *   ∂r/∂h_i = α − σ·Y'_j,  ∂r/∂h_j = −∂r/∂h_i,  ∂r/∂v_i = β,  ∂r/∂v_j = −β.
+ * A pair whose overlap holds fewer than `minOverlapPoints` entries carries no information and
+ * yields no residuals (DOMAIN.md §2: never invent a shift).
+ */
+import type { FitProblem, FitSeries } from './problem';
+import { lowerBound, upperBound } from './series';
+
+/**
+ * Receives each residual r (decades) with its weight w = 1/var(r)·σ², where σ is the noise of one
+ * measured point: r compares an entry (mean of c₀ points) with an interpolation at fraction λ
+ * between two entries (c₁, c₂ points), so var(r) = σ²(1/c₀ + (1−λ)²/c₁ + λ²/c₂). Without this
+ * weight the noise of the interpolant varies with λ, and the mismatch acquires a ripple that
+ * favours offsets placing points midway between the other curve's points — a bias of the
+ * unweighted overlap criterion (generalised least squares removes it).
+ * `g` is ∂r/∂h_owner; `e` the owner's entry index for per-point bookkeeping; the interpolant is
+ * (1 − λ)·y_other[k] + λ·y_other[k + 1].
+ */
+export interface ResidualSink {
+  add(
+    owner: number,
+    other: number,
+    driver: number,
+    e: number,
+    r: number,
+    w: number,
+    g: number,
+    binWeight: number,
+    k: number,
+    lam: number,
+  ): void;
+}
+
+/** Entries of `a` whose abscissa shifted by `shift` falls within b's range. */
+function overlapCount(a: FitSeries, b: FitSeries, shift: number): number {
+  const lo = b.lx[0] - shift;
+  const hi = b.lx[b.lx.length - 1] - shift;
+  return upperBound(a.lx, hi) - lowerBound(a.lx, lo);
+}
+
+/** Number of overlapping entries of the pair (both directions, one driver). */
+export function pairOverlap(
+  p: FitProblem,
+  i: number,
+  j: number,
+  d: number,
+  theta: ArrayLike<number>,
+): number {
+  const a = p.curves[i][d];
+  const b = p.curves[j][d];
+  if (a.lx.length < 2 || b.lx.length < 2) return 0;
+  const shift = p.sigma * (theta[i] - theta[j]);
+  return overlapCount(a, b, shift) + overlapCount(b, a, -shift);
+}
+
+function walk(
+  p: FitProblem,
+  owner: number,
+  other: number,
+  d: number,
+  theta: ArrayLike<number>,
+  sink: ResidualSink,
+): void {
+  const a = p.curves[owner][d];
+  const b = p.curves[other][d];
+  const n = p.curves.length;
+  const dh = theta[owner] - theta[other];
+  const shift = p.sigma * dh;
+  const alpha = p.alpha[d];
+  const beta = p.beta[d];
+  const yOff = alpha * dh + (p.joint ? beta * (theta[n + owner] - theta[n + other]) : 0);
+  const bx = b.lx;
+  const by = b.y;
+  const bw = b.w;
+  const last = bx.length - 1;
+  const lo = bx[0];
+  const hi = bx[last];
+  const sigma = p.sigma;
+  let k = 0;
+  for (let e = lowerBound(a.lx, lo - shift); e < a.lx.length; e++) {
+    const q = a.lx[e] + shift;
+    if (q > hi) break;
+    while (k < last - 1 && bx[k + 1] < q) k++;
+    const h = bx[k + 1] - bx[k];
+    const slope = (by[k + 1] - by[k]) / h;
+    const lam = (q - bx[k]) / h;
+    const r = a.y[e] + yOff - (by[k] + slope * (q - bx[k]));
+    const f = 1 / a.w[e] + ((1 - lam) * (1 - lam)) / bw[k] + (lam * lam) / bw[k + 1];
+    sink.add(owner, other, d, e, r, 1 / f, alpha - sigma * slope, a.w[e], k, lam);
+  }
+}
+
+/** Feed every residual of the pair (i, j) for driver d to the sink, if the overlap suffices. */
+export function pairResiduals(
+  p: FitProblem,
+  i: number,
+  j: number,
+  d: number,
+  theta: ArrayLike<number>,
+  sink: ResidualSink,
+): boolean {
+  if (pairOverlap(p, i, j, d, theta) < p.minOverlapPoints) return false;
+  walk(p, i, j, d, theta, sink);
+  walk(p, j, i, d, theta, sink);
+  return true;
+}
+
+/** Feed all residuals of all candidate pairs and drivers. Returns the number of pairs used. */
+export function allResiduals(p: FitProblem, theta: ArrayLike<number>, sink: ResidualSink): number {
+  let used = 0;
+  const nd = p.alpha.length;
+  for (let q = 0; q < p.pairs.length; q += 2) {
+    let any = false;
+    for (let d = 0; d < nd; d++)
+      if (pairResiduals(p, p.pairs[q], p.pairs[q + 1], d, theta, sink)) any = true;
+    if (any) used++;
+  }
+  return used;
+}

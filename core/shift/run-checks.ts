@@ -1,0 +1,158 @@
+/** Runs the superposition checks after the main fit and turns them into a grade and warnings. */
+import type { Dataset, QuantityId } from '../data/types';
+import { buildProblem } from './build-problem';
+import { gradeOf, mismatchRatio, noiseOfProblem, vanGurpPalmenDispersion } from './checks';
+import { hasQuantity } from './drivers';
+import type { OffsetFit } from './fit-offsets';
+import { fitOffsets } from './fit-offsets';
+import type { ResolvedShiftOptions, ShiftChecks, ShiftWarning } from './types';
+import type { VerticalOutcome } from './vertical';
+import { warn } from './warnings';
+
+function comparedQuantities(dataset: Dataset, s: ResolvedShiftOptions): QuantityId[] {
+  if (s.drivers.length >= 2) return s.drivers;
+  if (
+    dataset.testKind === 'oscillatory' &&
+    hasQuantity(dataset, 'storageModulus') &&
+    hasQuantity(dataset, 'lossModulus')
+  )
+    return ['storageModulus', 'lossModulus'];
+  return [];
+}
+
+interface Disagreement {
+  decades: number;
+  z: number;
+}
+
+function disagreement(
+  dataset: Dataset,
+  s: ResolvedShiftOptions,
+  fit: OffsetFit,
+  active: number[],
+  vertical: VerticalOutcome,
+  quantities: QuantityId[],
+): Disagreement | null {
+  const n = active.length;
+  const locked = new Map<number, number>();
+  s.locked.forEach((l) => {
+    const c = active.findIndex((k) => dataset.isotherms[k].id === l.id);
+    if (c >= 0) locked.set(c, l.log10aT);
+  });
+  const fits = quantities.map((q) =>
+    fitOffsets({
+      build: () => {
+        const p = buildProblem(dataset, {
+          active,
+          drivers: [q],
+          fixedLog10bT: vertical.joint ? null : vertical.log10bT,
+          joint: vertical.joint,
+          minOverlapPoints: s.minOverlapPoints,
+          maxPointsPerDecade: s.maxPointsPerDecade,
+          dropped: fit.outliers,
+        });
+        return p;
+      },
+      temperaturesK: active.map((k) => dataset.isotherms[k].temperatureK),
+      referenceK: s.referenceK,
+      locked,
+      initial: Float64Array.from({ length: n }, (_, c) => (fit.included[c] ? fit.theta[c] : NaN)),
+      loss: s.robustLoss,
+      scale: s.robustScaleDecades,
+      flagOutliers: false,
+      outlierThreshold: s.outlierThreshold,
+      maxIterations: s.maxIterations,
+      scanStep: s.scanStepDecades,
+      directionAllowance: s.reverseAllowanceDecades,
+      maxOffset: Infinity,
+    }),
+  );
+  let best: Disagreement | null = null;
+  for (let a = 0; a < fits.length; a++)
+    for (let b = a + 1; b < fits.length; b++)
+      for (let c = 0; c < n; c++) {
+        if (!fit.included[c] || !fits[a].included[c] || !fits[b].included[c] || locked.has(c))
+          continue;
+        const d = Math.abs(fits[a].theta[c] - fits[b].theta[c]);
+        const se = Math.hypot(fits[a].stdErr[c], fits[b].stdErr[c]);
+        const z = se > 0 ? d / se : Infinity;
+        if (!Number.isFinite(d)) continue;
+        if (!best || d > best.decades) best = { decades: d, z };
+      }
+  return best;
+}
+
+export function runChecks(
+  dataset: Dataset,
+  s: ResolvedShiftOptions,
+  fit: OffsetFit,
+  active: number[],
+  vertical: VerticalOutcome,
+  warnings: ShiftWarning[],
+): ShiftChecks {
+  const includedCount = fit.included.reduce((a, b) => a + b, 0);
+  const noise = noiseOfProblem(fit.problem, fit.included);
+  const mismatch = includedCount > 1 ? mismatchRatio(fit.robustSigma, noise) : null;
+  const compared = s.checks && includedCount > 1 ? comparedQuantities(dataset, s) : [];
+  const vgp =
+    s.checks && dataset.testKind === 'oscillatory' && includedCount > 1
+      ? vanGurpPalmenDispersion(
+          dataset,
+          active,
+          fit.included,
+          (k) => {
+            const c = active.indexOf(k);
+            const v = vertical.joint ? fit.theta[active.length + c] : vertical.log10bT[k];
+            return Number.isFinite(v) ? v : 0;
+          },
+          s.minOverlapPoints,
+        )
+      : null;
+  const dis =
+    compared.length >= 2 ? disagreement(dataset, s, fit, active, vertical, compared) : null;
+  const grade =
+    includedCount > 1
+      ? gradeOf(mismatch, vgp?.ratio ?? null, dis?.decades ?? null, dis?.z ?? null)
+      : 'unknown';
+  const checks: ShiftChecks = {
+    vanGurpPalmenRmsDeg: vgp?.rmsDeg ?? null,
+    vanGurpPalmenRatio: vgp?.ratio ?? null,
+    quantityDisagreementDecades: dis?.decades ?? null,
+    quantityDisagreementZ: dis && Number.isFinite(dis.z) ? dis.z : null,
+    quantitiesCompared: dis ? compared : [],
+    mismatchRatio: mismatch,
+    noiseDecades: Number.isFinite(noise) ? noise : null,
+    grade,
+    superpositionOk: grade === 'good' || grade === 'fair',
+  };
+  const figures = [
+    mismatch !== null ? `mismatch ${mismatch.toFixed(1)}× the noise` : '',
+    vgp
+      ? `van Gurp–Palmen spread ${vgp.ratio.toFixed(1)}× the noise (${vgp.rmsDeg.toFixed(1)}° RMS)`
+      : '',
+    dis
+      ? `shifts from ${compared.join(' and ')} differ by up to ${dis.decades.toFixed(2)} decades`
+      : '',
+  ]
+    .filter(Boolean)
+    .join('; ');
+  if (grade === 'poor')
+    warn(
+      warnings,
+      'poor-superposition',
+      `The isotherms do not superpose well (${figures}). The material may be thermorheologically complex (blend, block copolymer, filled or semicrystalline near melting) or the data outside the linear range: do not rely on this master curve without further tests.`,
+    );
+  else if (grade === 'fair')
+    warn(
+      warnings,
+      'fair-superposition',
+      `Superposition is only fair (${figures}); check the shifted curves before using the master curve.`,
+    );
+  if (dis && dis.decades > 0.1 && dis.z > 3)
+    warn(
+      warnings,
+      'quantities-disagree',
+      `Shifts found from ${compared.join(' and ')} separately differ by up to ${dis.decades.toFixed(2)} decades.`,
+    );
+  return checks;
+}

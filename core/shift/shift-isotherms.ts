@@ -1,0 +1,247 @@
+/**
+ * shiftIsotherms(): the shift engine's entry point. Finds log10 aT (and log10 bT) for every
+ * isotherm by a global robust overlap fit, with standard errors, quality figures, superposition
+ * checks and warnings. Method and conventions: docs/shifting.md, DOMAIN.md §2 and §4.
+ */
+import type { Dataset } from '../data/types';
+import { buildProblem } from './build-problem';
+import { logOrdinate, quantityValues } from './drivers';
+import type { OffsetFit } from './fit-offsets';
+import { fitOffsets } from './fit-offsets';
+import { resolveShiftOptions, ShiftOptionsError } from './options';
+import { runChecks } from './run-checks';
+import type {
+  CurveShift,
+  ResolvedShiftOptions,
+  ShiftOptions,
+  ShiftResult,
+  ShiftWarning,
+} from './types';
+import { verticalShift } from './vertical';
+import { describeIsotherm, formatC, warn } from './warnings';
+
+export const SHIFT_CONVENTION =
+  'ω_r = aT·ω and t_r = t/aT; aT(Tref) = 1, log10 aT < 0 above Tref; reduced modulus = bT × measured, ' +
+  'reduced compliance = measured / bT, reduced |η*| = |η*|·bT/aT; tan δ and δ are not shifted vertically.';
+
+/** Standard errors above this many decades are called out. */
+const LARGE_STD_ERR_DECADES = 0.1;
+
+function activeIsotherms(
+  dataset: Dataset,
+  s: ResolvedShiftOptions,
+  warnings: ShiftWarning[],
+): number[] {
+  const excluded = new Set(s.excluded);
+  const active: number[] = [];
+  dataset.isotherms.forEach((iso, k) => {
+    if (excluded.has(iso.id)) return;
+    let usable = 0;
+    for (const q of s.drivers) {
+      const values = quantityValues(q, iso.quantities);
+      if (!values) continue;
+      let good = 0;
+      let firstBad = -1;
+      for (let i = 0; i < iso.x.length; i++) {
+        if (!iso.mask[i]) continue;
+        if (iso.x[i] > 0 && Number.isFinite(logOrdinate(q, values[i]))) good++;
+        else if (firstBad < 0) firstBad = i;
+      }
+      if (firstBad >= 0) {
+        const src = iso.source[firstBad];
+        warn(
+          warnings,
+          'bad-values',
+          `Isotherm ${describeIsotherm(iso)}: ${q} has missing, zero or negative values (first at ` +
+            `${src ? `${src.file} row ${src.row}` : `point ${firstBad + 1}`}); those points are left out.`,
+        );
+      }
+      usable = Math.max(usable, good);
+    }
+    if (usable >= 2) active.push(k);
+  });
+  return active;
+}
+
+export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftResult {
+  const s = resolveShiftOptions(dataset, options);
+  const ids = new Set(dataset.isotherms.map((i) => i.id));
+  for (const id of [...s.excluded, ...s.locked.map((l) => l.id)])
+    if (!ids.has(id))
+      throw new ShiftOptionsError(`No isotherm with id '${id}' in dataset '${dataset.name}'.`);
+  const warnings: ShiftWarning[] = [];
+  const isos = dataset.isotherms;
+  const temps = isos.map((i) => i.temperatureK);
+  let active = activeIsotherms(dataset, s, warnings);
+
+  const vertical = verticalShift(dataset, active, s);
+  if (s.vertical === 'data') {
+    warn(
+      warnings,
+      'free-vertical-shift',
+      vertical.joint
+        ? 'bT was fitted together with aT from the data: the two trade off against each other and lose physical meaning; prefer bT from density unless the data demand otherwise.'
+        : 'bT was estimated from the data (δ against |G*|): free vertical shifts weaken the physical meaning of the master curve; prefer bT from density unless the data demand otherwise.',
+    );
+    if (vertical.vgpFit) active = active.filter((k) => Number.isFinite(vertical.log10bT[k]));
+  }
+  for (const T of vertical.extrapolatedK)
+    warn(warnings, 'density-extrapolated', `The density table was extrapolated to ${formatC(T)}.`);
+
+  const lockedByIndex = new Map<number, number>();
+  s.locked.forEach((l) => {
+    const c = active.findIndex((k) => isos[k].id === l.id);
+    if (c >= 0) lockedByIndex.set(c, l.log10aT);
+  });
+  const initial = s.initialLog10aT
+    ? Float64Array.from(active, (k) => s.initialLog10aT![isos[k].id] ?? NaN)
+    : null;
+  const fit: OffsetFit = fitOffsets({
+    build: (dropped) =>
+      buildProblem(dataset, {
+        active,
+        drivers: s.drivers,
+        fixedLog10bT: vertical.joint ? null : vertical.log10bT,
+        joint: vertical.joint,
+        minOverlapPoints: s.minOverlapPoints,
+        maxPointsPerDecade: s.maxPointsPerDecade,
+        dropped,
+      }),
+    temperaturesK: active.map((k) => temps[k]),
+    referenceK: s.referenceK,
+    locked: lockedByIndex,
+    initial,
+    loss: s.robustLoss,
+    scale: s.robustScaleDecades,
+    flagOutliers: s.flagOutliers,
+    outlierThreshold: s.outlierThreshold,
+    maxIterations: s.maxIterations,
+    scanStep: s.scanStepDecades,
+    directionAllowance: s.reverseAllowanceDecades,
+    maxOffset: Infinity,
+  });
+  const n = active.length;
+  // A lone isotherm away from Tref says nothing about aT(Tref).
+  const includedCount = fit.included.reduce((a, b) => a + b, 0);
+  if (fit.reference?.kind === 'single' && lockedByIndex.size === 0) {
+    fit.included.fill(0);
+    warn(
+      warnings,
+      'too-few-isotherms',
+      `Only isotherms at ${formatC(temps[active[[...fit.reference.coef.keys()][0]]])} can be used: ` +
+        `shift factors relative to ${formatC(s.referenceK)} cannot be found from one temperature.`,
+    );
+  } else if (n === 0) {
+    warn(
+      warnings,
+      'no-data',
+      `No isotherm of '${dataset.name}' has two or more usable points for ${s.drivers.join(', ') || 'any quantity'}.`,
+    );
+  }
+
+  const curves: CurveShift[] = isos.map((iso, k) => {
+    const c = active.indexOf(k);
+    const inc = c >= 0 && fit.included[c] === 1;
+    const lockedHere = s.locked.some((l) => l.id === iso.id);
+    const bT = !inc ? null : vertical.joint ? fit.theta[n + c] : vertical.log10bT[k];
+    const bErr = !inc ? null : vertical.joint ? fit.stdErr[n + c] : vertical.stdErr[k];
+    return {
+      id: iso.id,
+      temperatureK: iso.temperatureK,
+      log10aT: inc ? fit.theta[c] : null,
+      log10aTStdErr: inc ? finiteOrNull(lockedHere ? 0 : fit.stdErr[c]) : null,
+      log10bT: bT,
+      log10bTStdErr: bErr === null ? null : finiteOrNull(bErr),
+      included: inc,
+      excluded: s.excluded.includes(iso.id),
+      overlapsNothing: c >= 0 ? fit.overlapsNothing[c] === 1 && !lockedHere : false,
+      locked: lockedHere,
+      rmsResidualDecades: c >= 0 && Number.isFinite(fit.curveRms[c]) ? fit.curveRms[c] : null,
+      outlierPoints: c >= 0 ? [...fit.outliers[c]].sort((a, b) => a - b) : [],
+    };
+  });
+
+  structuralWarnings(dataset, s, fit, active, curves, includedCount, warnings);
+  const checks = runChecks(dataset, s, fit, active, vertical, warnings);
+  return {
+    referenceK: s.referenceK,
+    convention: SHIFT_CONVENTION,
+    abscissa: dataset.abscissa,
+    curves,
+    rmsResidualDecades: Number.isFinite(fit.rms) ? fit.rms : null,
+    checks,
+    warnings,
+    settings: s,
+    fit: fit.info,
+  };
+}
+
+function finiteOrNull(v: number): number | null {
+  return Number.isFinite(v) ? v : null;
+}
+
+function structuralWarnings(
+  dataset: Dataset,
+  s: ResolvedShiftOptions,
+  fit: OffsetFit,
+  active: number[],
+  curves: CurveShift[],
+  includedCount: number,
+  warnings: ShiftWarning[],
+): void {
+  const isos = dataset.isotherms;
+  curves.forEach((cs, k) => {
+    const c = active.indexOf(k);
+    if (c < 0 || cs.excluded) return;
+    if (cs.overlapsNothing)
+      warn(
+        warnings,
+        'no-overlap',
+        `Isotherm ${describeIsotherm(isos[k])} overlaps no other isotherm: it carries no shift information and is left out of the master curve.`,
+      );
+    else if (fit.disconnected[c] && !cs.included)
+      warn(
+        warnings,
+        'disconnected-group',
+        `Isotherm ${describeIsotherm(isos[k])} overlaps only isotherms that do not connect to the rest: it is left out of the master curve.`,
+      );
+    if (cs.included && cs.log10aTStdErr !== null && cs.log10aTStdErr > LARGE_STD_ERR_DECADES)
+      warn(
+        warnings,
+        'large-uncertainty',
+        `The shift of isotherm ${describeIsotherm(isos[k])} is uncertain (±${cs.log10aTStdErr.toFixed(2)} decades): its overlap with the others is short or flat.`,
+      );
+    if (cs.outlierPoints.length > 0) {
+      const rows = cs.outlierPoints
+        .slice(0, 5)
+        .map((i) =>
+          isos[k].source[i]
+            ? `${isos[k].source[i].file} row ${isos[k].source[i].row}`
+            : `point ${i + 1}`,
+        );
+      warn(
+        warnings,
+        'outliers-flagged',
+        `Isotherm ${describeIsotherm(isos[k])}: ${cs.outlierPoints.length} point(s) disagree strongly with the overlapping isotherms and were left out of the fit (${rows.join('; ')}${cs.outlierPoints.length > 5 ? '; …' : ''}). Check them (low torque, inertia, non-linear range).`,
+      );
+    }
+  });
+  if (fit.reference?.kind === 'extrapolated' && includedCount > 1)
+    warn(
+      warnings,
+      'reference-extrapolated',
+      `The reference temperature ${formatC(s.referenceK)} lies outside the measured isotherms: aT there is extrapolated linearly from the two nearest, so every shift carries that extrapolation.`,
+    );
+  if (fit.lockConflict !== null)
+    warn(
+      warnings,
+      'locks-conflict-reference',
+      `The fixed shifts imply log10 aT = ${fit.lockConflict.toFixed(3)} at the reference temperature instead of 0: check the fixed values.`,
+    );
+  if (!fit.info.converged)
+    warn(
+      warnings,
+      'not-converged',
+      `The shift fit stopped after ${fit.info.iterations} iterations without converging (${fit.info.reason}).`,
+    );
+}

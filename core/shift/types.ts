@@ -1,0 +1,214 @@
+/**
+ * Shared types of the shift engine: options, result and the internal fit problem.
+ * Conventions (DOMAIN.md §2): ω_r = aT·ω, t_r = t/aT, aT(Tref) = 1, log10 aT < 0 above Tref;
+ * reduced modulus = bT × measured, reduced compliance = measured / bT,
+ * reduced |η*| = |η*|·bT/aT; tan δ and δ carry no vertical shift.
+ */
+import type { QuantityId } from '../data/types';
+
+/** How the vertical shift factor bT is obtained. */
+export type VerticalMode = 'none' | 'density' | 'data';
+
+/** Density of the sample, for the entropic bT = Tref·ρref / (T·ρ(T)) (Ferry 1980). */
+export type DensityInput =
+  | {
+      kind: 'expansion';
+      /** Density at the reference temperature, kg/m³ (any consistent unit works). */
+      referenceDensityKgPerM3: number;
+      /** Volumetric thermal expansion coefficient αV, 1/K: ρ(T) = ρref / (1 + αV (T − Tref)). */
+      volumetricExpansionPerK: number;
+    }
+  | {
+      kind: 'table';
+      /** Measured densities; linearly interpolated in T (extrapolated with a warning). */
+      points: { temperatureK: number; densityKgPerM3: number }[];
+    };
+
+/** Robust loss applied to every pair residual (in decades). */
+export type RobustLoss = 'none' | 'huber' | 'cauchy';
+
+/** A shift the user fixed by hand: kept as given while the others are re-fitted around it. */
+export interface LockedShift {
+  /** Isotherm id. */
+  id: string;
+  /** log10 aT relative to the reference temperature, decades. */
+  log10aT: number;
+}
+
+export interface ShiftOptions {
+  /** Reference temperature Tref, K. Any temperature, measured or not. */
+  referenceK: number;
+  /**
+   * Quantities that drive the horizontal shift. @default chosen from the data: relaxation →
+   * ['relaxationModulus'], creep → ['creepCompliance']; oscillatory with vertical 'data' →
+   * ['tanDelta'] (free of bT); oscillatory otherwise → ['storageModulus', 'lossModulus'] when both
+   * are present, else the first present of tanDelta, complexModulus, phaseAngle.
+   */
+  drivers?: QuantityId[];
+  /** Vertical shift: none, entropic from density, or estimated from the data. @default 'none' */
+  vertical?: VerticalMode;
+  /** Density for vertical 'density'. Required in that mode. @default undefined */
+  density?: DensityInput;
+  /** Isotherm ids left out of the fit (reported with included = false). @default [] */
+  excluded?: string[];
+  /** Shifts fixed by hand, relative to Tref. @default [] */
+  locked?: LockedShift[];
+  /**
+   * Warm start: log10 aT per isotherm id (relative to Tref). Ids present skip the initial scan
+   * (all active isotherms must be given for the scan to be skipped). @default undefined
+   */
+  initialLog10aT?: Record<string, number>;
+  /** Robust loss on pair residuals. @default 'huber' */
+  robustLoss?: RobustLoss;
+  /**
+   * Scale of the robust loss, decades. @default undefined = 1.345 × the robust (MAD) spread of the
+   * residuals at the start of each pass (Huber's 95 %-efficiency constant), at least 0.002 decades.
+   */
+  robustScaleDecades?: number;
+  /** Flag points whose residual exceeds this many robust standard deviations. @default 4 */
+  outlierThreshold?: number;
+  /** Flag outliers and re-fit without them. @default true */
+  flagOutliers?: boolean;
+  /** A pair carries information only with at least this many points in the overlap. @default 4 */
+  minOverlapPoints?: number;
+  /**
+   * Curves denser than this (points per decade of x) are averaged into bins of 1/this decade
+   * before fitting (each bin weighted by its point count). @default 40
+   */
+  maxPointsPerDecade?: number;
+  /**
+   * The scan assumes aT falls with temperature (common practice for polymers) and searches the
+   * opposite direction only this far, decades. @default 0.5
+   */
+  reverseAllowanceDecades?: number;
+  /** Scan step for the starting values, decades. @default 0.05 */
+  scanStepDecades?: number;
+  /** Iteration limit of the joint refinement. @default 60 */
+  maxIterations?: number;
+  /** Run the superposition checks (van Gurp–Palmen, per-quantity disagreement). @default true */
+  checks?: boolean;
+}
+
+export type ResolvedShiftOptions = Required<
+  Omit<ShiftOptions, 'density' | 'initialLog10aT' | 'robustScaleDecades' | 'drivers'>
+> & {
+  drivers: QuantityId[];
+  density: DensityInput | null;
+  initialLog10aT: Record<string, number> | null;
+  robustScaleDecades: number | null;
+};
+
+/** Stable warning codes; see docs/shifting.md. */
+export type ShiftWarningCode =
+  | 'no-data'
+  | 'too-few-isotherms'
+  | 'no-overlap'
+  | 'disconnected-group'
+  | 'reference-extrapolated'
+  | 'reference-interpolated'
+  | 'locks-conflict-reference'
+  | 'free-vertical-shift'
+  | 'density-extrapolated'
+  | 'poor-superposition'
+  | 'fair-superposition'
+  | 'quantities-disagree'
+  | 'outliers-flagged'
+  | 'not-converged'
+  | 'bad-values'
+  | 'large-uncertainty';
+
+export interface ShiftWarning {
+  code: ShiftWarningCode;
+  message: string;
+}
+
+export interface CurveShift {
+  id: string;
+  temperatureK: number;
+  /** log10 aT relative to Tref, decades; null when the isotherm is not shifted. */
+  log10aT: number | null;
+  /** Standard error of log10aT relative to Tref, decades (0 for locked or the reference itself). */
+  log10aTStdErr: number | null;
+  /** log10 bT, decades (0 with vertical 'none'); null when the isotherm is not shifted. */
+  log10bT: number | null;
+  /** Standard error of log10bT, decades (0 when bT comes from a formula). */
+  log10bTStdErr: number | null;
+  /** True when the isotherm is part of the master curve. */
+  included: boolean;
+  /** True when excluded by the user. */
+  excluded: boolean;
+  /** True when no other isotherm overlaps it: it carries no shift information. */
+  overlapsNothing: boolean;
+  /** True when its shift was fixed by hand. */
+  locked: boolean;
+  /** RMS of its residuals against the overlapping isotherms after shifting, decades. */
+  rmsResidualDecades: number | null;
+  /** Indices (into the isotherm's points) flagged as outliers and left out of the fit. */
+  outlierPoints: number[];
+}
+
+export type SuperpositionGrade = 'good' | 'fair' | 'poor' | 'unknown';
+
+export interface ShiftChecks {
+  /**
+   * van Gurp–Palmen dispersion: RMS difference of δ between isotherms at equal |G*| (after bT),
+   * degrees; null without oscillatory G' and G'' (or δ and |G*|).
+   */
+  vanGurpPalmenRmsDeg: number | null;
+  /** The same divided by the value noise alone would give (≈ 1 when superposition holds). */
+  vanGurpPalmenRatio: number | null;
+  /** Largest |log10 aT from one quantity − from another| over included isotherms, decades. */
+  quantityDisagreementDecades: number | null;
+  /** The same divided by the combined standard error of the two estimates. */
+  quantityDisagreementZ: number | null;
+  /** Quantities compared, e.g. ['storageModulus', 'lossModulus']. */
+  quantitiesCompared: QuantityId[];
+  /** Overall RMS residual after shifting divided by the value noise alone would give. */
+  mismatchRatio: number | null;
+  /** Noise level estimated inside each curve (local quadratic fits), decades. */
+  noiseDecades: number | null;
+  grade: SuperpositionGrade;
+  /** Superposition quality acceptable (grade good or fair). */
+  superpositionOk: boolean;
+}
+
+export interface FitInfo {
+  converged: boolean;
+  iterations: number;
+  reason: string;
+  /** Passes of the fit (a second one after outlier flagging). */
+  passes: number;
+  /** True when the scan was skipped because all starting values were given. */
+  warmStart: boolean;
+}
+
+export interface ShiftResult {
+  referenceK: number;
+  /** Sign convention, repeated for every consumer of the JSON. */
+  convention: string;
+  /** 'frequency' (ω_r = aT·ω) or 'time' (t_r = t/aT). */
+  abscissa: 'angularFrequency' | 'time';
+  curves: CurveShift[];
+  /** RMS of all residuals after shifting, decades. */
+  rmsResidualDecades: number | null;
+  checks: ShiftChecks;
+  warnings: ShiftWarning[];
+  settings: ResolvedShiftOptions;
+  fit: FitInfo;
+}
+
+/** One point of the master curve: reduced abscissa and reduced quantities. */
+export interface MasterCurvePoint {
+  isothermId: string;
+  temperatureK: number;
+  /** Index of the point in its isotherm. */
+  pointIndex: number;
+  /** Reduced abscissa: ω_r = aT·ω (rad/s) or t_r = t/aT (s). */
+  reducedX: number;
+  /** Reduced quantities (SI): moduli × bT, compliance / bT, |η*| × bT/aT, tan δ and δ as measured. */
+  values: Partial<Record<QuantityId, number>>;
+  /** False when the point is masked in the dataset. */
+  used: boolean;
+  /** True when the engine flagged the point as an outlier. */
+  outlier: boolean;
+}

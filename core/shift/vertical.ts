@@ -1,0 +1,93 @@
+/**
+ * Vertical shift bT per isotherm for the three modes:
+ *  - 'none': bT = 1;
+ *  - 'density': entropic formula (density-shift.ts), no statistical error;
+ *  - 'data' with δ and |G*| available (oscillatory): shift log tan δ along log|G*| — δ carries no
+ *    vertical shift, so the offset along log|G*| is log10 bT itself, free of aT (Mavridis & Shroff,
+ *    Polym. Eng. Sci. 32, 1992; DOMAIN.md §2);
+ *  - 'data' otherwise (relaxation, creep): bT is fitted jointly with aT (flagged by the caller).
+ */
+import type { Dataset } from '../data/types';
+import { buildProblem } from './build-problem';
+import { densityLog10bT } from './density-shift';
+import { quantityValues } from './drivers';
+import { fitOffsets } from './fit-offsets';
+import type { OffsetFit } from './fit-offsets';
+import type { ResolvedShiftOptions } from './types';
+
+export interface VerticalOutcome {
+  /** Per dataset index; NaN where unknown. */
+  log10bT: number[];
+  stdErr: number[];
+  /** True when bT must be fitted jointly with aT. */
+  joint: boolean;
+  vgpFit: OffsetFit | null;
+  extrapolatedK: number[];
+}
+
+/** Largest |log10 bT| between neighbours searched by the van Gurp–Palmen scan, decades. */
+const VGP_MAX_OFFSET = 1;
+
+export function verticalShift(
+  dataset: Dataset,
+  active: number[],
+  s: ResolvedShiftOptions,
+): VerticalOutcome {
+  const n = dataset.isotherms.length;
+  const temps = dataset.isotherms.map((i) => i.temperatureK);
+  const zeros = (): number[] => new Array<number>(n).fill(0);
+  if (s.vertical === 'none')
+    return { log10bT: zeros(), stdErr: zeros(), joint: false, vgpFit: null, extrapolatedK: [] };
+  if (s.vertical === 'density') {
+    const d = densityLog10bT(temps, s.referenceK, s.density!);
+    return {
+      log10bT: d.log10bT,
+      stdErr: zeros(),
+      joint: false,
+      vgpFit: null,
+      extrapolatedK: d.extrapolatedK,
+    };
+  }
+  const canVgp =
+    dataset.testKind === 'oscillatory' &&
+    active.every((k) => {
+      const q = dataset.isotherms[k].quantities;
+      return quantityValues('complexModulus', q) && quantityValues('tanDelta', q);
+    });
+  if (!canVgp)
+    return { log10bT: zeros(), stdErr: zeros(), joint: true, vgpFit: null, extrapolatedK: [] };
+  const fit = fitOffsets({
+    build: (dropped) =>
+      buildProblem(dataset, {
+        active,
+        drivers: ['tanDelta'],
+        fixedLog10bT: null,
+        joint: false,
+        minOverlapPoints: s.minOverlapPoints,
+        maxPointsPerDecade: s.maxPointsPerDecade,
+        dropped,
+        abscissa: (k) => quantityValues('complexModulus', dataset.isotherms[k].quantities) ?? [],
+        sigma: 1,
+      }),
+    temperaturesK: active.map((k) => temps[k]),
+    referenceK: s.referenceK,
+    locked: new Map(),
+    initial: null,
+    loss: s.robustLoss,
+    scale: s.robustScaleDecades,
+    flagOutliers: s.flagOutliers,
+    outlierThreshold: s.outlierThreshold,
+    maxIterations: s.maxIterations,
+    scanStep: s.scanStepDecades / 5,
+    directionAllowance: null,
+    maxOffset: VGP_MAX_OFFSET,
+  });
+  const log10bT = new Array<number>(n).fill(NaN);
+  const stdErr = new Array<number>(n).fill(NaN);
+  active.forEach((k, c) => {
+    if (!fit.included[c]) return;
+    log10bT[k] = fit.theta[c];
+    stdErr[k] = fit.stdErr[c];
+  });
+  return { log10bT, stdErr, joint: false, vgpFit: fit, extrapolatedK: [] };
+}
