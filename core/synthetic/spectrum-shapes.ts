@@ -34,17 +34,21 @@ export interface MeltPronyOptions {
   reachWidths?: number;
 }
 
+/** Checks {@link MeltPronyOptions} and fills in the defaults, naming any bad field. */
+export function resolveMeltPronyOptions(o: MeltPronyOptions): Required<MeltPronyOptions> {
+  const r = { ...o, modesPerDecade: o.modesPerDecade ?? 2, reachWidths: o.reachWidths ?? 3 };
+  for (const key of Object.keys(r) as (keyof MeltPronyOptions)[]) requirePositive(r[key], key);
+  return r;
+}
+
 /**
  * A melt: Ge = 0 and a log-normal relaxation spectrum, so G' ∝ ω² and G'' ∝ ω in the terminal
  * zone below 1/τ_max and a rubbery-like plateau at high ω. Zero-shear viscosity η0 = Σ g_i τ_i.
  */
-export function meltProny(o: MeltPronyOptions): PronySeries {
-  requirePositive(o.plateauModulusPa, 'plateauModulusPa');
-  requirePositive(o.peakTauS, 'peakTauS');
-  requirePositive(o.widthDecades, 'widthDecades');
-  const perDecade = o.modesPerDecade ?? 2;
-  const reach = (o.reachWidths ?? 3) * o.widthDecades;
-  requirePositive(perDecade, 'modesPerDecade');
+export function meltProny(options: MeltPronyOptions): PronySeries {
+  const o = resolveMeltPronyOptions(options);
+  const reach = o.reachWidths * o.widthDecades;
+  const perDecade = o.modesPerDecade;
   const taus = logGridByDecade(o.peakTauS * 10 ** -reach, o.peakTauS * 10 ** reach, perDecade);
   const weights = taus.map((t) => {
     const z = Math.log10(t / o.peakTauS) / o.widthDecades;
@@ -74,22 +78,29 @@ export interface TransitionPronyOptions {
   reachWidths?: number;
 }
 
+/** Checks {@link TransitionPronyOptions} and fills in the defaults, naming any bad field. */
+export function resolveTransitionPronyOptions(
+  o: TransitionPronyOptions,
+): Required<TransitionPronyOptions> {
+  const r = { ...o, modesPerDecade: o.modesPerDecade ?? 2, reachWidths: o.reachWidths ?? 6 };
+  for (const key of Object.keys(r) as (keyof TransitionPronyOptions)[]) {
+    requirePositive(r[key], key);
+  }
+  if (r.glassyModulusPa <= r.rubberyModulusPa) {
+    throw new RangeError('glassyModulusPa must be larger than rubberyModulusPa');
+  }
+  return r;
+}
+
 /**
  * A glass–rubber transition: log10 E(t) falls along a logistic curve in log10 t from the glassy to
  * the rubbery plateau. Strengths use the first-order (Alfrey) estimate H(τ) ≈ −dE/dln t at t = τ
  * (Ferry 1980, ch. 4), then are scaled so that Ge + Σ g_i is exactly the glassy modulus.
  */
-export function transitionProny(o: TransitionPronyOptions): PronySeries {
-  requirePositive(o.glassyModulusPa, 'glassyModulusPa');
-  requirePositive(o.rubberyModulusPa, 'rubberyModulusPa');
-  requirePositive(o.centreTauS, 'centreTauS');
-  requirePositive(o.widthDecades, 'widthDecades');
-  if (o.glassyModulusPa <= o.rubberyModulusPa) {
-    throw new RangeError('glassyModulusPa must be larger than rubberyModulusPa');
-  }
-  const perDecade = o.modesPerDecade ?? 2;
-  requirePositive(perDecade, 'modesPerDecade');
-  const reach = (o.reachWidths ?? 6) * o.widthDecades;
+export function transitionProny(options: TransitionPronyOptions): PronySeries {
+  const o = resolveTransitionPronyOptions(options);
+  const perDecade = o.modesPerDecade;
+  const reach = o.reachWidths * o.widthDecades;
   const drop = Math.log10(o.glassyModulusPa / o.rubberyModulusPa);
   const taus = logGridByDecade(o.centreTauS * 10 ** -reach, o.centreTauS * 10 ** reach, perDecade);
   const raw = taus.map((t) => {

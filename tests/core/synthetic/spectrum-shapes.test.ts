@@ -1,5 +1,11 @@
 import { describe, it, expect } from 'vitest';
-import { combineProny, meltProny, transitionProny } from '../../../core/synthetic';
+import {
+  combineProny,
+  meltProny,
+  resolveMeltPronyOptions,
+  resolveTransitionPronyOptions,
+  transitionProny,
+} from '../../../core/synthetic';
 import {
   pronyInstantaneous,
   pronyLoss,
@@ -98,5 +104,31 @@ describe('combineProny()', () => {
 
   it('combineProny() of nothing is an empty model', () => {
     expect(combineProny()).toEqual({ equilibriumModulusPa: 0, tauS: [], modulusPa: [] });
+  });
+});
+
+describe('resolveMeltPronyOptions()', () => {
+  it('resolveMeltPronyOptions() fills in the documented defaults', () => {
+    const base = { plateauModulusPa: 1, peakTauS: 1, widthDecades: 1 };
+    expect(resolveMeltPronyOptions(base)).toEqual({ ...base, modesPerDecade: 2, reachWidths: 3 });
+    expect(resolveMeltPronyOptions({ ...base, modesPerDecade: undefined }).modesPerDecade).toBe(2);
+  });
+});
+
+describe('resolveTransitionPronyOptions()', () => {
+  it('resolveTransitionPronyOptions() fills in the documented defaults', () => {
+    const base = { glassyModulusPa: 2, rubberyModulusPa: 1, centreTauS: 1, widthDecades: 1 };
+    expect(resolveTransitionPronyOptions(base)).toEqual({
+      ...base,
+      modesPerDecade: 2,
+      reachWidths: 6,
+    });
+  });
+
+  it('resolveTransitionPronyOptions() names a bad mode density', () => {
+    const base = { glassyModulusPa: 2, rubberyModulusPa: 1, centreTauS: 1, widthDecades: 1 };
+    expect(() => resolveTransitionPronyOptions({ ...base, modesPerDecade: -1 })).toThrow(
+      /modesPerDecade/,
+    );
   });
 });
