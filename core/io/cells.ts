@@ -59,5 +59,12 @@ export function splitHeaderOnSpaces(line: string, expected: number): string[] {
     .trim()
     .split(/\t|\s{2,}/)
     .filter((c) => c !== '');
-  return wide.length === expected ? wide : splitOnSpaces(line);
+  if (wide.length === expected) return wide;
+  // "T (°C) f (Hz)": a bracketed unit belongs to the name before it.
+  const merged: string[] = [];
+  for (const tok of splitOnSpaces(line)) {
+    if (merged.length > 0 && /^[([]/.test(tok)) merged[merged.length - 1] += ` ${tok}`;
+    else merged.push(tok);
+  }
+  return merged;
 }

@@ -7,6 +7,8 @@ export interface ColumnDraft {
   /** 0-based. */
   index: number;
   header: string;
+  /** Header without unit and temperature ("G'"). */
+  name: string;
   unitText: string;
   /** Where unitText came from: its row (0 for a mapping or none). */
   unitRow: number;
@@ -57,6 +59,7 @@ export function draftColumns(input: DraftInput): ColumnDraft[] {
     const base = {
       index: i,
       header: info.raw,
+      name: info.name,
       ...(t ? { temperatureK: t.temperatureK, temperatureAssumed: t.assumed } : {}),
     };
     const m = findMapping(input, i);

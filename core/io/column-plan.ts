@@ -98,8 +98,8 @@ function report(d: ColumnDraft, ctx: PlanContext): ColumnReport {
       ctx.file,
       d.unitRow,
       d.index + 1,
-      `column "${d.header}" was read as ${ROLE_WORDS[role]}, but its ${parsed.message}. ` +
-        `Write the unit in the header, e.g. "${d.header.replace(/\s*[([].*$/, '')} (${defaultUnit || '-'})", or ${HOW_TO_MAP}.`,
+      `column "${d.header}" was read as ${ROLE_WORDS[role]}, but its ${parsed.message.replace(/\.$/, '')}. ` +
+        `Write the unit in the header, e.g. "${d.name || d.header} (${defaultUnit || '-'})", or ${HOW_TO_MAP}.`,
     );
   }
   const c = parsed.conversion;

@@ -48,7 +48,7 @@ function fileTemperature(
     0,
     'no temperature found: no temperature column, no temperatures in the column headers, no line ' +
       'such as "# temperature: 40 °C" above the table and none in the file name (e.g. "seal_40C.csv"). ' +
-      'Add one of these, or give the temperature of this file explicitly.',
+      'Add one of these, or give the temperature of this file explicitly (`--file-temperature` on the command line).',
   );
 }
 
@@ -130,7 +130,7 @@ export function importFile(file: SourceFile, o: ResolvedImportOptions): FileImpo
   });
   const records = buildRecords(table, plan, fileT?.temperatureK, sink);
   if (records.n === 0) {
-    const first = sink.list[0];
+    const first = sink.list.find((w) => w.row >= structure.firstDataRow);
     throw new ImportError(
       'noNumericData',
       name,

@@ -17,6 +17,10 @@ const DIMENSION_WORDS: Record<UnitDimension, string> = {
   dimensionless: 'a dimensionless number',
 };
 
+function unitWords(d: UnitDimension): string {
+  return d === 'dimensionless' ? 'no unit (a plain number)' : `${DIMENSION_WORDS[d]} unit`;
+}
+
 export function describeDimension(dimension: UnitDimension): string {
   return DIMENSION_WORDS[dimension];
 }
@@ -70,7 +74,7 @@ export function parseUnit(text: string, expected?: UnitDimension): UnitParse {
     return {
       ok: false,
       reason: 'wrongDimension',
-      message: `unit "${text}" is ${DIMENSION_WORDS[found[0].dimension]} unit, but ${DIMENSION_WORDS[expected!]} was expected`,
+      message: `unit "${text}" is ${unitWords(found[0].dimension)} where ${unitWords(expected!)} is needed`,
     };
   }
   const conversion = pick[0];

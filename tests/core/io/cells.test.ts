@@ -1,0 +1,77 @@
+import { describe, it, expect } from 'vitest';
+import {
+  cellProblem,
+  parseCell,
+  splitCells,
+  splitHeaderOnSpaces,
+  splitOnSpaces,
+} from '../../../core/io/cells';
+
+describe('parseCell()', () => {
+  it('parseCell() reads plain, signed, exponent and padded numbers', () => {
+    expect(parseCell('1.5', false)).toBe(1.5);
+    expect(parseCell(' -2e5 ', false)).toBe(-2e5);
+    expect(parseCell('+.5', false)).toBe(0.5);
+    expect(parseCell('3.', false)).toBe(3);
+    expect(parseCell('1.6398E+03', false)).toBe(1639.8);
+    expect(parseCell('−4', false)).toBe(-4);
+  });
+
+  it('parseCell() reads a decimal comma only when told to', () => {
+    expect(parseCell('1,5', true)).toBe(1.5);
+    expect(parseCell('2,3e5', true)).toBe(2.3e5);
+    expect(parseCell('1,5', false)).toBeNaN();
+  });
+
+  it('parseCell() refuses what Number() would wrongly accept', () => {
+    for (const s of [
+      '',
+      '  ',
+      '0x10',
+      'Infinity',
+      '1e400',
+      '12 abc',
+      '1.2.3',
+      'NaN',
+      '1_000',
+      '0b1',
+    ]) {
+      expect(parseCell(s, false), JSON.stringify(s)).toBeNaN();
+    }
+  });
+});
+
+describe('cellProblem()', () => {
+  it('cellProblem() tells empty, NaN and text apart', () => {
+    expect(cellProblem('  ')).toBe('empty');
+    expect(cellProblem('NaN')).toBe('nan');
+    expect(cellProblem('-nan')).toBe('nan');
+    expect(cellProblem('abc')).toBe('nonNumeric');
+  });
+});
+
+describe('splitCells()', () => {
+  it('splitCells() splits on the delimiter and honours quotes through papaparse', () => {
+    expect(splitCells('a,b,c', 'comma')).toEqual(['a', 'b', 'c']);
+    expect(splitCells('"G\'\' (Pa)","x,y",3', 'comma')).toEqual(["G'' (Pa)", 'x,y', '3']);
+    expect(splitCells('1,5;2,3', 'semicolon')).toEqual(['1,5', '2,3']);
+    expect(splitCells('1\t2', 'tab')).toEqual(['1', '2']);
+  });
+
+  it('splitCells() splits runs of spaces and keeps quoted cells whole', () => {
+    expect(splitOnSpaces('  1   2\t 3 ')).toEqual(['1', '2', '3']);
+    expect(splitOnSpaces('"Storage modulus" 2')).toEqual(['Storage modulus', '2']);
+    expect(splitCells('a  b', 'spaces')).toEqual(['a', 'b']);
+  });
+});
+
+describe('splitHeaderOnSpaces()', () => {
+  it('splitHeaderOnSpaces() keeps single spaces inside names when that matches the column count', () => {
+    expect(splitHeaderOnSpaces('Storage modulus  Loss modulus  f Hz', 3)).toEqual([
+      'Storage modulus',
+      'Loss modulus',
+      'f Hz',
+    ]);
+    expect(splitHeaderOnSpaces("T f G' G''", 4)).toEqual(['T', 'f', "G'", "G''"]);
+  });
+});
