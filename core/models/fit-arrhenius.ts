@@ -1,4 +1,5 @@
 import { shiftFitStatistics } from './fit-statistics';
+import { resolveShiftFitOptions } from './shift-fit-options';
 import { preparePoints } from './prepare-points';
 import { arrheniusSlope } from './shift-model-eval';
 import type { ArrheniusFit, ShiftFitOptions, ShiftPoint } from './types';
@@ -31,7 +32,7 @@ export function fitArrhenius(
     [ea],
     options.referenceK,
     pts,
-    options.errorScaling ?? 'residual',
+    resolveShiftFitOptions(options).errorScaling,
     {
       converged: Number.isFinite(ea),
       iterations: 1,

@@ -1,4 +1,5 @@
 import { shiftFitStatistics } from './fit-statistics';
+import { resolveShiftFitOptions } from './shift-fit-options';
 import { preparePoints } from './prepare-points';
 import type { PolynomialFit, ShiftFitOptions, ShiftPoint } from './types';
 import { weightedLinearFit } from './weighted-linear-fit';
@@ -33,7 +34,7 @@ export function fitPolynomial(
     lin.coefficients,
     options.referenceK,
     pts,
-    options.errorScaling ?? 'residual',
+    resolveShiftFitOptions(options).errorScaling,
     {
       converged: ok,
       iterations: 1,

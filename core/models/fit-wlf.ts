@@ -1,4 +1,5 @@
 import { shiftFitStatistics } from './fit-statistics';
+import { resolveShiftFitOptions } from './shift-fit-options';
 import { levenbergMarquardtFit } from './levenberg-marquardt-fit';
 import type { PreparedPoints } from './prepare-points';
 import { preparePoints } from './prepare-points';
@@ -54,11 +55,12 @@ export function fitWlf(points: readonly ShiftPoint[], options: WlfFitOptions): W
       'fitWlf needs at least two shift factors away from the reference temperature',
     );
   }
-  const minC2 = referenceK - Math.min(...pts.temperatureK) + 1e-3;
-  const init = options.initial ?? startingValues(pts, referenceK, Math.max(minC2, 0));
+  // the pole Tr − C2 must lie below the reference and below the coldest isotherm
+  const minC2 = Math.max(referenceK - Math.min(...pts.temperatureK), 0) + 1e-3;
+  const init = options.initial ?? startingValues(pts, referenceK, minC2);
   if (!(init[1] > minC2)) {
     throw new RangeError(
-      `initial C2 must exceed ${minC2.toFixed(2)} K (Tr minus the lowest temperature)`,
+      `initial C2 must exceed ${minC2.toFixed(2)} K (the WLF pole Tr − C2 must lie below Tr and the coldest isotherm)`,
     );
   }
   const scale = [Math.abs(init[0]) || 1, init[1]];
@@ -94,7 +96,7 @@ export function fitWlf(points: readonly ShiftPoint[], options: WlfFitOptions): W
     [c1, c2K],
     referenceK,
     pts,
-    options.errorScaling ?? 'residual',
+    resolveShiftFitOptions(options).errorScaling,
     { converged, iterations: lm.iterations, reason },
     options.glassTransitionK,
   );

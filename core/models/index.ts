@@ -2,6 +2,8 @@
 export * from './shift-laws';
 export type * from './types';
 export { studentTCdf, studentTQuantile } from './student-t';
+export { resolveShiftFitOptions } from './shift-fit-options';
+export type { ResolvedShiftFitOptions } from './shift-fit-options';
 export { preparePoints } from './prepare-points';
 export type { PreparedPoints } from './prepare-points';
 export { weightedLinearFit } from './weighted-linear-fit';

@@ -2,7 +2,7 @@
 export * from './prony-model';
 export type * from './types';
 export { relaxationTimeGrid } from './tau-grid';
-export { fitProny } from './prony-fit';
+export { fitProny, resolvePronyFitOptions } from './prony-fit';
 export type { PronyFitError, PronyFitOptions, PronyFitResult } from './prony-fit';
 export { denormaliseProny, normaliseProny, pronyZeroShearViscosity } from './prony-forms';
 export { creepCompliance, creepFromProny } from './creep-from-prony';

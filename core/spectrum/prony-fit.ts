@@ -43,8 +43,9 @@ export interface PronyFitResult extends FitStatus {
   warnings: SpectrumWarning[];
 }
 
-function resolveOptions(
-  o: PronyFitOptions,
+/** PronyFitOptions with every default applied and checked. */
+export function resolvePronyFitOptions(
+  o: PronyFitOptions = {},
 ): Required<Omit<PronyFitOptions, 'maxIterations'>> & { maxIterations?: number } {
   const r = {
     modesPerDecade: o.modesPerDecade ?? 2,
@@ -80,7 +81,7 @@ function basis(kind: Kind, x: number, tau: number[], j: number): number {
 
 /** Fits a Prony series to reduced master-curve data. */
 export function fitProny(curve: ReducedCurve, options: PronyFitOptions = {}): PronyFitResult {
-  const o = resolveOptions(options);
+  const o = resolvePronyFitOptions(options);
   const n = curve.x?.length ?? 0;
   const timeDomain = curve.relaxation !== undefined;
   if (timeDomain && (curve.storage || curve.loss)) {

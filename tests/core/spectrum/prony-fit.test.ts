@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { fitProny } from '../../../core/spectrum/prony-fit';
+import { fitProny, resolvePronyFitOptions } from '../../../core/spectrum/prony-fit';
 import { pronyLoss, pronyRelaxation, pronyStorage } from '../../../core/spectrum/prony-model';
 import { seededRandom, smoothProny, syntheticIsotherms } from '../../../core/synthetic';
 import { expectAbsClose, expectRelClose } from '../../helpers/assert-close';
@@ -146,6 +146,15 @@ describe('fitProny()', () => {
     const f = fitProny({ x, loss: x.map((w) => pronyLoss(truth, w)) });
     expect(f.series.equilibriumModulusPa).toBe(0);
     expect(f.warnings[0].message).toMatch(/Ge set to 0/);
+  });
+
+  it('resolvePronyFitOptions() applies the documented defaults', () => {
+    expect(resolvePronyFitOptions()).toEqual({
+      modesPerDecade: 2,
+      extendDecades: 0,
+      fitEquilibrium: true,
+      maxIterations: undefined,
+    });
   });
 
   it('fitProny() rejects wrong calls', () => {
