@@ -21,7 +21,7 @@ export const MISMATCH_FLOOR_DECADES = 0.005;
 export const VGP_FLOOR_DEG = 0.3;
 
 /** Grade thresholds on the ratios (calibrated on the synthetic sets in tests/core/shift). */
-export const FAIR_RATIO = 1.6;
+export const FAIR_RATIO = 1.8;
 export const POOR_RATIO = 2.5;
 /** Shifts from two quantities disagree when they differ by more than this and by > Z_LIMIT σ. */
 export const DISAGREE_DECADES = 0.1;

@@ -5,7 +5,7 @@
 import type { FitProblem } from './problem';
 import { parameterCount } from './problem';
 import type { ResidualSink } from './residuals';
-import { robustRho, robustWeight } from './robust';
+import { lossCode, robustRho, robustWeight } from './robust';
 import type { RobustLoss } from './types';
 
 export class NormalSink implements ResidualSink {
@@ -16,6 +16,7 @@ export class NormalSink implements ResidualSink {
   weightedSquares = 0;
   count = 0;
   private readonly n: number;
+  private readonly code: number;
   private readonly idx = new Int32Array(4);
   private readonly cf = new Float64Array(4);
 
@@ -27,6 +28,7 @@ export class NormalSink implements ResidualSink {
   ) {
     this.size = parameterCount(p);
     this.n = p.curves.length;
+    this.code = lossCode(loss);
     this.a = new Float64Array(withMatrix ? this.size * this.size : 0);
     this.g = new Float64Array(withMatrix ? this.size : 0);
   }
@@ -43,9 +45,9 @@ export class NormalSink implements ResidualSink {
   ): void {
     // Standardised residual z = r·√w has the noise of one point; the robust loss acts on z.
     const z = r * Math.sqrt(w);
-    this.lossSum += robustRho(this.loss, z, this.scale);
+    this.lossSum += robustRho(this.code, z, this.scale);
     this.count += binWeight;
-    const wt = w * robustWeight(this.loss, z, this.scale);
+    const wt = w * robustWeight(this.code, z, this.scale);
     this.weightedSquares += wt * r * r;
     if (!this.withMatrix) return;
     const idx = this.idx;

@@ -18,6 +18,8 @@ export interface FitSeries {
   binStart: Int32Array;
   /** y sorted ascending, for quick overlap tests in y. */
   ySorted: Float64Array;
+  /** dy/dlx at each entry from a local quadratic through 5 entries (noise-damped slope). */
+  slope: Float64Array;
 }
 
 export interface FitProblem {
@@ -34,6 +36,12 @@ export interface FitProblem {
   /** Candidate pairs as a flat list i0, j0, i1, j1, … (i < j). */
   pairs: Int32Array;
   minOverlapPoints: number;
+  /**
+   * Use the noise-damped slopes in the Jacobian. The fit itself uses the exact segment slopes
+   * (the true gradient of the objective); the covariance uses these, because squared slopes of
+   * noisy segments overstate the information where a curve is flat.
+   */
+  smoothSlopes?: boolean;
 }
 
 export function parameterCount(p: FitProblem): number {

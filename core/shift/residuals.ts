@@ -76,6 +76,8 @@ function walk(
   const bx = b.lx;
   const by = b.y;
   const bw = b.w;
+  const bs = b.slope;
+  const smooth = p.smoothSlopes === true;
   const last = bx.length - 1;
   const lo = bx[0];
   const hi = bx[last];
@@ -90,7 +92,8 @@ function walk(
     const lam = (q - bx[k]) / h;
     const r = a.y[e] + yOff - (by[k] + slope * (q - bx[k]));
     const f = 1 / a.w[e] + ((1 - lam) * (1 - lam)) / bw[k] + (lam * lam) / bw[k + 1];
-    sink.add(owner, other, d, e, r, 1 / f, alpha - sigma * slope, a.w[e], k, lam);
+    const gs = smooth ? (1 - lam) * bs[k] + lam * bs[k + 1] : slope;
+    sink.add(owner, other, d, e, r, 1 / f, alpha - sigma * gs, a.w[e], k, lam);
   }
 }
 

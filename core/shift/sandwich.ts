@@ -11,7 +11,7 @@
  */
 import type { FitProblem } from './problem';
 import type { ResidualSink } from './residuals';
-import { robustWeight } from './robust';
+import { lossCode, robustWeight } from './robust';
 import type { RobustLoss } from './types';
 
 export class SandwichSink implements ResidualSink {
@@ -19,6 +19,7 @@ export class SandwichSink implements ResidualSink {
   private readonly bh = new Map<number, Float64Array>();
   private readonly bv = new Map<number, Float64Array>();
   private readonly n: number;
+  private readonly code: number;
   private readonly nd: number;
 
   constructor(
@@ -27,6 +28,7 @@ export class SandwichSink implements ResidualSink {
     private readonly scale: number,
   ) {
     this.n = p.curves.length;
+    this.code = lossCode(loss);
     this.nd = p.alpha.length;
   }
 
@@ -57,7 +59,7 @@ export class SandwichSink implements ResidualSink {
     k: number,
     lam: number,
   ): void {
-    const wt = w * robustWeight(this.loss, r * Math.sqrt(w), this.scale);
+    const wt = w * robustWeight(this.code, r * Math.sqrt(w), this.scale);
     // Score contribution wt·r·∇r with ∇r = g (u_owner − u_other) [+ β (v_owner − v_other)].
     // r = e_owner − (1 − λ) e_k − λ e_k+1 + …; a point of `other` enters with the opposite sign,
     // and (u_owner − u_other) = −(u_other − u_owner), so both knots get +coef in their own frame.

@@ -139,10 +139,14 @@ export function scanPair(
     const r = score(dh);
     if (r && (!best || r.score < best.score)) best = r;
   };
-  const n = Math.max(1, Math.ceil((dhHi - dhLo) / s.step));
+  // Coarse grid at twice the step, then the step, then a tenth of it around the best.
+  const coarseStep = 2 * s.step;
+  const n = Math.max(1, Math.ceil((dhHi - dhLo) / coarseStep));
   for (let i = 0; i <= n; i++) consider(dhLo + ((dhHi - dhLo) * i) / n);
   if (!best) return null;
-  const coarse: ScanResult = best;
-  for (let i = -10; i <= 10; i++) consider(coarse.dh + (s.step * i) / 10);
+  const c1: ScanResult = best;
+  for (let i = -2; i <= 2; i++) consider(c1.dh + s.step * i);
+  const c2: ScanResult = best;
+  for (let i = -5; i <= 5; i++) consider(c2.dh + (s.step * i) / 10);
   return best;
 }

@@ -55,7 +55,55 @@ export function buildSeries(
     pointIndex: Int32Array.from(idx),
     binStart: Int32Array.from(starts),
     ySorted: Float64Array.from(yArr).sort(),
+    slope: localSlopes(Float64Array.from(outX), yArr),
   };
+}
+
+/**
+ * Slope at each entry from a least-squares quadratic through the 5 nearest entries (3 or the
+ * segment slope for short curves): the derivative of a local polynomial smoother
+ * (Savitzky & Golay, Anal. Chem. 36, 1964, generalised to uneven spacing).
+ */
+export function localSlopes(lx: Float64Array, y: Float64Array): Float64Array {
+  const n = lx.length;
+  const out = new Float64Array(n);
+  if (n < 2) return out;
+  if (n < 5) {
+    for (let i = 0; i < n; i++) {
+      const a = Math.max(0, i - 1);
+      const b = Math.min(n - 1, i + 1);
+      out[i] = (y[b] - y[a]) / (lx[b] - lx[a]);
+    }
+    return out;
+  }
+  for (let c = 0; c < n; c++) {
+    const lo = Math.max(0, Math.min(n - 5, c - 2));
+    let s0 = 0;
+    let s1 = 0;
+    let s2 = 0;
+    let s3 = 0;
+    let s4 = 0;
+    let t0 = 0;
+    let t1 = 0;
+    let t2 = 0;
+    for (let i = lo; i < lo + 5; i++) {
+      const x = lx[i] - lx[c];
+      const x2 = x * x;
+      s0 += 1;
+      s1 += x;
+      s2 += x2;
+      s3 += x2 * x;
+      s4 += x2 * x2;
+      t0 += y[i];
+      t1 += x * y[i];
+      t2 += x2 * y[i];
+    }
+    const det = s0 * (s2 * s4 - s3 * s3) - s1 * (s1 * s4 - s3 * s2) + s2 * (s1 * s3 - s2 * s2);
+    // Coefficient b1 of the quadratic b0 + b1 x + b2 x² (Cramer's rule), the slope at x = 0.
+    const d1 = s0 * (t1 * s4 - s3 * t2) - t0 * (s1 * s4 - s3 * s2) + s2 * (s1 * t2 - t1 * s2);
+    out[c] = det !== 0 ? d1 / det : 0;
+  }
+  return out;
 }
 
 /** Number of entries of a sorted array within [lo, hi]. */

@@ -45,7 +45,14 @@ export interface SolveOutcome {
   objective: number;
 }
 
-const STEP_TOL_DECADES = 1e-7;
+/** Steps below this are immaterial (decades). */
+const STEP_TOL_DECADES = 1e-6;
+/** Relative decrease of the objective below which the fit has converged. */
+const REL_TOL = 1e-10;
+/** Rejected steps in a row after which no further decrease is possible. */
+const MAX_REJECTIONS = 4;
+/** A rejected step smaller than this means the optimum is reached for all practical purposes. */
+const SMALL_STEP_DECADES = 1e-4;
 
 export function solveOffsets(
   p: FitProblem,
@@ -73,11 +80,12 @@ export function solveOffsets(
   while (!converged && iterations < s.maxIterations) {
     iterations++;
     let accepted = false;
-    while (!accepted) {
+    let rejections = 0;
+    while (!accepted && rejections < MAX_REJECTIONS) {
       const step = kktStep(cur, free, cons, theta, lambda);
       if (!step) {
         lambda *= 10;
-        if (lambda > 1e12) break;
+        rejections++;
         continue;
       }
       const trial = Float64Array.from(theta);
@@ -86,19 +94,31 @@ export function solveOffsets(
         trial[free[k]] += step[k];
         maxStep = Math.max(maxStep, Math.abs(step[k]));
       }
+      if (maxStep < STEP_TOL_DECADES) {
+        converged = true;
+        reason = 'step below tolerance';
+        break;
+      }
       const next = evaluate(trial, true);
-      if (next.objective() <= cur.objective()) {
+      const before = cur.objective();
+      const after = next.objective();
+      if (after <= before) {
         theta.set(trial);
         cur = next;
         lambda = Math.max(lambda / 3, 1e-9);
         accepted = true;
-        if (maxStep < STEP_TOL_DECADES) {
+        if (before - after <= REL_TOL * before) {
           converged = true;
-          reason = 'step below tolerance';
+          reason = 'objective change below tolerance';
         }
       } else {
         lambda *= 4;
-        if (maxStep < STEP_TOL_DECADES || lambda > 1e12) break;
+        rejections++;
+        if (maxStep < SMALL_STEP_DECADES) {
+          converged = true;
+          reason = 'step below 1e-4 decades';
+          break;
+        }
       }
     }
     if (!accepted && !converged) {
@@ -108,9 +128,13 @@ export function solveOffsets(
   }
   const dof = Math.max(1, cur.count - m + nc);
   const residualVariance = cur.weightedSquares / dof;
-  const sandwich = new SandwichSink(p, s.loss, s.scale);
-  allResiduals(p, theta, sandwich);
-  const covariance = covarianceOf(cur, free, cons, residualVariance, sandwich.meat());
+  // Covariance with noise-damped slopes (see FitProblem.smoothSlopes).
+  const smooth: FitProblem = { ...p, smoothSlopes: true };
+  const bread = new NormalSink(smooth, s.loss, s.scale, true);
+  allResiduals(smooth, theta, bread);
+  const sandwich = new SandwichSink(smooth, s.loss, s.scale);
+  allResiduals(smooth, theta, sandwich);
+  const covariance = covarianceOf(bread, free, cons, residualVariance, sandwich.meat());
   return {
     theta,
     converged,
