@@ -63,4 +63,17 @@ describe('suggestShiftModel()', () => {
     expect(hint.recommended).toBe('arrhenius');
     expect(hint.reasons[0]).toMatch(/below Tg/);
   });
+
+  it('suggestShiftModel() falls back to the polynomial only when log aT bends the wrong way for both laws', () => {
+    // WLF and Arrhenius are both convex in T (d² log aT/dT² > 0); a concave curve fits neither
+    const rng = seededRandom(6);
+    const pts = [-30, -20, -10, 10, 20, 30].map((d) => ({
+      temperatureK: 300 + d,
+      log10aT: -0.1 * d - 0.002 * d * d + 0.005 * rng.normal(),
+      stdErr: 0.005,
+    }));
+    const hint = suggestShiftModel(fitAll(pts, 300));
+    expect(hint.recommended).toBe('polynomial');
+    expect(hint.reasons.join(' ')).toMatch(/Do not extrapolate/);
+  });
 });

@@ -74,6 +74,39 @@ describe('fitProny()', () => {
     expect(vsTruthL).toBeLessThan(0.01);
   });
 
+  // Interconversion G(t) from G′, G″ through the series. Emri et al. (J. Non-Newt. Fluid Mech.
+  // 129, 2005) show the naive G(t) ≈ G′(1/t) is poor; through the series the true G(t) is
+  // followed to within 3 % (measured worst 2.0 %) over the inner six decades of the window,
+  // while the naive reading misses by more than 10 % (measured 24 %).
+  it('fitProny() series gives G(t) from noisy G′, G″ within 3 % of the true G(t)', () => {
+    const truth = smoothProny({
+      tauMinS: 1e-6,
+      tauMaxS: 1e4,
+      modesPerDecade: 3,
+      glassyModulusPa: 1e9,
+      equilibriumModulusPa: 1e6,
+    });
+    const rng = seededRandom(21);
+    const x = Array.from({ length: 161 }, (_, i) => 10 ** (-4 + i * 0.05)); // 1e-4 … 1e4 rad/s
+    const f = fitProny({
+      x,
+      storage: x.map((w) => pronyStorage(truth, w) * Math.exp(0.02 * rng.normal())),
+      loss: x.map((w) => pronyLoss(truth, w) * Math.exp(0.02 * rng.normal())),
+    });
+    let worst = 0;
+    let naive = 0;
+    for (let i = 0; i <= 60; i++) {
+      const t = 10 ** (-3 + i * 0.1);
+      worst = Math.max(
+        worst,
+        Math.abs(pronyRelaxation(f.series, t) / pronyRelaxation(truth, t) - 1),
+      );
+      naive = Math.max(naive, Math.abs(pronyStorage(truth, 1 / t) / pronyRelaxation(truth, t) - 1));
+    }
+    expect(worst).toBeLessThan(0.03);
+    expect(naive).toBeGreaterThan(0.1);
+  });
+
   it('fitProny() normalised form sums to 1 and G0 = Ge + Σ g_i', () => {
     const { x, storage, loss } = syntheticMaster(0.02, 12);
     const f = fitProny({ x, storage, loss });
