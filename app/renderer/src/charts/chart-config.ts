@@ -53,6 +53,8 @@ function seriesDataset(
 }
 
 function axisOptions(kind: 'log' | 'linear', label: string, min?: number, max?: number) {
+  // Chart.js formats tick labels after afterBuildTicks through ticks.callback: keep our labels.
+  const labels = new Map<number, string>();
   return {
     type: kind === 'log' ? ('logarithmic' as const) : ('linear' as const),
     min,
@@ -60,15 +62,20 @@ function axisOptions(kind: 'log' | 'linear', label: string, min?: number, max?: 
     title: { display: true, text: label, color: INK, font: { size: 12 } },
     grid: { color: GRID },
     border: { color: '#9aa3a0' },
-    ticks: { color: INK, autoSkip: kind !== 'log', maxRotation: 0 },
+    ticks: {
+      color: INK,
+      autoSkip: kind !== 'log',
+      maxRotation: 0,
+      callback:
+        kind === 'log' ? (value: number | string) => labels.get(Number(value)) ?? '' : undefined,
+    },
     afterBuildTicks:
       kind === 'log'
         ? (scale: Scale) => {
-            scale.ticks = decadeTicks(scale.min, scale.max).map((t) => ({
-              value: t.value,
-              label: t.label,
-              major: t.major,
-            }));
+            const ticks = decadeTicks(scale.min, scale.max);
+            labels.clear();
+            for (const t of ticks) labels.set(t.value, t.label);
+            scale.ticks = ticks.map((t) => ({ value: t.value, label: t.label, major: t.major }));
           }
         : undefined,
   };

@@ -1,0 +1,254 @@
+/**
+ * The app as a user drives it, in Debian's Chromium: the demo opens with a master curve, a sample
+ * is imported, the reference temperature changes, an isotherm is excluded, a curve is dragged,
+ * the drag is undone, results are exported, the analysis is saved and reopened, and the autosave
+ * restores it after a reload. Assertions are on visible text and numbers and on painted pixels;
+ * screenshots of every view go to test-results/artifacts/.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { preview, type PreviewServer } from 'vite';
+import type { BrowserContext, Page } from 'playwright-core';
+import { mkdirSync, readdirSync, readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { ARTIFACT_DIR, launchBrowser } from '../helpers/browser';
+import { expectAbsClose } from '../helpers/assert-close';
+
+const ROOT = process.cwd();
+const SEAL = join(ROOT, 'samples', 'seal-dma');
+
+let server: PreviewServer;
+let ctx: BrowserContext;
+let page: Page;
+
+const shot = (name: string): Promise<Buffer> =>
+  page.screenshot({ path: join(ARTIFACT_DIR, `app-${name}.png`) });
+
+/** Non-white pixels on the canvas of the plot on screen (the plot really drew). */
+async function paintedPixels(): Promise<number> {
+  return page.evaluate(() => {
+    const c = document.querySelector<HTMLCanvasElement>('canvas[data-plot]');
+    const ctx2d = c?.getContext('2d');
+    if (!c || !ctx2d) return 0;
+    const d = ctx2d.getImageData(0, 0, c.width, c.height).data;
+    let n = 0;
+    for (let i = 0; i < d.length; i += 4) if (d[i] < 235 || d[i + 1] < 235 || d[i + 2] < 235) n++;
+    return n;
+  });
+}
+
+const rowText = (id: string, role: string): Promise<string> =>
+  page.locator(`tr[data-isotherm="${id}"] [data-role="${role}"]`).innerText();
+
+/** The isotherm id of the roster row showing exactly this temperature (°C, one decimal). */
+async function rowIdAt(celsius: string): Promise<string> {
+  const exact = new RegExp(`^\\s*${celsius.replace('.', '\\.')}\\s*$`);
+  const row = page
+    .locator('tr[data-isotherm]')
+    .filter({ has: page.locator('td:first-child', { hasText: exact }) });
+  return (await row.first().getAttribute('data-isotherm')) ?? '';
+}
+
+async function settled(): Promise<void> {
+  await page.waitForSelector('[data-role="busy"][aria-busy="false"]');
+}
+
+beforeAll(async () => {
+  mkdirSync(ARTIFACT_DIR, { recursive: true });
+  server = await preview({
+    root: ROOT,
+    configFile: join(ROOT, 'vite.config.ts'),
+    preview: { host: '127.0.0.1', port: 0, strictPort: false },
+    logLevel: 'warn',
+  });
+  ctx = await launchBrowser();
+  page = await ctx.newPage();
+  page.on('pageerror', (e) => console.error('page error:', e.message));
+  await page.goto(server.resolvedUrls!.local[0]);
+});
+
+afterAll(async () => {
+  await ctx?.close();
+  await new Promise<void>((r) => server?.httpServer.close(() => r()));
+});
+
+describe('the Thermoshift app in Chromium', () => {
+  it('opens the invented demo with a master curve on the first start', async () => {
+    await page.waitForSelector('[data-view="master"] canvas');
+    await settled();
+    expect(await page.innerText('[data-role="sample-name"]')).toMatch(/invented/);
+    expect(await page.innerText('[data-role="cautions"]')).toMatch(/extrapolation/);
+    expect(await page.locator('tr[data-isotherm]').count()).toBe(9);
+    expect(await page.innerText('[data-role="tref-used"]')).toBe('190.0 °C');
+    expect(await paintedPixels()).toBeGreaterThan(5000);
+    await shot('master-curve');
+    for (const [tab, name] of [
+      ['measured', 'isotherms'],
+      ['shift', 'shift-factors'],
+      ['vgp', 'van-gurp-palmen'],
+    ] as const) {
+      await page.click(`[data-view-tab="${tab}"]`);
+      await page.waitForSelector(`canvas[data-plot]`);
+      expect(await paintedPixels(), `${tab} drew`).toBeGreaterThan(3000);
+      await shot(name);
+    }
+    await page.click('[data-view-tab="models"]');
+    expect(await page.innerText('.models-view')).toMatch(/Prony series: \d+ modes/);
+    await shot('models');
+  });
+
+  it('imports a sample through the import preview', async () => {
+    const files = readdirSync(SEAL)
+      .filter((f) => f.endsWith('.txt'))
+      .map((f) => join(SEAL, f));
+    const chooser = page.waitForEvent('filechooser');
+    await page.click('[data-role="open-data"]');
+    await (await chooser).setFiles(files);
+    await page.waitForSelector('[data-role="import-groups"] tr');
+    expect(await page.locator('[data-role="import-groups"] tr').count()).toBe(11);
+    await shot('import-preview');
+    await page.click('[data-role="import-accept"]');
+    await page.waitForFunction(() =>
+      document.querySelector('[data-role="sample-name"]')?.textContent?.includes('QS-72'),
+    );
+    await settled();
+    expect(await page.locator('tr[data-isotherm]').count()).toBe(11);
+  });
+
+  it('changes the reference temperature and shows shifts that match the generator’s truth', async () => {
+    await page.fill('[data-role="tref"]', '20');
+    await page.press('[data-role="tref"]', 'Enter');
+    await page.waitForFunction(
+      () => document.querySelector('[data-role="tref-used"]')?.textContent?.trim() === '20.0 °C',
+    );
+    await settled();
+    const at20 = await rowIdAt('20.0');
+    const at60 = await rowIdAt('60.0');
+    expectAbsClose(Number(await rowText(at20, 'log-aT')), 0, 0.0005, 'log10 aT at Tref');
+    // Truth of the invented sample (samples/seal-dma/truth.json): WLF C1 = 10.5, C2 = 95 K at
+    // −20 °C, so relative to 20 °C: log10 aT(60 °C) = −10.5·80/175 + 10.5·40/135 = −1.689.
+    // 0.05 decades allows for the 2 % noise of the invented data (the shift engine's own
+    // accuracy tests are stricter).
+    const truth = JSON.parse(readFileSync(join(SEAL, 'truth.json'), 'utf8')) as {
+      shiftLaw: { C1: number; C2K: number };
+    };
+    const wlf = (dT: number): number => (-truth.shiftLaw.C1 * dT) / (truth.shiftLaw.C2K + dT);
+    expectAbsClose(
+      Number(await rowText(at60, 'log-aT')),
+      wlf(80) - wlf(40),
+      0.05,
+      'log10 aT(60 °C)',
+    );
+    await shot('reference-20C');
+  });
+
+  it('excludes an isotherm and re-fits without it', async () => {
+    const id = await rowIdAt('-40.0');
+    await page.click(`tr[data-isotherm="${id}"] [data-role="include"]`);
+    await page.waitForFunction(() =>
+      /10 of 11/.test(document.querySelector('.findings')?.textContent ?? ''),
+    );
+    expect(await page.isChecked(`tr[data-isotherm="${id}"] [data-role="include"]`)).toBe(false);
+  });
+
+  it('drags a curve on the master curve, re-fits the rest live, and undoes the drag', async () => {
+    await page.click('[data-view-tab="master"]');
+    await settled();
+    const id = await rowIdAt('0.0');
+    const before = Number(await rowText(id, 'log-aT'));
+    const canvas = page.locator('canvas[data-plot="master"]');
+    const anchors = JSON.parse((await canvas.getAttribute('data-anchors')) ?? '{}') as Record<
+      string,
+      [number, number]
+    >;
+    expect(anchors[id], `curve ${id} is on the plot`).toBeDefined();
+    const box = (await canvas.boundingBox())!;
+    const [x, y] = anchors[id];
+    await page.mouse.move(box.x + x, box.y + y);
+    await page.mouse.down();
+    await page.mouse.move(box.x + x + 15, box.y + y, { steps: 5 });
+    await page.mouse.up();
+    await page.waitForFunction(
+      (sel) => document.querySelector(sel)?.getAttribute('aria-pressed') === 'true',
+      `tr[data-isotherm="${id}"] [data-role="lock"]`,
+    );
+    await settled();
+    const after = Number(await rowText(id, 'log-aT'));
+    expect(after - before, 'dragging right increases log10 aT').toBeGreaterThan(0.1);
+    await shot('after-drag');
+
+    await page.keyboard.press('Control+z');
+    await page.waitForFunction(
+      (sel) => document.querySelector(sel)?.getAttribute('aria-pressed') === 'false',
+      `tr[data-isotherm="${id}"] [data-role="lock"]`,
+    );
+    await settled();
+    expectAbsClose(Number(await rowText(id, 'log-aT')), before, 0.0005, 'log10 aT after undo');
+  });
+
+  it('nudges a curve with its button, as one undo step', async () => {
+    const id = await rowIdAt('10.0');
+    const before = Number(await rowText(id, 'log-aT'));
+    await page.click(`tr[data-isotherm="${id}"] [data-role="nudge-right"]`);
+    await settled();
+    expectAbsClose(Number(await rowText(id, 'log-aT')), before + 0.05, 0.0015, 'nudged log10 aT');
+    await page.click('[data-role="undo"]');
+    await settled();
+    expectAbsClose(Number(await rowText(id, 'log-aT')), before, 0.0005, 'log10 aT after undo');
+  });
+
+  it('exports the shift table, a plot as PNG, and saves and reopens the analysis', async () => {
+    await page.click('[data-role="export"]');
+    const csvDownload = page.waitForEvent('download');
+    await page.click('[data-export="shift-factors.csv"]');
+    const csv = readFileSync((await (await csvDownload).path())!, 'utf8');
+    expect(csv).toMatch(/log10/);
+    expect(csv.split('\n').filter((l) => /^T\d\d/.test(l))).toHaveLength(11);
+
+    const pngDownload = page.waitForEvent('download');
+    await page.click('[data-role="export-png"]');
+    const png = readFileSync((await (await pngDownload).path())!);
+    expect(png.subarray(1, 4).toString()).toBe('PNG');
+
+    const svgDownload = page.waitForEvent('download');
+    await page.click('[data-role="export-svg"]');
+    expect(readFileSync((await (await svgDownload).path())!, 'utf8')).toMatch(/<svg[\s\S]*<\/svg>/);
+
+    const saved = page.waitForEvent('download');
+    await page.click('[data-role="save"]');
+    const savedPath = (await (await saved).path())!;
+    expect(JSON.parse(readFileSync(savedPath, 'utf8')).format).toBe('thermoshift-analysis');
+
+    await page.click('[data-role="recent"]');
+    await page.click('text=Invented demo analysis');
+    await page.waitForFunction(() =>
+      document.querySelector('[data-role="sample-name"]')?.textContent?.includes('HX-310'),
+    );
+    const chooser = page.waitForEvent('filechooser');
+    await page.click('[data-role="open-analysis"]');
+    await (await chooser).setFiles(savedPath);
+    await page.waitForFunction(() =>
+      document.querySelector('[data-role="sample-name"]')?.textContent?.includes('QS-72'),
+    );
+    await settled();
+    expect(await page.innerText('[data-role="tref-used"]')).toBe('20.0 °C');
+    expect(await page.locator('[data-role="include"]:not(:checked)').count()).toBe(1);
+  });
+
+  it('restores the autosaved analysis after a reload', async () => {
+    await page.waitForTimeout(1000); // autosave waits 0.8 s after the last change
+    await page.reload();
+    await page.waitForFunction(() =>
+      document.querySelector('[data-role="sample-name"]')?.textContent?.includes('QS-72'),
+    );
+    expect(await page.innerText('[data-role="notice"]')).toMatch(/Restored/);
+    await settled();
+    expect(await page.innerText('[data-role="tref-used"]')).toBe('20.0 °C');
+  });
+
+  it('shows the keyboard shortcuts', async () => {
+    await page.keyboard.press('F1');
+    expect(await page.innerText('[aria-label="Keyboard shortcuts"]')).toMatch(/Ctrl\+Z/);
+    await shot('shortcuts');
+    await page.keyboard.press('Escape');
+  });
+});
