@@ -71,10 +71,10 @@ export function overlapMismatch(prepared: PreparedOverlap, log10aT: ArrayLike<nu
   const sink = new NormalSink(prepared.problem, 'none', 1, false);
   const touched = new Uint8Array(prepared.ids.length);
   allResiduals(prepared.problem, log10aT, {
-    add(owner, other, d, e, r, w, g, bin, k, lam) {
+    add(owner, other, d, e, r, w, g, bin) {
       touched[owner] = 1;
       touched[other] = 1;
-      sink.add(owner, other, d, e, r, w, g, bin, k, lam);
+      sink.add(owner, other, d, e, r, w, g, bin);
     },
   });
   let penalty = 0;

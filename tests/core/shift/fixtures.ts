@@ -1,0 +1,192 @@
+/**
+ * Invented, seeded test materials for the shift engine (no real lab data). Spectra are chosen so
+ * that the measured windows hold features the shift can grip: a melt whose terminal zone
+ * (G' ∝ ω², G'' ∝ ω) lies in the window, a rubber across its glass–rubber transition, and a
+ * relaxation modulus falling steeply through the window. Temperatures are spaced so that
+ * neighbouring isotherms overlap by two decades or more (common practice when planning TTS tests).
+ */
+import { smoothProny, syntheticIsotherms } from '../../../core/synthetic';
+import type { ShiftLaw, SyntheticOptions } from '../../../core/synthetic';
+import type { PronySeries } from '../../../core/spectrum/prony-model';
+
+/** Melt: power-law modes up to 1 s, no equilibrium modulus → terminal zone below ~1 rad/s. */
+export const MELT: PronySeries = smoothProny({
+  tauMinS: 1e-5,
+  tauMaxS: 1,
+  modesPerDecade: 2,
+  glassyModulusPa: 1e6,
+  equilibriumModulusPa: 0,
+  slope: 0.3,
+});
+
+/** Rubber across its transition: 1 GPa glassy to 1 MPa rubbery. */
+export const RUBBER: PronySeries = smoothProny({
+  tauMinS: 1e-8,
+  tauMaxS: 1e3,
+  modesPerDecade: 2,
+  glassyModulusPa: 1e9,
+  equilibriumModulusPa: 1e6,
+  slope: 0.6,
+});
+
+/** Relaxation: G(t) ∝ t^−0.9 through the window (steep, so one quantity suffices). */
+export const RELAXING: PronySeries = smoothProny({
+  tauMinS: 1e-4,
+  tauMaxS: 1e7,
+  modesPerDecade: 2,
+  glassyModulusPa: 1e12,
+  equilibriumModulusPa: 1e3,
+  slope: 0.9,
+});
+
+/**
+ * 'Universal' WLF constants at about Tg + 50 K: C1 = 8.86, C2 = 101.6 K (Williams, Landel & Ferry,
+ * J. Am. Chem. Soc. 77, 3701, 1955).
+ */
+export const WLF_UNIVERSAL: ShiftLaw = { kind: 'wlf', c1: 8.86, c2K: 101.6 };
+/**
+ * Polybutadiene (96 % cis), T0 = 298 K: C1 = 3.44, C2 = 196.6 K (Physical Properties of Polymers
+ * Handbook, J. E. Mark ed., table of WLF parameters; as quoted in DOMAIN.md §3).
+ */
+export const WLF_POLYBUTADIENE: ShiftLaw = { kind: 'wlf', c1: 3.44, c2K: 196.6 };
+/** Melt flow activation energy 60 kJ/mol, the order quoted for branched polyethylene (from memory). */
+export const ARRHENIUS_MELT: ShiftLaw = { kind: 'arrhenius', activationEnergyJPerMol: 6e4 };
+/** A steeper Arrhenius law, 200 kJ/mol (a secondary-transition-like value, invented). */
+export const ARRHENIUS_STEEP: ShiftLaw = { kind: 'arrhenius', activationEnergyJPerMol: 2e5 };
+
+export const temperatures = (
+  referenceK: number,
+  count: number,
+  below: number,
+  stepK: number,
+): number[] => Array.from({ length: count }, (_, i) => referenceK + (i - below) * stepK);
+
+export interface Case {
+  name: string;
+  options: Omit<SyntheticOptions, 'relativeNoise' | 'seed'>;
+}
+
+const osc = {
+  testKind: 'oscillatory',
+  deformation: 'shear',
+  xMin: 0.1,
+  xMax: 100,
+  pointsPerDecade: 5,
+} as const;
+const rel = {
+  testKind: 'relaxation',
+  deformation: 'shear',
+  xMin: 1,
+  xMax: 1000,
+  pointsPerDecade: 5,
+} as const;
+
+export const MELT_ARRHENIUS: Case = {
+  name: 'melt, Arrhenius 60 kJ/mol, 10 isotherms 150–240 °C',
+  options: {
+    ...osc,
+    referenceK: 463.15,
+    temperaturesK: temperatures(463.15, 10, 4, 10),
+    components: [{ prony: MELT, law: ARRHENIUS_MELT }],
+  },
+};
+export const MELT_WLF_PB: Case = {
+  name: 'melt, WLF polybutadiene constants, 11 isotherms 0–50 °C',
+  options: {
+    ...osc,
+    referenceK: 298,
+    temperaturesK: temperatures(298, 11, 5, 5),
+    components: [{ prony: MELT, law: WLF_POLYBUTADIENE }],
+  },
+};
+export const MELT_WLF_UNIVERSAL: Case = {
+  name: 'melt, WLF universal constants, 11 isotherms 3 K apart',
+  options: {
+    ...osc,
+    referenceK: 400,
+    temperaturesK: temperatures(400, 11, 3, 3),
+    components: [{ prony: MELT, law: WLF_UNIVERSAL }],
+  },
+};
+export const RUBBER_WLF: Case = {
+  name: 'rubber transition, WLF universal constants, 10 isotherms 4 K apart',
+  options: {
+    ...osc,
+    referenceK: 300,
+    temperaturesK: temperatures(300, 10, 4, 4),
+    components: [{ prony: RUBBER, law: WLF_UNIVERSAL }],
+  },
+};
+export const RELAX_WLF: Case = {
+  name: 'relaxation, WLF universal constants, 10 isotherms 4 K apart',
+  options: {
+    ...rel,
+    referenceK: 300,
+    temperaturesK: temperatures(300, 10, 4, 4),
+    components: [{ prony: RELAXING, law: WLF_UNIVERSAL }],
+  },
+};
+export const RELAX_ARRHENIUS: Case = {
+  name: 'relaxation, Arrhenius 200 kJ/mol, 10 isotherms 4 K apart',
+  options: {
+    ...rel,
+    referenceK: 350,
+    temperaturesK: temperatures(350, 10, 4, 4),
+    components: [{ prony: RELAXING, law: ARRHENIUS_STEEP }],
+  },
+};
+
+/** Two components with different shift laws: a thermorheologically complex (invented) blend. */
+export const BLEND: Case = {
+  name: 'blend of two melts with Arrhenius 30 and 120 kJ/mol',
+  options: {
+    ...osc,
+    referenceK: 463.15,
+    temperaturesK: temperatures(463.15, 10, 4, 10),
+    components: [
+      {
+        prony: smoothProny({
+          tauMinS: 1e-5,
+          tauMaxS: 1,
+          modesPerDecade: 2,
+          glassyModulusPa: 1e6,
+          equilibriumModulusPa: 0,
+          slope: 0.3,
+        }),
+        law: { kind: 'arrhenius', activationEnergyJPerMol: 3e4 },
+      },
+      {
+        prony: smoothProny({
+          tauMinS: 1e-2,
+          tauMaxS: 1e2,
+          modesPerDecade: 2,
+          glassyModulusPa: 1e5,
+          equilibriumModulusPa: 0,
+          slope: 0.3,
+        }),
+        law: { kind: 'arrhenius', activationEnergyJPerMol: 1.2e5 },
+      },
+    ],
+  },
+};
+
+/** 8 % noise plus 30 % noise on the three lowest-x points of isotherms 8 and 9 (low torque). */
+export const LOW_TORQUE = { isothermIndices: [7, 8], count: 3, relativeNoise: 0.3 };
+
+export function make(c: Case, relativeNoise: number, seed: number, lowTorque = false) {
+  return syntheticIsotherms({
+    ...c.options,
+    relativeNoise,
+    seed,
+    ...(lowTorque ? { outliers: LOW_TORQUE } : {}),
+    name: `invented ${c.name}`,
+  });
+}
+
+/** Largest |estimated − true log10 aT| over the isotherms, decades. */
+export function maxError(estimated: (number | null)[], truth: number[]): number {
+  return estimated.reduce<number>(
+    (m, v, k) => Math.max(m, v === null ? Infinity : Math.abs(v - truth[k])),
+    0,
+  );
+}
