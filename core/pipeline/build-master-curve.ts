@@ -51,7 +51,11 @@ export function buildMasterCurve(dataset: Dataset, options: AnalysisOptions = {}
   progress(0.05, 'shift');
   const { result, curves } = runShift(data, settings);
   for (const w of result.warnings) warnings.push({ code: w.code, message: w.message });
-  const masterCurve = reduceToMasterCurve(data, curves);
+  const masterCurve = reduceToMasterCurve(
+    data,
+    curves,
+    Object.fromEntries(result.curves.map((c) => [c.id, c.outlierPoints])),
+  );
 
   progress(0.6, 'models');
   const models = fitShiftModels(curves, settings, warnings);

@@ -99,6 +99,7 @@ export function computeIndicators(
       const w: number[] = [];
       const eta: number[] = [];
       mc.reducedX.forEach((x, i) => {
+        if (mc.outlier[i]) return;
         const v =
           visc?.[i] ??
           (s?.[i] != null && l?.[i] != null

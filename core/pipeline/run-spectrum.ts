@@ -26,7 +26,13 @@ export function reducedCurveOf(dataset: Dataset, mc: AnalysisMasterCurve): Reduc
     if (!s && !l) return null;
     const idx = mc.reducedX
       .map((_, i) => i)
-      .filter((i) => positive(mc.reducedX[i]) && (!s || positive(s[i])) && (!l || positive(l[i])));
+      .filter(
+        (i) =>
+          !mc.outlier[i] &&
+          positive(mc.reducedX[i]) &&
+          (!s || positive(s[i])) &&
+          (!l || positive(l[i])),
+      );
     return {
       x: idx.map((i) => mc.reducedX[i]),
       ...(s && { storage: idx.map((i) => s[i] as number) }),
@@ -37,7 +43,7 @@ export function reducedCurveOf(dataset: Dataset, mc: AnalysisMasterCurve): Reduc
   if (!g) return null;
   const idx = mc.reducedX
     .map((_, i) => i)
-    .filter((i) => positive(mc.reducedX[i]) && positive(g[i]));
+    .filter((i) => !mc.outlier[i] && positive(mc.reducedX[i]) && positive(g[i]));
   return { x: idx.map((i) => mc.reducedX[i]), relaxation: idx.map((i) => g[i] as number) };
 }
 

@@ -56,6 +56,8 @@ export interface AnalysisMasterCurve {
   isothermId: string[];
   /** Temperature each point was measured at, K. */
   temperatureK: number[];
+  /** True where the shift engine flagged the point as an outlier (left out of the shift and Prony fits). */
+  outlier: boolean[];
 }
 
 /** A model's predicted log10 aT with its 95 % confidence band on a temperature grid. */

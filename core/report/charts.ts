@@ -93,7 +93,10 @@ export function masterCurveChart(a: Analysis, unit: ModulusUnit): ChartSpec {
   const series: ChartSeries[] = [];
   const ids = [...new Set(mc.isothermId)];
   for (const id of ids) {
-    const idx = mc.isothermId.map((v, i) => (v === id ? i : -1)).filter((i) => i >= 0);
+    const idx = mc.isothermId
+      .map((v, i) => (v === id && !mc.outlier[i] ? i : -1))
+      .filter((i) => i >= 0);
+    if (idx.length === 0) continue;
     const colour = temperatureColour(mc.temperatureK[idx[0]], lo, hi);
     qs.forEach((q, k) => {
       const v = mc.quantities[q];
@@ -112,6 +115,25 @@ export function masterCurveChart(a: Analysis, unit: ModulusUnit): ChartSpec {
     });
   }
   const legend: LegendEntry[] = quantityLegend(a, qs, unit).map((e) => ({ ...e, line: 'none' }));
+  const out = mc.reducedX.map((_, i) => i).filter((i) => mc.outlier[i]);
+  if (out.length) {
+    for (const q of qs) {
+      const v = mc.quantities[q];
+      if (v)
+        series.push({
+          name: `outliers ${q}`,
+          x: out.map((i) => mc.reducedX[i]),
+          y: out.map((i) => {
+            const value = v[i];
+            return value === null ? Number.NaN : toOutputUnit(q, value, unit);
+          }),
+          colour: '#9a9a9a',
+          marker: 'square',
+          line: 'none',
+        });
+    }
+    legend.push({ name: 'outliers (left out)', colour: '#9a9a9a', marker: 'square', line: 'none' });
+  }
   if (a.prony && mc.reducedX.length > 1) {
     const p = {
       equilibriumModulusPa: a.prony.equilibriumModulusPa,

@@ -51,7 +51,9 @@ function titleBlock(a: Analysis, o: ReportOptions, title: string): string {
       `${a.curves.filter((c) => c.included).length} of ${a.curves.length} in the master curve`,
     ],
     ['files', a.sample.files.join(', ')],
-    ...Object.entries(meta).map(([k, v]): [string, string] => [k, v]),
+    ...Object.entries(meta)
+      .filter(([, v]) => v !== a.sample.name)
+      .map(([k, v]): [string, string] => [k, v]),
   ];
   return (
     `<header class="title-block"><div><h1>${esc(title)}</h1><dl>` +

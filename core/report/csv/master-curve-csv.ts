@@ -35,9 +35,15 @@ export function masterCurveCsv(a: Analysis, unit: ModulusUnit = 'Pa'): string {
       `reference temperature: ${toCelsius(a.referenceTemperatureK)} C (${a.referenceTemperatureK} K); ${a.sample.deformation}, ${a.sample.testKind}`,
       `${xCol}: ${a.sample.abscissa === 'angularFrequency' ? 'aT·ω' : 't/aT'}; quantities reduced to Tref (moduli × bT)`,
       ...conventionCommentLines(),
-      'source_temperature_C and isotherm: where each point was measured',
+      'source_temperature_C and isotherm: where each point was measured; outlier = yes: flagged by the shift engine and left out of the fits',
     ],
-    [xCol, ...qs.map((q) => quantityColumn(q, unit)), 'source_temperature_C', 'isotherm'],
+    [
+      xCol,
+      ...qs.map((q) => quantityColumn(q, unit)),
+      'source_temperature_C',
+      'isotherm',
+      'outlier',
+    ],
     mc.reducedX.map((x, i) => [
       csvNumber(x),
       ...qs.map((q) => {
@@ -46,6 +52,7 @@ export function masterCurveCsv(a: Analysis, unit: ModulusUnit = 'Pa'): string {
       }),
       csvNumber(toCelsius(mc.temperatureK[i])),
       mc.isothermId[i],
+      mc.outlier[i] ? 'yes' : 'no',
     ]),
   );
 }

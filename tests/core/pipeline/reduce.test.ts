@@ -109,6 +109,11 @@ describe('reduceToMasterCurve()', () => {
     expectRelClose(mc.reducedX[0], 0.1, 1e-12, 't_r = t/aT');
     expectRelClose(mc.quantities.creepCompliance![0]!, 1e-6, 1e-12, 'J_r = J/bT');
   });
+  it('reduceToMasterCurve() keeps outliers flagged by the shift engine, marked as such', () => {
+    const mc = reduceToMasterCurve(dataset, [curve('T02', 320, 1, 1)], { T02: [1] });
+    expect(mc.outlier).toEqual([false, true, false]);
+    expect(mc.reducedX).toEqual([0.1, 1, 10]);
+  });
   it('reduceToMasterCurve() gives an empty curve for no data', () => {
     expect(reduceToMasterCurve({ ...dataset, isotherms: [] }, []).reducedX).toEqual([]);
   });
