@@ -98,6 +98,19 @@ describe('creepFromProny()', () => {
     }
   });
 
+  // Limits (Ferry 1980, ch. 3): a solid creeps to J = 1/Ge; a fluid's steady-state recoverable
+  // compliance is Je⁰ = Σ g_i τ_i² / (Σ g_i τ_i)² and its flow term t/η0 with η0 = Σ g_i τ_i.
+  it('creepFromProny() reaches 1/Ge for a solid and Je⁰ = Σgτ²/η0² for a fluid', () => {
+    const solid = { equilibriumModulusPa: 3e5, tauS: [1e-3, 0.1, 10], modulusPa: [5e8, 2e7, 1e6] };
+    expectRelClose(creepFromProny(solid).limitCompliancePerPa, 1 / 3e5, 1e-9);
+    const fluid = { ...solid, equilibriumModulusPa: 0 };
+    const eta0 = fluid.modulusPa.reduce((s, g, i) => s + g * fluid.tauS[i], 0);
+    const je = fluid.modulusPa.reduce((s, g, i) => s + g * fluid.tauS[i] ** 2, 0) / eta0 ** 2;
+    const r = creepFromProny(fluid);
+    expectRelClose(r.limitCompliancePerPa, je, 1e-9);
+    expectRelClose(r.fluidityPerPaS, 1 / eta0, 1e-12);
+  });
+
   it('creepFromProny() gives J = 1/Ge for an elastic series and rejects an empty one', () => {
     expectRelClose(
       creepCompliance(creepFromProny({ equilibriumModulusPa: 4, tauS: [], modulusPa: [] }), 10),
