@@ -40,7 +40,12 @@ export function splitCells(line: string, delimiter: DelimiterName): string[] {
   if (delimiter === 'spaces') return splitOnSpaces(line);
   const d = DELIMITER_CHAR[delimiter];
   if (line.indexOf('"') < 0) return line.split(d);
-  const parsed = Papa.parse<string[]>(line, { delimiter: d, quoteChar: '"', header: false });
+  const parsed = Papa.parse<string[]>(line, {
+    delimiter: d,
+    newline: '\n',
+    quoteChar: '"',
+    header: false,
+  });
   return parsed.data[0] ?? [];
 }
 

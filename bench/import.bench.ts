@@ -1,0 +1,52 @@
+/**
+ * Import speed: a 1,000,000-row long-format file (T, f, G', G''), generated in memory — 250
+ * isotherms 2 K apart with 4,000 frequencies each, measured temperatures wandering ±0.2 K.
+ * Target: under 3 s on an ordinary computer. Also the same rows with semicolons and decimal
+ * commas (the slower, strict number path) and quoted cells (the papaparse path).
+ */
+import { importFiles } from '../core/io/index.ts';
+import { medianMs } from './timing.ts';
+
+const ISOTHERMS = 250;
+const PER_ISOTHERM = 4000;
+
+function longText(style: 'plain' | 'decimalComma' | 'quoted'): string {
+  const d = style === 'decimalComma' ? ';' : ',';
+  const header =
+    style === 'decimalComma' ? "T (°C);f (Hz);G' (Pa);G'' (Pa)" : "T (°C),f (Hz),G' (Pa),G'' (Pa)";
+  const rows: string[] = [header];
+  const freqs = Array.from({ length: PER_ISOTHERM }, (_, i) =>
+    (1e-3 * 10 ** (i / (PER_ISOTHERM / 6))).toPrecision(6),
+  );
+  for (let k = 0; k < ISOTHERMS; k++) {
+    for (let i = 0; i < PER_ISOTHERM; i++) {
+      const t = (-100 + 2 * k + 0.2 * Math.sin(i)).toFixed(2);
+      const gp = (1e5 * (1 + k + i / PER_ISOTHERM)).toPrecision(6);
+      const gpp = (2e4 * (1 + k + i / PER_ISOTHERM)).toPrecision(6);
+      let row = `${t}${d}${freqs[i]}${d}${gp}${d}${gpp}`;
+      if (style === 'decimalComma') row = row.replace(/\./g, ',');
+      if (style === 'quoted') row = `"${t}",${freqs[i]},${gp},${gpp}`;
+      rows.push(row);
+    }
+  }
+  return rows.join('\r\n');
+}
+
+export async function run(): Promise<void> {
+  for (const style of ['plain', 'decimalComma', 'quoted'] as const) {
+    const text = longText(style);
+    let isotherms = 0;
+    const ms = medianMs(
+      () => {
+        isotherms = importFiles([{ name: `bench-${style}.csv`, text }]).dataset.isotherms.length;
+      },
+      style === 'plain' ? 5 : 3,
+      1,
+    );
+    const rows = ISOTHERMS * PER_ISOTHERM;
+    console.log(
+      `importFiles ${style.padEnd(12)} ${rows.toLocaleString('en')} rows (${(text.length / 1e6).toFixed(1)} MB), ` +
+        `${isotherms} isotherms: median ${(ms / 1000).toFixed(2)} s${style === 'plain' ? ' (target < 3 s)' : ''}`,
+    );
+  }
+}
