@@ -1,0 +1,81 @@
+/**
+ * Batch speed: 100 invented synthetic samples (9 isotherms × 16 frequencies, one CSV file per
+ * isotherm, 2 % noise, WLF shifts, seeds 1…100) written to a temp folder, then run through
+ * `runBatch`, the very function behind `thermoshift batch`: import, shifts, models, Prony series,
+ * indicators, and every output file including the HTML report. Prints total and per-sample time.
+ */
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { smoothProny, syntheticIsotherms } from '../core/synthetic/index.ts';
+import { runBatch, listSamples } from '../app/cli/commands/batch.ts';
+
+const SAMPLES = 100;
+
+function writeSample(dir: string, seed: number): void {
+  const { dataset } = syntheticIsotherms({
+    testKind: 'oscillatory',
+    deformation: 'shear',
+    referenceK: 373.15,
+    temperaturesK: Array.from({ length: 9 }, (_, i) => 343.15 + 10 * i),
+    components: [
+      {
+        prony: smoothProny({
+          tauMinS: 1e-6,
+          tauMaxS: 1e4,
+          modesPerDecade: 2,
+          glassyModulusPa: 1e9,
+          equilibriumModulusPa: 1e6,
+        }),
+        law: { kind: 'wlf', c1: 8.86 + (seed % 5) * 0.2, c2K: 101.6 },
+      },
+    ],
+    xMin: 0.1,
+    xMax: 100,
+    pointsPerDecade: 5,
+    relativeNoise: 0.02,
+    seed,
+  });
+  mkdirSync(dir, { recursive: true });
+  for (const iso of dataset.isotherms) {
+    const c = Math.round((iso.temperatureK - 273.15) * 100) / 100;
+    const rows = iso.x.map(
+      (w, i) => `${w},${iso.quantities.storageModulus![i]},${iso.quantities.lossModulus![i]}`,
+    );
+    writeFileSync(
+      join(dir, `iso_${c}C.csv`),
+      `omega (rad/s),G' (Pa),G'' (Pa)\n${rows.join('\n')}\n`,
+    );
+  }
+}
+
+export async function run(): Promise<void> {
+  const root = mkdtempSync(join(tmpdir(), 'thermoshift-batch-bench-'));
+  try {
+    const input = join(root, 'in');
+    for (let s = 1; s <= SAMPLES; s++)
+      writeSample(join(input, `sample-${String(s).padStart(3, '0')}`), s);
+    const samples = listSamples([], [input]);
+    let failed = 0;
+    const t0 = performance.now();
+    const rows = runBatch(samples, {
+      settings: { referenceTemperature: 100 },
+      settingsSource: 'bench',
+      out: join(root, 'out'),
+      force: false,
+      date: '2026-12-01',
+      log: (line) => {
+        if (line.includes('FAILED')) failed++;
+      },
+    });
+    const ms = performance.now() - t0;
+    console.log(
+      `batch of ${rows.length} samples (9 isotherms × 16 points each, all outputs written):`,
+    );
+    console.log(
+      `  total ${(ms / 1000).toFixed(2)} s, ${(ms / rows.length).toFixed(1)} ms per sample, ${failed} failed`,
+    );
+  } finally {
+    rmSync(root, { recursive: true, force: true });
+  }
+}
