@@ -114,14 +114,10 @@ const csvShape = fc.record({
   name: fc.constantFrom('a.csv', 'seal_40C.txt', 'x-313K.dat', 'T=-20°C.csv', 'run.tsv'),
 });
 
-function render(
-  s: fc.Arbitrary<unknown> extends never
-    ? never
-    : typeof csvShape extends fc.Arbitrary<infer R>
-      ? R
-      : never,
-): SourceFile {
-  const lines = [...s.metadata];
+type Shape = typeof csvShape extends fc.Arbitrary<infer R> ? R : never;
+
+function render(s: Shape): SourceFile {
+  const lines: string[] = [...s.metadata];
   if (s.header) lines.push(s.header.join(s.delimiter));
   if (s.units) lines.push(s.units.join(s.delimiter));
   for (const r of s.rows) lines.push(r.join(s.delimiter));
