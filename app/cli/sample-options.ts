@@ -5,7 +5,12 @@
  */
 import { Command, Option } from 'commander';
 import { QUANTITY_IDS, type QuantityId } from '../../core/data/types.ts';
-import { mergeSettings, parseSettings, type Settings } from '../../core/pipeline/settings.ts';
+import {
+  mergeSettings,
+  parseSettings,
+  settingTemperatureK,
+  type Settings,
+} from '../../core/pipeline/settings.ts';
 import { MODULUS_UNITS } from '../../core/report/output-units.ts';
 import { CliError } from './cli-error.ts';
 import { EXIT } from './exit-codes.ts';
@@ -33,8 +38,19 @@ const collect = (value: string, previous: string[] = []): string[] => [
 ];
 const collectWhole = (value: string, previous: string[] = []): string[] => [...previous, value];
 
+/** Shown after each command's option list. */
+export const HELP_FOOTER = `
+Exit codes: 0 done (warnings may have been printed), 1 data could not be read or analysed,
+2 wrong command line or settings, 3 an output file exists (use --force) or cannot be written,
+4 batch finished with failed samples, 70 internal error (rerun with --debug and report it).
+Full reference: docs/cli.md. Master curves are engineering estimates: mind extrapolation, the
+validity of superposition and the linear range; confirm by testing and follow the applicable
+codes and licensed engineering practice.
+`;
+
 export function addSampleOptions(cmd: Command): Command {
   return cmd
+    .addHelpText('after', HELP_FOOTER)
     .option(
       '--tref <T>',
       'reference temperature: °C (190) or kelvin with K (463.15K); default: the measured temperature nearest the middle of the range',
@@ -161,7 +177,10 @@ export function parseColumnOption(text: string): NonNullable<Settings['columns']
 /** The command-line options as Settings (only the ones given). */
 export function optionsToSettings(o: SampleOptionValues): Settings {
   const s: Record<string, unknown> = {};
-  if (o.tref !== undefined) s.referenceTemperature = o.tref;
+  if (o.tref !== undefined) {
+    settingTemperatureK(o.tref, '--tref', 'command line'); // checked here to name the option
+    s.referenceTemperature = o.tref;
+  }
   if (o.shiftBy !== undefined) s.shiftBy = quantityList(o.shiftBy);
   if (o.vertical !== undefined) s.verticalShift = o.vertical;
   if (o.density !== undefined) s.densityKgPerM3 = positiveNumber(o.density, '--density');
@@ -170,7 +189,10 @@ export function optionsToSettings(o: SampleOptionValues): Settings {
     s.models =
       o.models.trim() === 'none' ? [] : o.models.split(',').map((m) => m.trim().toLowerCase());
   if (o.modesPerDecade !== undefined) s.pronyModesPerDecade = Number(o.modesPerDecade);
-  if (o.tg !== undefined) s.glassTransition = o.tg;
+  if (o.tg !== undefined) {
+    settingTemperatureK(o.tg, '--tg', 'command line');
+    s.glassTransition = o.tg;
+  }
   if (o.exclude?.length) s.exclude = o.exclude;
   if (o.mask?.length) s.mask = o.mask;
   if (o.groupTolerance !== undefined)

@@ -47,6 +47,10 @@ describe('optionsToSettings()', () => {
       /--shift-by: unknown quantity "stiffness"/,
     );
     expect(() => optionsToSettings({ models: 'spline' })).toThrow(/models/);
+    expect(() => optionsToSettings({ tref: 'warm' })).toThrow(
+      /--tref: "warm" is not a temperature/,
+    );
+    expect(() => optionsToSettings({ tg: '-500' })).toThrow(/--tg/);
   });
 });
 

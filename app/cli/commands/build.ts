@@ -6,6 +6,7 @@ import { Command } from 'commander';
 import { analysisSummary } from '../../../core/pipeline/summary.ts';
 import { toCelsius } from '../../../core/pipeline/temperature.ts';
 import type { Analysis } from '../../../core/pipeline/types.ts';
+import { formatFixed } from '../../../core/report/format.ts';
 import { addSampleOptions, resolveSettings, type SampleOptionValues } from '../sample-options.ts';
 import { readInputs } from '../io/read-inputs.ts';
 import { analyseSample } from '../run-sample.ts';
@@ -82,7 +83,7 @@ export function textSummary(a: Analysis): string {
     `${a.sample.name}: ${a.curves.length} isotherms, Tref = ${toCelsius(a.referenceTemperatureK)} °C`,
     ...a.curves.map(
       (c) =>
-        `  ${c.isothermId} ${toCelsius(c.temperatureK).toFixed(2).padStart(8)} °C  log10 aT = ${c.log10aT === null ? '–' : c.log10aT.toFixed(3)} ± ${c.log10aTStdErr === null ? '–' : c.log10aTStdErr.toFixed(3)}${c.included ? '' : '  (not included)'}`,
+        `  ${c.isothermId} ${formatFixed(toCelsius(c.temperatureK), 2).padStart(8)} °C  log10 aT = ${formatFixed(c.log10aT, 3)} ± ${formatFixed(c.log10aTStdErr, 3)}${c.included ? '' : `  (not included${c.note ? `: ${c.note}` : ''})`}`,
     ),
   ];
   const { wlf, arrhenius } = a.models;
