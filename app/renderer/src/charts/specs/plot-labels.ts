@@ -1,7 +1,7 @@
 /** Labels and read-out text shared by the plot specs. Units are SI, as stored. */
 import { quantitySymbol, quantityUnit } from '../../../../../core/data/quantities';
 import type { AbscissaKind, DeformationMode, QuantityId } from '../../../../../core/data/types';
-import { formatNumber } from '../../../../../core/report/format';
+import { formatValue as formatNumber } from '../../tables/format-value';
 import { toCelsius } from '../../../../../core/pipeline/temperature';
 
 export function celsiusText(temperatureK: number): string {

@@ -6,7 +6,7 @@
 import { quantitySymbol } from '../../../../../core/data/quantities';
 import type { Analysis } from '../../../../../core/pipeline/types';
 import { toCelsius } from '../../../../../core/pipeline/temperature';
-import { formatNumber } from '../../../../../core/report/format';
+import { formatValue as formatNumber } from '../../tables/format-value';
 import type { PlotSeries, PlotSpec } from '../plot-spec';
 import { temperatureScale } from '../temperature-colours';
 import { celsiusText } from './plot-labels';

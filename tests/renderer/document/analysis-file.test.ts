@@ -1,0 +1,64 @@
+import { describe, expect, it } from 'vitest';
+import { newDocument, setLocked } from '../../../app/renderer/src/document/analysis-document';
+import {
+  ANALYSIS_FORMAT_VERSION,
+  AnalysisFileError,
+  analysisFileName,
+  parseAnalysis,
+  serializeAnalysis,
+} from '../../../app/renderer/src/document/analysis-file';
+import { tinyDataset } from './tiny-dataset';
+
+const doc = setLocked(
+  newDocument(tinyDataset(), 'tiny.csv', {
+    options: { referenceTemperatureK: 310, excludedIsothermIds: ['T02'] },
+    importWarnings: [{ file: 'tiny.csv', row: 4, column: 2, message: 'empty cell' }],
+  }),
+  'T01',
+  0.3,
+);
+
+describe('serializeAnalysis() and parseAnalysis()', () => {
+  it('parseAnalysis() reads back what serializeAnalysis() wrote, missing values included', () => {
+    const text = serializeAnalysis(doc, new Date('2026-01-02T03:04:05Z'));
+    const back = parseAnalysis(text, 'a.thermoshift.json');
+    expect(back.options).toEqual(doc.options);
+    expect(back.importWarnings).toEqual(doc.importWarnings);
+    expect(back.dataset.isotherms[0].quantities.storageModulus![2]).toBeNaN();
+    expect(back.dataset.isotherms[1].source).toEqual(doc.dataset.isotherms[1].source);
+    expect(JSON.parse(text).savedAt).toBe('2026-01-02T03:04:05.000Z');
+  });
+
+  it('parseAnalysis() refuses a file from a newer version with a message saying so', () => {
+    const raw = JSON.parse(serializeAnalysis(doc));
+    raw.formatVersion = ANALYSIS_FORMAT_VERSION + 1;
+    expect(() => parseAnalysis(JSON.stringify(raw), 'new.json')).toThrow(
+      /newer Thermoshift.*update/,
+    );
+  });
+
+  it('parseAnalysis() names the file and the problem for bad input', () => {
+    expect(() => parseAnalysis('{ not json', 'x.json')).toThrow(AnalysisFileError);
+    expect(() => parseAnalysis('{ not json', 'x.json')).toThrow(
+      /x\.json is not a Thermoshift analysis: it is not valid JSON/,
+    );
+    expect(() => parseAnalysis('{"a":1}', 'data.json')).toThrow(/not a Thermoshift analysis file/);
+    const raw = JSON.parse(serializeAnalysis(doc));
+    raw.dataset.isotherms[0].mask = [true];
+    expect(() => parseAnalysis(JSON.stringify(raw), 'cut.json')).toThrow(
+      /cut\.json is damaged: .*mask has 1 values but x has 3/,
+    );
+    const raw2 = JSON.parse(serializeAnalysis(doc));
+    raw2.options.referenceTemperatureK = -5;
+    expect(() => parseAnalysis(JSON.stringify(raw2), 'neg.json')).toThrow(
+      /neg\.json is damaged: options\.referenceTemperatureK/,
+    );
+  });
+});
+
+describe('analysisFileName()', () => {
+  it('analysisFileName() makes a safe name with our suffix', () => {
+    expect(analysisFileName('QS-72 seal / batch 3')).toBe('QS-72 seal _ batch 3.thermoshift.json');
+    expect(analysisFileName('')).toBe('analysis.thermoshift.json');
+  });
+});
