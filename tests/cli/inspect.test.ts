@@ -1,0 +1,121 @@
+import { describe, it, expect } from 'vitest';
+import { spawnSync } from 'node:child_process';
+import { fileURLToPath } from 'node:url';
+
+const repo = fileURLToPath(new URL('../../', import.meta.url));
+const fixtures = 'tests/fixtures/io';
+
+/** Runs `node bin/thermoshift.mjs inspect …` from the repository root. */
+function inspect(...args: string[]): { status: number | null; stdout: string; stderr: string } {
+  const r = spawnSync(process.execPath, ['bin/thermoshift.mjs', 'inspect', ...args], {
+    cwd: repo,
+    encoding: 'utf8',
+    timeout: 60_000,
+  });
+  return { status: r.status, stdout: r.stdout, stderr: r.stderr };
+}
+
+interface Inspection {
+  sample: { name: string; testKind: string; deformation: string; abscissa: string };
+  files: { file: string; layout: string }[];
+  isotherms: {
+    id: string;
+    temperatureC: number;
+    spreadK: number;
+    points: number;
+    quantities: { symbol: string; unit: string }[];
+  }[];
+  warnings: { file: string; row: number; column: number; message: string }[];
+}
+
+describe('thermoshift inspect', () => {
+  it('thermoshift inspect reads every demo sample (--json)', () => {
+    const expected: [string, string, string, number][] = [
+      ['samples/melt-long', 'long', 'shear', 9],
+      ['samples/seal-dma', 'perIsotherm', 'tension', 11],
+      ['samples/adhesive-relaxation', 'wide', 'tension', 8],
+      ['samples/ramp-dma', 'long', 'tension', 16],
+    ];
+    for (const [dir, layout, deformation, count] of expected) {
+      const r = inspect('--json', dir);
+      expect(r.status, r.stderr).toBe(0);
+      const v = JSON.parse(r.stdout) as Inspection;
+      expect(
+        v.files.every((f) => f.layout === layout),
+        dir,
+      ).toBe(true);
+      expect(v.sample.deformation).toBe(deformation);
+      expect(v.isotherms).toHaveLength(count);
+      expect(v.warnings).toEqual([]);
+    }
+  });
+
+  it('thermoshift inspect prints isotherms, columns and warnings as text', () => {
+    const r = inspect(`${fixtures}/bad/bad-cells.csv`);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toMatch(/column 3 "G' \(Pa\)": storageModulus, Pa → Pa/);
+    expect(r.stdout).toMatch(/T01\s+40\.00\s+0\.00\s+2\s+0\.6283 – 62830 /);
+    expect(r.stdout).toMatch(/Warnings \(6\):/);
+    expect(r.stdout).toContain(
+      `${fixtures}/bad/bad-cells.csv, row 3, column 3: "abc" in column "G' (Pa)" is not a number; row skipped`,
+    );
+  });
+
+  it('thermoshift inspect --tolerance changes the grouping', () => {
+    const normal = JSON.parse(
+      inspect('--json', `${fixtures}/ramp-spaces.txt`).stdout,
+    ) as Inspection;
+    expect(normal.isotherms.map((i) => i.points)).toEqual([4, 4]);
+    const coarse = JSON.parse(
+      inspect('--json', '--tolerance', '10', `${fixtures}/ramp-spaces.txt`).stdout,
+    ) as Inspection;
+    // One band of 8 rows holding each frequency twice: the repeats are skipped with a warning.
+    expect(coarse.isotherms.map((i) => i.points)).toEqual([4]);
+    expect(coarse.warnings.filter((w) => /same frequency/.test(w.message))).toHaveLength(4);
+    const bad = inspect('--tolerance', 'warm', `${fixtures}/ramp-spaces.txt`);
+    expect(bad.status).toBe(2);
+    expect(bad.stderr).toMatch(/--tolerance/);
+  });
+
+  it('thermoshift inspect exits 1 with one line and no stack trace on a bad file', () => {
+    for (const [file, message] of [
+      ['bad/empty.csv', /the file is empty/],
+      ['bad/unknown-unit.csv', /row 1, column 3: .*"kpsi" is not known/],
+      ['bad/no-temperature.csv', /no temperature found/],
+      ['no/such/file.csv', /no such file or folder/],
+    ] as const) {
+      const r = inspect(`${fixtures}/${file}`);
+      expect(r.status, file).toBe(1);
+      expect(r.stdout).toBe('');
+      expect(r.stderr.trim().split('\n'), file).toHaveLength(1);
+      expect(r.stderr).toMatch(message);
+      expect(r.stderr).not.toMatch(/\n\s+at /);
+    }
+  });
+
+  it('thermoshift inspect --column and --file-temperature fix what recognition could not', () => {
+    const mapped = inspect(
+      '--json',
+      '--column',
+      '3=storageModulus:psi',
+      '--column',
+      "G'' (kpsi)=lossModulus:psi",
+      `${fixtures}/bad/unknown-unit.csv`,
+    );
+    expect(mapped.status, mapped.stderr).toBe(0);
+    expect(
+      (JSON.parse(mapped.stdout) as Inspection).isotherms[0].quantities.map((q) => q.symbol),
+    ).toContain("G'");
+    const forced = inspect(
+      '--json',
+      '--file-temperature',
+      'no-temperature.csv=313.15K',
+      `${fixtures}/bad/no-temperature.csv`,
+    );
+    expect(forced.status, forced.stderr).toBe(0);
+    expect((JSON.parse(forced.stdout) as Inspection).isotherms[0].temperatureC).toBe(40);
+    const wrong = inspect('--column', '3=modulus', `${fixtures}/bad/unknown-unit.csv`);
+    expect(wrong.status).toBe(2);
+    expect(wrong.stderr).toMatch(/ROLE is one of/);
+  });
+});
