@@ -9,7 +9,7 @@ import type { Dataset } from '../data/types';
 import { quantityValues } from './drivers';
 import { buildProblem } from './build-problem';
 import type { FitProblem } from './problem';
-import { allResiduals } from './residuals';
+import { residualsAt } from './residuals';
 import { noiseLevel } from './noise';
 import { StatsSink } from './stats-sink';
 import { MAD_TO_SIGMA, medianAbs } from './robust';
@@ -72,8 +72,7 @@ export function vanGurpPalmenDispersion(
     sigma: 1,
   });
   const theta = Float64Array.from(use, (k) => log10bT(k));
-  const stats = new StatsSink(p);
-  allResiduals(p, theta, stats);
+  const stats = new StatsSink(p).consume(residualsAt(p, theta));
   if (stats.residuals.length === 0) return null;
   const rmsDeg = stats.rms();
   const robust = MAD_TO_SIGMA * medianAbs(stats.residuals);

@@ -6,7 +6,8 @@
  */
 import type { FitProblem } from './problem';
 import { overlapGroups } from './pairs';
-import { allResiduals } from './residuals';
+import { residualsAt } from './residuals';
+import { ResidualBuffer } from './residual-buffer';
 import type { ReferenceWeights } from './reference';
 import { referenceWeights } from './reference';
 import { HUBER_K, MAD_TO_SIGMA, medianAbs } from './robust';
@@ -59,7 +60,7 @@ export interface OffsetFit {
   info: FitInfo;
 }
 
-function robustScale(loss: RobustLoss, residuals: number[]): number {
+function robustScale(loss: RobustLoss, residuals: ArrayLike<number>): number {
   const sigma = MAD_TO_SIGMA * medianAbs(residuals);
   const k = loss === 'cauchy' ? CAUCHY_K : HUBER_K;
   return Math.max(MIN_SCALE_DECADES, Number.isFinite(sigma) ? k * sigma : MIN_SCALE_DECADES);
@@ -181,10 +182,10 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
     if (problem.joint && !included[k]) fixed[n + k] = 1;
   }
 
+  const buffer = new ResidualBuffer();
   const outliers: Set<number>[] = Array.from({ length: n }, () => new Set<number>());
   const runPass = (t: Float64Array) => {
-    const pre = new StatsSink(problem);
-    allResiduals(problem, t, pre);
+    const pre = new StatsSink(problem).consume(residualsAt(problem, t, buffer));
     const scale = input.scale ?? robustScale(input.loss, pre.residuals);
     return solveOffsets(problem, t, {
       loss: input.loss,
@@ -192,14 +193,14 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
       maxIterations: input.maxIterations,
       fixed,
       constraints,
+      buffer,
     });
   };
   let outcome = runPass(theta);
   let iterations = outcome.iterations;
   let passes = 1;
   if (input.flagOutliers && incFinal.length > 1) {
-    const stats = new StatsSink(problem);
-    allResiduals(problem, outcome.theta, stats);
+    const stats = new StatsSink(problem).consume(residualsAt(problem, outcome.theta, buffer));
     const sigma = MAD_TO_SIGMA * medianAbs(stats.residuals);
     const limit = input.outlierThreshold * Math.max(sigma, MIN_SCALE_DECADES / HUBER_K);
     let flagged = 0;
@@ -223,8 +224,7 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
     }
   }
   theta = outcome.theta;
-  const stats = new StatsSink(problem);
-  allResiduals(problem, theta, stats);
+  const stats = new StatsSink(problem).consume(residualsAt(problem, theta, buffer));
   const curveRms = new Float64Array(n);
   for (let k = 0; k < n; k++) curveRms[k] = stats.curveRms(k);
   for (const k of incFinal)

@@ -1,14 +1,14 @@
 /**
- * Accumulates the IRLS normal equations JᵀWJ and JᵀWr directly from the residual stream: each
- * residual touches at most four parameters (h_i, h_j, v_i, v_j), so no Jacobian is stored.
+ * Accumulates the IRLS normal equations JᵀWJ and JᵀWr from a residual buffer: each residual
+ * touches at most four parameters (h_i, h_j, v_i, v_j), so no Jacobian is stored.
  */
 import type { FitProblem } from './problem';
 import { parameterCount } from './problem';
-import type { ResidualSink } from './residuals';
-import { lossCode, robustRho, robustWeight } from './robust';
+import type { ResidualBuffer } from './residual-buffer';
+import { LOSS_HUBER, lossCode, robustRho, robustWeight } from './robust';
 import type { RobustLoss } from './types';
 
-export class NormalSink implements ResidualSink {
+export class NormalSink {
   readonly size: number;
   readonly a: Float64Array;
   readonly g: Float64Array;
@@ -17,12 +17,10 @@ export class NormalSink implements ResidualSink {
   count = 0;
   private readonly n: number;
   private readonly code: number;
-  private readonly idx = new Int32Array(4);
-  private readonly cf = new Float64Array(4);
 
   constructor(
     private readonly p: FitProblem,
-    private readonly loss: RobustLoss,
+    loss: RobustLoss,
     private readonly scale: number,
     private readonly withMatrix = true,
   ) {
@@ -33,45 +31,72 @@ export class NormalSink implements ResidualSink {
     this.g = new Float64Array(withMatrix ? this.size : 0);
   }
 
-  add(
-    owner: number,
-    other: number,
-    driver: number,
-    _e: number,
-    r: number,
-    w: number,
-    g: number,
-    binWeight: number,
-  ): void {
-    // Standardised residual z = r·√w has the noise of one point; the robust loss acts on z.
-    const z = r * Math.sqrt(w);
-    this.lossSum += robustRho(this.code, z, this.scale);
-    this.count += binWeight;
-    const wt = w * robustWeight(this.code, z, this.scale);
-    this.weightedSquares += wt * r * r;
-    if (!this.withMatrix) return;
-    const idx = this.idx;
-    const cf = this.cf;
-    idx[0] = owner;
-    idx[1] = other;
-    cf[0] = g;
-    cf[1] = -g;
-    let m = 2;
-    const beta = this.p.beta[driver];
-    if (this.p.joint && beta !== 0) {
-      idx[2] = this.n + owner;
-      idx[3] = this.n + other;
-      cf[2] = beta;
-      cf[3] = -beta;
-      m = 4;
-    }
+  consume(buf: ResidualBuffer): this {
+    const { r: R, w: W, g: G, bin: BIN, owner: OW, other: OT, driver: DR } = buf;
     const s = this.size;
-    for (let u = 0; u < m; u++) {
-      const cu = wt * cf[u];
-      this.g[idx[u]] += cu * r;
-      const row = idx[u] * s;
-      for (let v = 0; v < m; v++) this.a[row + idx[v]] += cu * cf[v];
+    const a = this.a;
+    const grad = this.g;
+    const code = this.code;
+    const c = this.scale;
+    const joint = this.p.joint;
+    const betas = this.p.beta;
+    const n = this.n;
+    for (let m = 0; m < buf.size; m++) {
+      const r = R[m];
+      const w = W[m];
+      // Standardised residual z = r·√w has the noise of one point; the robust loss acts on z.
+      const z = r * Math.sqrt(w);
+      const az = Math.abs(z);
+      let rho: number;
+      let psiOverZ: number;
+      if (code === LOSS_HUBER) {
+        rho = az <= c ? 0.5 * z * z : c * az - 0.5 * c * c;
+        psiOverZ = az <= c ? 1 : c / az;
+      } else {
+        rho = robustRho(code, z, c);
+        psiOverZ = robustWeight(code, z, c);
+      }
+      this.lossSum += rho;
+      this.count += BIN[m];
+      const wt = w * psiOverZ;
+      this.weightedSquares += wt * r * r;
+      if (!this.withMatrix) continue;
+      const i = OW[m];
+      const j = OT[m];
+      const gi = G[m];
+      const wg = wt * gi;
+      const wgg = wg * gi;
+      grad[i] += wg * r;
+      grad[j] -= wg * r;
+      a[i * s + i] += wgg;
+      a[j * s + j] += wgg;
+      a[i * s + j] -= wgg;
+      a[j * s + i] -= wgg;
+      const beta = betas[DR[m]];
+      if (joint && beta !== 0) {
+        const vi = n + i;
+        const vj = n + j;
+        const wb = wt * beta;
+        const wbb = wb * beta;
+        const wgb = wg * beta;
+        grad[vi] += wb * r;
+        grad[vj] -= wb * r;
+        a[vi * s + vi] += wbb;
+        a[vj * s + vj] += wbb;
+        a[vi * s + vj] -= wbb;
+        a[vj * s + vi] -= wbb;
+        // Cross terms h–v: (g, −g) ⊗ (β, −β).
+        a[i * s + vi] += wgb;
+        a[vi * s + i] += wgb;
+        a[j * s + vj] += wgb;
+        a[vj * s + j] += wgb;
+        a[i * s + vj] -= wgb;
+        a[vj * s + i] -= wgb;
+        a[j * s + vi] -= wgb;
+        a[vi * s + j] -= wgb;
+      }
     }
+    return this;
   }
 
   /** Mean robust loss per measured point in the overlaps: the objective minimised. */

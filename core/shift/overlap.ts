@@ -9,7 +9,7 @@ import { activeIsotherms } from './active';
 import { NormalSink } from './normal-equations';
 import { resolveShiftOptions, ShiftOptionsError } from './options';
 import type { FitProblem } from './problem';
-import { allResiduals } from './residuals';
+import { residualsAt } from './residuals';
 import type { ShiftOptions } from './types';
 import { verticalShift } from './vertical';
 
@@ -68,15 +68,13 @@ export function overlapMismatch(prepared: PreparedOverlap, log10aT: ArrayLike<nu
     throw new ShiftOptionsError(
       `overlapMismatch() needs ${prepared.ids.length} log10aT values (one per prepared isotherm), got ${log10aT.length}.`,
     );
-  const sink = new NormalSink(prepared.problem, 'none', 1, false);
+  const buf = residualsAt(prepared.problem, log10aT);
+  const sink = new NormalSink(prepared.problem, 'none', 1, false).consume(buf);
   const touched = new Uint8Array(prepared.ids.length);
-  allResiduals(prepared.problem, log10aT, {
-    add(owner, other, d, e, r, w, g, bin) {
-      touched[owner] = 1;
-      touched[other] = 1;
-      sink.add(owner, other, d, e, r, w, g, bin);
-    },
-  });
+  for (let m = 0; m < buf.size; m++) {
+    touched[buf.owner[m]] = 1;
+    touched[buf.other[m]] = 1;
+  }
   let penalty = 0;
   prepared.hasPartner.forEach((h, k) => {
     if (h && !touched[k]) penalty += NO_OVERLAP_PENALTY;

@@ -8,33 +8,17 @@
  * yields no residuals (DOMAIN.md §2: never invent a shift).
  */
 import type { FitProblem, FitSeries } from './problem';
+import { ResidualBuffer } from './residual-buffer';
 import { lowerBound, upperBound } from './series';
 
 /**
- * Receives each residual r (decades) with its weight w = 1/var(r)·σ², where σ is the noise of one
- * measured point: r compares an entry (mean of c₀ points) with an interpolation at fraction λ
- * between two entries (c₁, c₂ points), so var(r) = σ²(1/c₀ + (1−λ)²/c₁ + λ²/c₂). Without this
- * weight the noise of the interpolant varies with λ, and the mismatch acquires a ripple that
- * favours offsets placing points midway between the other curve's points — a bias of the
- * unweighted overlap criterion (generalised least squares removes it).
- * `g` is ∂r/∂h_owner; `e` the owner's entry index for per-point bookkeeping; the interpolant is
- * (1 − λ)·y_other[k] + λ·y_other[k + 1].
+ * Each residual r (decades) carries the weight w = σ²/var(r), σ the noise of one measured point:
+ * r compares an entry (mean of c₀ points) with an interpolation at fraction λ between two entries
+ * (c₁, c₂ points), so var(r) = σ²(1/c₀ + (1−λ)²/c₁ + λ²/c₂). Without this weight the noise of the
+ * interpolant varies with λ, and the mismatch acquires a ripple that favours offsets placing
+ * points midway between the other curve's points (generalised least squares removes it).
+ * g = ∂r/∂h_owner; the interpolant is (1 − λ)·y_other[k] + λ·y_other[k + 1].
  */
-export interface ResidualSink {
-  add(
-    owner: number,
-    other: number,
-    driver: number,
-    e: number,
-    r: number,
-    w: number,
-    g: number,
-    binWeight: number,
-    k: number,
-    lam: number,
-  ): void;
-}
-
 /** Entries of `a` whose abscissa shifted by `shift` falls within b's range. */
 function overlapCount(a: FitSeries, b: FitSeries, shift: number): number {
   const lo = b.lx[0] - shift;
@@ -63,7 +47,7 @@ function walk(
   other: number,
   d: number,
   theta: ArrayLike<number>,
-  sink: ResidualSink,
+  buf: ResidualBuffer,
 ): void {
   const a = p.curves[owner][d];
   const b = p.curves[other][d];
@@ -82,45 +66,83 @@ function walk(
   const lo = bx[0];
   const hi = bx[last];
   const sigma = p.sigma;
+  const ax = a.lx;
+  const first = lowerBound(ax, lo - shift);
+  const end = upperBound(ax, hi - shift);
+  if (end <= first) return;
+  buf.reserve(end - first);
+  let m = buf.size;
+  const {
+    r: R,
+    w: W,
+    g: G,
+    bin: BIN,
+    lam: LAM,
+    owner: OW,
+    other: OT,
+    driver: DR,
+    entry: EN,
+    knot: KN,
+  } = buf;
   let k = 0;
-  for (let e = lowerBound(a.lx, lo - shift); e < a.lx.length; e++) {
-    const q = a.lx[e] + shift;
-    if (q > hi) break;
+  for (let e = first; e < end; e++) {
+    const q = ax[e] + shift;
     while (k < last - 1 && bx[k + 1] < q) k++;
     const h = bx[k + 1] - bx[k];
     const slope = (by[k + 1] - by[k]) / h;
     const lam = (q - bx[k]) / h;
-    const r = a.y[e] + yOff - (by[k] + slope * (q - bx[k]));
     const f = 1 / a.w[e] + ((1 - lam) * (1 - lam)) / bw[k] + (lam * lam) / bw[k + 1];
     const gs = smooth ? (1 - lam) * bs[k] + lam * bs[k + 1] : slope;
-    sink.add(owner, other, d, e, r, 1 / f, alpha - sigma * gs, a.w[e], k, lam);
+    R[m] = a.y[e] + yOff - (by[k] + slope * (q - bx[k]));
+    W[m] = 1 / f;
+    G[m] = alpha - sigma * gs;
+    BIN[m] = a.w[e];
+    LAM[m] = lam;
+    OW[m] = owner;
+    OT[m] = other;
+    DR[m] = d;
+    EN[m] = e;
+    KN[m] = k;
+    m++;
   }
+  buf.size = m;
 }
 
-/** Feed every residual of the pair (i, j) for driver d to the sink, if the overlap suffices. */
+/** Append every residual of the pair (i, j) for driver d, if the overlap suffices. */
 export function pairResiduals(
   p: FitProblem,
   i: number,
   j: number,
   d: number,
   theta: ArrayLike<number>,
-  sink: ResidualSink,
+  buf: ResidualBuffer,
 ): boolean {
   if (pairOverlap(p, i, j, d, theta) < p.minOverlapPoints) return false;
-  walk(p, i, j, d, theta, sink);
-  walk(p, j, i, d, theta, sink);
+  walk(p, i, j, d, theta, buf);
+  walk(p, j, i, d, theta, buf);
   return true;
 }
 
-/** Feed all residuals of all candidate pairs and drivers. Returns the number of pairs used. */
-export function allResiduals(p: FitProblem, theta: ArrayLike<number>, sink: ResidualSink): number {
+/** Fill the buffer with all residuals of all candidate pairs and drivers; returns pairs used. */
+export function allResiduals(p: FitProblem, theta: ArrayLike<number>, buf: ResidualBuffer): number {
+  buf.reset();
   let used = 0;
   const nd = p.alpha.length;
   for (let q = 0; q < p.pairs.length; q += 2) {
     let any = false;
     for (let d = 0; d < nd; d++)
-      if (pairResiduals(p, p.pairs[q], p.pairs[q + 1], d, theta, sink)) any = true;
+      if (pairResiduals(p, p.pairs[q], p.pairs[q + 1], d, theta, buf)) any = true;
     if (any) used++;
   }
   return used;
+}
+
+/** All residuals at θ in a (new or reused) buffer. */
+export function residualsAt(
+  p: FitProblem,
+  theta: ArrayLike<number>,
+  buf: ResidualBuffer = new ResidualBuffer(),
+): ResidualBuffer {
+  allResiduals(p, theta, buf);
+  return buf;
 }

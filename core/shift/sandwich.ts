@@ -10,11 +10,11 @@
  * scalar per (point, partner) suffices.
  */
 import type { FitProblem } from './problem';
-import type { ResidualSink } from './residuals';
+import type { ResidualBuffer } from './residual-buffer';
 import { lossCode, robustWeight } from './robust';
 import type { RobustLoss } from './types';
 
-export class SandwichSink implements ResidualSink {
+export class SandwichSink {
   /** key (curve·n + partner)·nd + driver → per-entry scalars for h (and v when joint). */
   private readonly bh = new Map<number, Float64Array>();
   private readonly bv = new Map<number, Float64Array>();
@@ -47,35 +47,46 @@ export class SandwichSink implements ResidualSink {
     return a;
   }
 
-  add(
-    owner: number,
-    other: number,
-    d: number,
-    e: number,
-    r: number,
-    w: number,
-    g: number,
-    _bin: number,
-    k: number,
-    lam: number,
-  ): void {
-    const wt = w * robustWeight(this.code, r * Math.sqrt(w), this.scale);
-    // Score contribution wt·r·∇r with ∇r = g (u_owner − u_other) [+ β (v_owner − v_other)].
-    // r = e_owner − (1 − λ) e_k − λ e_k+1 + …; a point of `other` enters with the opposite sign,
-    // and (u_owner − u_other) = −(u_other − u_owner), so both knots get +coef in their own frame.
-    const ch = wt * g;
-    this.slot(this.bh, owner, other, d)[e] += ch;
-    const oh = this.slot(this.bh, other, owner, d);
-    oh[k] += ch * (1 - lam);
-    oh[k + 1] += ch * lam;
-    const beta = this.p.beta[d];
-    if (this.p.joint && beta !== 0) {
-      const cv = wt * beta;
-      this.slot(this.bv, owner, other, d)[e] += cv;
-      const ov = this.slot(this.bv, other, owner, d);
-      ov[k] += cv * (1 - lam);
-      ov[k + 1] += cv * lam;
+  consume(buf: ResidualBuffer): this {
+    const {
+      r: R,
+      w: W,
+      g: G,
+      owner: OW,
+      other: OT,
+      driver: DR,
+      entry: EN,
+      knot: KN,
+      lam: LAM,
+    } = buf;
+    for (let m = 0; m < buf.size; m++) {
+      const r = R[m];
+      const w = W[m];
+      const owner = OW[m];
+      const other = OT[m];
+      const d = DR[m];
+      const e = EN[m];
+      const k = KN[m];
+      const lam = LAM[m];
+      const wt = w * robustWeight(this.code, r * Math.sqrt(w), this.scale);
+      // Score contribution wt·r·∇r with ∇r = g (u_owner − u_other) [+ β (v_owner − v_other)].
+      // r = e_owner − (1 − λ) e_k − λ e_k+1 + …; a knot of `other` enters with the opposite sign,
+      // and (u_owner − u_other) = −(u_other − u_owner), so both knots get +coef in their own frame.
+      const ch = wt * G[m];
+      this.slot(this.bh, owner, other, d)[e] += ch;
+      const oh = this.slot(this.bh, other, owner, d);
+      oh[k] += ch * (1 - lam);
+      oh[k + 1] += ch * lam;
+      const beta = this.p.beta[d];
+      if (this.p.joint && beta !== 0) {
+        const cv = wt * beta;
+        this.slot(this.bv, owner, other, d)[e] += cv;
+        const ov = this.slot(this.bv, other, owner, d);
+        ov[k] += cv * (1 - lam);
+        ov[k + 1] += cv * lam;
+      }
     }
+    return this;
   }
 
   /** Σ_p c_p c_pᵀ / n_p over the full parameter vector (size × size, row-major). */

@@ -9,10 +9,11 @@
  * the curvature of the objective at the optimum, so errors are relative to the constraints, i.e. to
  * the reference temperature.
  */
-import { LuDecomposition, Matrix } from 'ml-matrix';
 import type { FitProblem } from './problem';
 import { parameterCount } from './problem';
-import { allResiduals } from './residuals';
+import { residualsAt } from './residuals';
+import { ResidualBuffer } from './residual-buffer';
+import { luFactor, luInverse, luSolve } from './linear-solve';
 import { NormalSink } from './normal-equations';
 import { SandwichSink } from './sandwich';
 import type { RobustLoss } from './types';
@@ -30,6 +31,8 @@ export interface SolveSettings {
   /** 1 = parameter kept at its starting value. */
   fixed: Uint8Array;
   constraints: LinearConstraint[];
+  /** Reused residual storage (optional). */
+  buffer?: ResidualBuffer;
 }
 
 export interface SolveOutcome {
@@ -67,10 +70,9 @@ export function solveOffsets(
   const cons = s.constraints.filter((c) => free.some((i) => c.coef[i] !== 0));
   const nc = cons.length;
   projectOntoConstraints(theta, free, cons);
+  const buf = s.buffer ?? new ResidualBuffer();
   const evaluate = (t: Float64Array, matrix: boolean): NormalSink => {
-    const sink = new NormalSink(p, s.loss, s.scale, matrix);
-    allResiduals(p, t, sink);
-    return sink;
+    return new NormalSink(p, s.loss, s.scale, matrix).consume(residualsAt(p, t, buf));
   };
   let cur = evaluate(theta, true);
   let lambda = 1e-3;
@@ -130,10 +132,9 @@ export function solveOffsets(
   const residualVariance = cur.weightedSquares / dof;
   // Covariance with noise-damped slopes (see FitProblem.smoothSlopes).
   const smooth: FitProblem = { ...p, smoothSlopes: true };
-  const bread = new NormalSink(smooth, s.loss, s.scale, true);
-  allResiduals(smooth, theta, bread);
-  const sandwich = new SandwichSink(smooth, s.loss, s.scale);
-  allResiduals(smooth, theta, sandwich);
+  residualsAt(smooth, theta, buf);
+  const bread = new NormalSink(smooth, s.loss, s.scale, true).consume(buf);
+  const sandwich = new SandwichSink(smooth, s.loss, s.scale).consume(buf);
   const covariance = covarianceOf(bread, free, cons, residualVariance, sandwich.meat());
   return {
     theta,
@@ -153,53 +154,58 @@ function projectOntoConstraints(
   free: number[],
   cons: LinearConstraint[],
 ): void {
-  if (cons.length === 0) return;
   const nc = cons.length;
-  const cct = new Matrix(nc, nc);
-  const viol = new Matrix(nc, 1);
+  if (nc === 0) return;
+  const cct = new Float64Array(nc * nc);
+  const viol = new Float64Array(nc);
   for (let a = 0; a < nc; a++) {
     let v = cons[a].rhs;
     for (let i = 0; i < theta.length; i++) v -= cons[a].coef[i] * theta[i];
-    viol.set(a, 0, v);
+    viol[a] = v;
     for (let b = 0; b < nc; b++) {
       let sum = 0;
       for (const i of free) sum += cons[a].coef[i] * cons[b].coef[i];
-      cct.set(a, b, sum);
+      cct[a * nc + b] = sum;
     }
   }
-  const mu = new LuDecomposition(cct).solve(viol);
+  const f = luFactor(cct, nc);
+  if (f.singular) return;
+  const mu = luSolve(f, viol);
   for (const i of free) {
     let d = 0;
-    for (let a = 0; a < nc; a++) d += cons[a].coef[i] * mu.get(a, 0);
+    for (let a = 0; a < nc; a++) d += cons[a].coef[i] * mu[a];
     theta[i] += d;
   }
 }
 
+/** KKT matrix (row-major, (m + nc)²) with Marquardt damping λ·diag(A). */
 function kktMatrix(
   sink: NormalSink,
   free: number[],
   cons: LinearConstraint[],
   lambda: number,
-): Matrix {
+): Float64Array {
   const m = free.length;
   const nc = cons.length;
+  const n = m + nc;
   const size = sink.size;
-  const k = new Matrix(m + nc, m + nc);
+  const k = new Float64Array(n * n);
   let meanDiag = 0;
   for (const i of free) meanDiag += sink.a[i * size + i];
   meanDiag = m > 0 ? meanDiag / m : 0;
+  // A parameter without any residual keeps a tiny diagonal so the system stays solvable.
   const floor = 1e-9 * meanDiag + 1e-12;
   for (let u = 0; u < m; u++) {
     const row = free[u] * size;
-    for (let v = 0; v < m; v++) k.set(u, v, sink.a[row + free[v]]);
+    for (let v = 0; v < m; v++) k[u * n + v] = sink.a[row + free[v]];
     const d = Math.max(sink.a[row + free[u]], floor);
-    k.set(u, u, d * (1 + lambda) + (d === floor ? floor : 0));
+    k[u * n + u] = d * (1 + lambda);
   }
   for (let a = 0; a < nc; a++)
     for (let u = 0; u < m; u++) {
       const c = cons[a].coef[free[u]];
-      k.set(m + a, u, c);
-      k.set(u, m + a, c);
+      k[(m + a) * n + u] = c;
+      k[u * n + m + a] = c;
     }
   return k;
 }
@@ -213,22 +219,18 @@ function kktStep(
 ): Float64Array | null {
   const m = free.length;
   const nc = cons.length;
-  const k = kktMatrix(sink, free, cons, lambda);
-  const b = new Matrix(m + nc, 1);
-  for (let u = 0; u < m; u++) b.set(u, 0, -sink.g[free[u]]);
+  const f = luFactor(kktMatrix(sink, free, cons, lambda), m + nc);
+  if (f.singular) return null;
+  const b = new Float64Array(m + nc);
+  for (let u = 0; u < m; u++) b[u] = -sink.g[free[u]];
   for (let a = 0; a < nc; a++) {
     let v = cons[a].rhs;
     for (let i = 0; i < theta.length; i++) v -= cons[a].coef[i] * theta[i];
-    b.set(m + a, 0, v);
+    b[m + a] = v;
   }
-  const lu = new LuDecomposition(k);
-  if (lu.isSingular()) return null;
-  const x = lu.solve(b);
-  const out = new Float64Array(m);
-  for (let u = 0; u < m; u++) {
-    out[u] = x.get(u, 0);
-    if (!Number.isFinite(out[u])) return null;
-  }
+  const x = luSolve(f, b);
+  const out = x.subarray(0, m);
+  for (let u = 0; u < m; u++) if (!Number.isFinite(out[u])) return null;
   return out;
 }
 
@@ -241,22 +243,27 @@ function covarianceOf(
 ): Float64Array | null {
   const size = sink.size;
   const m = free.length;
+  const n = m + cons.length;
   const cov = new Float64Array(size * size);
   if (m === 0) return cov;
-  const k = kktMatrix(sink, free, cons, 0);
-  const lu = new LuDecomposition(k);
-  if (lu.isSingular()) return null;
-  const inv = lu.solve(Matrix.eye(k.rows));
-  const mm = new Matrix(m, m);
-  const bb = new Matrix(m, m);
+  const f = luFactor(kktMatrix(sink, free, cons, 0), n);
+  if (f.singular) return null;
+  const inv = luInverse(f);
+  // Cov = σ²·M B M (sandwich), M = top-left m×m block of the inverse (symmetric).
+  const mb = new Float64Array(m * m);
   for (let u = 0; u < m; u++)
-    for (let v = 0; v < m; v++) {
-      mm.set(u, v, inv.get(u, v));
-      bb.set(u, v, meat[free[u] * size + free[v]]);
+    for (let w = 0; w < m; w++) {
+      const muw = inv[u * n + w];
+      if (muw === 0) continue;
+      const row = free[w] * size;
+      for (let v = 0; v < m; v++) mb[u * m + v] += muw * meat[row + free[v]];
     }
-  // Cov = σ²·M B M (sandwich); M is symmetric.
-  const c = mm.mmul(bb).mmul(mm);
   for (let u = 0; u < m; u++)
-    for (let v = 0; v < m; v++) cov[free[u] * size + free[v]] = s2 * c.get(u, v);
+    for (let v = u; v < m; v++) {
+      let sum = 0;
+      for (let w = 0; w < m; w++) sum += mb[u * m + w] * inv[w * n + v];
+      cov[free[u] * size + free[v]] = s2 * sum;
+      cov[free[v] * size + free[u]] = s2 * sum;
+    }
   return cov;
 }

@@ -1,0 +1,99 @@
+/**
+ * Shift engine speed: `npm run bench -- shift`. Invented synthetic sets (core/synthetic) with
+ * isotherms × points per isotherm of 10×16, 50×100 and 200×2000, G' and G'' driving; then the live
+ * re-fit of the desktop app: one curve locked at a new shift, warm start from the previous result,
+ * on 15 isotherms. Targets on one core: 5 ms, 100 ms, 1 s; re-fit 16 ms.
+ */
+import { shiftIsotherms } from '../core/shift/index.ts';
+import type { ShiftOptions } from '../core/shift/index.ts';
+import { smoothProny, syntheticIsotherms } from '../core/synthetic/index.ts';
+import { medianMs } from './timing.ts';
+
+/** Power-law melt spectrum wide enough for every reduced window used below (invented). */
+const spectrum = smoothProny({
+  tauMinS: 1e-40,
+  tauMaxS: 1e12,
+  modesPerDecade: 1,
+  glassyModulusPa: 1e9,
+  equilibriumModulusPa: 0,
+  slope: 0.5,
+});
+
+/** About 0.25 decades of shift between neighbouring isotherms, 2 K apart (invented law). */
+function dataset(isotherms: number, points: number) {
+  const decades = 3;
+  return syntheticIsotherms({
+    testKind: 'oscillatory',
+    deformation: 'shear',
+    referenceK: 450,
+    temperaturesK: Array.from(
+      { length: isotherms },
+      (_, i) => 450 + 2 * (i - Math.floor(isotherms / 2)),
+    ),
+    components: [{ prony: spectrum, law: { kind: 'arrhenius', activationEnergyJPerMol: 4.8e5 } }],
+    xMin: 0.1,
+    xMax: 0.1 * 10 ** decades,
+    pointsPerDecade: (points - 1) / decades,
+    relativeNoise: 0.02,
+    seed: 1,
+    name: 'invented benchmark melt',
+  }).dataset;
+}
+
+function time(
+  label: string,
+  isotherms: number,
+  points: number,
+  target: number,
+  options: Partial<ShiftOptions>,
+  repeats: number,
+): number {
+  const d = dataset(isotherms, points);
+  const ms = medianMs(() => shiftIsotherms(d, { referenceK: 450, ...options }), repeats, 1);
+  const pts = d.isotherms.reduce((a, i) => a + i.x.length, 0);
+  console.log(
+    `${label.padEnd(26)} ${String(isotherms).padStart(3)}×${String(points).padEnd(5)} ${ms.toFixed(1).padStart(8)} ms  (target ≤ ${target} ms)  ${((ms / pts) * 1000).toFixed(2)} µs/point`,
+  );
+  return ms;
+}
+
+export async function run(): Promise<void> {
+  const sizes: [number, number, number, number][] = [
+    [10, 16, 5, 21],
+    [50, 100, 100, 7],
+    [200, 2000, 1000, 3],
+  ];
+  for (const [label, options] of [
+    ['full (with checks)', {}],
+    ['fit only (checks: false)', { checks: false }],
+  ] as const) {
+    let prev: number | null = null;
+    let prevPts = 0;
+    for (const [n, p, target, repeats] of sizes) {
+      const ms = time(label, n, p, target, options, repeats);
+      if (prev !== null)
+        console.log(
+          `${''.padEnd(26)} growth: ${(ms / prev).toFixed(1)}× time for ${((n * p) / prevPts).toFixed(0)}× points`,
+        );
+      prev = ms;
+      prevPts = n * p;
+    }
+  }
+  // Live re-fit: lock one curve at a new shift, warm start from the previous result.
+  const d = dataset(15, 16);
+  const first = shiftIsotherms(d, { referenceK: 450 });
+  const initial = Object.fromEntries(first.curves.map((c) => [c.id, c.log10aT ?? 0]));
+  const dragged = { id: d.isotherms[3].id, log10aT: (first.curves[3].log10aT ?? 0) + 0.1 };
+  for (const [label, checks] of [
+    ['re-fit, warm, with checks', true],
+    ['re-fit, warm, no checks', false],
+  ] as const) {
+    const ms = medianMs(
+      () =>
+        shiftIsotherms(d, { referenceK: 450, locked: [dragged], initialLog10aT: initial, checks }),
+      21,
+      3,
+    );
+    console.log(`${label.padEnd(26)}  15×16     ${ms.toFixed(1).padStart(8)} ms  (target ≤ 16 ms)`);
+  }
+}
