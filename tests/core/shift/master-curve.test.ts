@@ -1,0 +1,81 @@
+import { describe, expect, it } from 'vitest';
+import { masterCurve, shiftIsotherms } from '../../../core/shift';
+import { pronyLoss, pronyRelaxation, pronyStorage } from '../../../core/spectrum/prony-model';
+import { syntheticIsotherms } from '../../../core/synthetic';
+import { expectRelClose } from '../../helpers/assert-close';
+import { MELT, MELT_ARRHENIUS, RELAX_WLF, RELAXING } from './fixtures';
+
+describe('masterCurve()', () => {
+  it('masterCurve() of noise-free isotherms lies on the reference curve G(ω_r) (ω_r = aT·ω, × bT)', () => {
+    const { dataset } = syntheticIsotherms({
+      ...MELT_ARRHENIUS.options,
+      relativeNoise: 0,
+      seed: 1,
+      density: { referenceDensity: 900, volumetricExpansionPerK: 6e-4 },
+    });
+    const result = shiftIsotherms(dataset, {
+      referenceK: 463.15,
+      vertical: 'density',
+      density: { kind: 'expansion', referenceDensityKgPerM3: 900, volumetricExpansionPerK: 6e-4 },
+    });
+    const pts = masterCurve(dataset, result);
+    expect(pts.length).toBe(dataset.isotherms.reduce((a, i) => a + i.x.length, 0));
+    for (let i = 1; i < pts.length; i++)
+      expect(pts[i].reducedX).toBeGreaterThanOrEqual(pts[i - 1].reducedX);
+    for (const p of pts) {
+      // Shifts are fitted: linear interpolation between points 0.2 decades apart and the stopping
+      // tolerance leave errors up to about 0.001 decades; allow 0.5 % (0.001 decades on the
+      // terminal slope 2 of G').
+      expectRelClose(p.values.storageModulus!, pronyStorage(MELT, p.reducedX), 5e-3, "G'");
+      expectRelClose(p.values.lossModulus!, pronyLoss(MELT, p.reducedX), 5e-3, "G''");
+      expectRelClose(
+        p.values.tanDelta!,
+        pronyLoss(MELT, p.reducedX) / pronyStorage(MELT, p.reducedX),
+        5e-3,
+        'tan δ',
+      );
+    }
+  });
+
+  it('masterCurve() reduces time as t/aT for relaxation data', () => {
+    const { dataset } = syntheticIsotherms({ ...RELAX_WLF.options, relativeNoise: 0, seed: 1 });
+    const result = shiftIsotherms(dataset, { referenceK: 300 });
+    for (const p of masterCurve(dataset, result))
+      expectRelClose(
+        p.values.relaxationModulus!,
+        pronyRelaxation(RELAXING, p.reducedX),
+        5e-3,
+        'G(t_r)',
+      );
+  });
+
+  it('masterCurve() leaves out excluded isotherms and keeps masks and outlier flags', () => {
+    const { dataset } = syntheticIsotherms({
+      ...MELT_ARRHENIUS.options,
+      relativeNoise: 0.02,
+      seed: 2,
+    });
+    dataset.isotherms[0].mask[3] = false;
+    const result = shiftIsotherms(dataset, { referenceK: 463.15, excluded: ['T10'] });
+    const pts = masterCurve(dataset, result);
+    expect(pts.some((p) => p.isothermId === 'T10')).toBe(false);
+    expect(pts.find((p) => p.isothermId === 'T01' && p.pointIndex === 3)!.used).toBe(false);
+    const flagged = result.curves.flatMap((c) => c.outlierPoints.map((i) => `${c.id}:${i}`));
+    expect(
+      pts
+        .filter((p) => p.outlier)
+        .map((p) => `${p.isothermId}:${p.pointIndex}`)
+        .sort(),
+    ).toEqual(flagged.filter((f) => !f.startsWith('T10')).sort());
+  });
+
+  it('masterCurve() of a result with nothing included is empty', () => {
+    const { dataset } = syntheticIsotherms({
+      ...MELT_ARRHENIUS.options,
+      temperaturesK: [480],
+      relativeNoise: 0,
+      seed: 1,
+    });
+    expect(masterCurve(dataset, shiftIsotherms(dataset, { referenceK: 463.15 }))).toEqual([]);
+  });
+});
