@@ -64,9 +64,14 @@ export function computeIndicators(
     }
   };
   const oscillatory = dataset.abscissa === 'angularFrequency';
-  let melt =
-    series.equilibriumModulusPa <=
-    1e-4 * (series.modulusPa.reduce((a, b) => a + b, 0) + series.equilibriumModulusPa);
+  // Melt (liquid-like at long times): no equilibrium modulus to speak of, or G'' > G' at the
+  // low-frequency end of the window (terminal zone). A solid's transition may have G'' > G' in
+  // the middle of the window, so a crossover alone does not make a melt.
+  const g0 = series.modulusPa.reduce((a, b) => a + b, 0) + series.equilibriumModulusPa;
+  const lowW = window.abscissa === 'time' ? 1 / window.max : window.min;
+  const melt =
+    series.equilibriumModulusPa <= 1e-4 * g0 ||
+    (oscillatory && pronyLoss(series, lowW) > pronyStorage(series, lowW));
 
   if (oscillatory) {
     attempt('Crossover', () => {
@@ -78,7 +83,6 @@ export function computeIndicators(
       );
       const c = crossovers.find((x) => x.direction === 'storage-rises') ?? crossovers[0];
       if (!c) return;
-      if (c.direction === 'storage-rises') melt = true;
       out.push(
         {
           key: 'crossoverFrequency',

@@ -1,0 +1,71 @@
+import { describe, it, expect } from 'vitest';
+import { computeIndicators } from '../../../core/pipeline/indicators';
+import type { Dataset } from '../../../core/data/types';
+import type { AnalysisMasterCurve, AnalysisWarning } from '../../../core/pipeline/types';
+import type { PronySeries } from '../../../core/spectrum/prony-model';
+import { pronyLoss, pronyStorage } from '../../../core/spectrum/prony-model';
+import { expectRelClose } from '../../helpers/assert-close';
+
+const dataset = {
+  abscissa: 'angularFrequency',
+  deformation: 'shear',
+  testKind: 'oscillatory',
+} as Dataset;
+const window = { abscissa: 'angularFrequency' as const, min: 1e-3, max: 1e3 };
+
+function masterOf(p: PronySeries): AnalysisMasterCurve {
+  const x = Array.from({ length: 61 }, (_, i) => 1e-3 * 10 ** (i / 10));
+  return {
+    reducedX: x,
+    quantities: {
+      storageModulus: x.map((w) => pronyStorage(p, w)),
+      lossModulus: x.map((w) => pronyLoss(p, w)),
+    },
+    isothermId: x.map(() => 'T01'),
+    temperatureK: x.map(() => 400),
+    outlier: x.map(() => false),
+  };
+}
+
+describe('computeIndicators()', () => {
+  it('computeIndicators() finds the crossover of one Maxwell element at ω = 1/τ with G′ = G″ = g/2 (Ferry 1980, ch. 3)', () => {
+    const p: PronySeries = { equilibriumModulusPa: 0, tauS: [0.5], modulusPa: [2e5] };
+    const w: AnalysisWarning[] = [];
+    const ind = Object.fromEntries(
+      computeIndicators(dataset, masterOf(p), p, window, {}, w).map((i) => [i.key, i]),
+    );
+    expectRelClose(
+      ind.crossoverFrequency.value,
+      2,
+      0.01,
+      'interpolated between points 50 per decade',
+    );
+    expectRelClose(ind.crossoverModulus.value, 1e5, 0.01, 'interpolated');
+    // η0 = g·τ for a Maxwell element; |η*| = gτ/√(1 + ω²τ²) is close to, not exactly, a Cross law
+    expectRelClose(ind.zeroShearViscosity.value, 1e5, 0.05, 'Cross fit of an exact Maxwell |η*|');
+    expect(ind.glassyModulus).toBeUndefined();
+  });
+  it('computeIndicators() gives glassy and rubbery moduli and the tan δ peak for a solid', () => {
+    const p: PronySeries = {
+      equilibriumModulusPa: 1e6,
+      tauS: [1e-4, 1e-3, 1e-2, 1e-1, 1],
+      modulusPa: [2e8, 2e8, 2e8, 2e8, 2e8],
+    };
+    const models = {
+      wlf: {
+        c1: 8.86,
+        c2K: 101.6,
+        referenceK: 373.15,
+        fittedRangeK: [343.15, 403.15] as [number, number],
+      },
+    } as Parameters<typeof computeIndicators>[4];
+    const ind = Object.fromEntries(
+      computeIndicators(dataset, masterOf(p), p, window, models, []).map((i) => [i.key, i]),
+    );
+    expectRelClose(ind.glassyModulus.value, 1.001e9, 1e-12, 'G0 = Ge + Σ g_i');
+    expect(ind.rubberyModulus.value).toBe(1e6);
+    expect(ind.tanDeltaPeakFrequency.value).toBeGreaterThan(1e-3);
+    expect(ind.tanDeltaPeakTemperature1Hz.unit).toBe('°C');
+    expect(ind.zeroShearViscosity).toBeUndefined(); // a solid: its G'' > G' transition is no terminal zone
+  });
+});
