@@ -185,6 +185,28 @@ describe('the Thermoshift app in Chromium', () => {
     expectAbsClose(Number(await rowText(id, 'log-aT')), before, 0.0005, 'log10 aT after undo');
   });
 
+  it('masks points by box-selecting them on the isotherms plot, as one undo step', async () => {
+    await page.click('[data-view-tab="measured"]');
+    await page.click('[data-role="mode-mask"]');
+    const box = (await page.locator('canvas[data-plot="measured"]').boundingBox())!;
+    // a box over the lower-left corner of the plot: the low-frequency, low-modulus points
+    await page.mouse.move(box.x + 60, box.y + box.height * 0.55);
+    await page.mouse.down();
+    await page.mouse.move(box.x + box.width * 0.3, box.y + box.height - 40, { steps: 4 });
+    await page.mouse.up();
+    await page.waitForFunction(
+      () => Number(document.querySelector('[data-role="masked-count"]')?.textContent) > 0,
+    );
+    await settled();
+    expect(await paintedPixels()).toBeGreaterThan(3000);
+    await shot('masked-points');
+    await page.keyboard.press('Control+z');
+    await page.waitForFunction(
+      () => document.querySelector('[data-role="masked-count"]')?.textContent?.trim() === '0',
+    );
+    await page.click('[data-role="mode-explore"]');
+  });
+
   it('nudges a curve with its button, as one undo step', async () => {
     const id = await rowIdAt('10.0');
     const before = Number(await rowText(id, 'log-aT'));
@@ -196,6 +218,24 @@ describe('the Thermoshift app in Chromium', () => {
     expectAbsClose(Number(await rowText(id, 'log-aT')), before, 0.0005, 'log10 aT after undo');
   });
 
+  it('answers a prediction with its range, flags and cautions', async () => {
+    await page.click('[data-view-tab="predict"]');
+    await page.fill('[data-role="predict-temperature"]', '30');
+    await page.fill('[data-role="predict-x"]', '1');
+    await page.click('[data-role="predict"]');
+    const text = await page.innerText('[data-role="prediction"]');
+    expect(
+      Number((await page.innerText('[data-role="predicted-value"]')).replace(/[^\d.e+-]/g, '')),
+    ).toBeGreaterThan(0);
+    expect(text).toMatch(/95 % range/);
+    expect(text).toMatch(/licensed engineering practice/);
+    await shot('prediction');
+    await page.fill('[data-role="predict-temperature"]', '150');
+    await page.click('[data-role="predict"]');
+    expect(await page.innerText('[data-role="prediction"]')).toMatch(/outside the fitted range/);
+    await page.click('[data-view-tab="master"]');
+  });
+
   it('exports the shift table, a plot as PNG, and saves and reopens the analysis', async () => {
     await page.click('[data-role="export"]');
     const csvDownload = page.waitForEvent('download');
@@ -203,6 +243,13 @@ describe('the Thermoshift app in Chromium', () => {
     const csv = readFileSync((await (await csvDownload).path())!, 'utf8');
     expect(csv).toMatch(/log10/);
     expect(csv.split('\n').filter((l) => /^T\d\d/.test(l))).toHaveLength(11);
+
+    await page.click('[data-role="export"]');
+    const reportDownload = page.waitForEvent('download');
+    await page.click('[data-export="report.html"]');
+    const report = readFileSync((await (await reportDownload).path())!, 'utf8');
+    expect(report).toMatch(/<html/i);
+    expect(report).toMatch(/QS-72/);
 
     const pngDownload = page.waitForEvent('download');
     await page.click('[data-role="export-png"]');
