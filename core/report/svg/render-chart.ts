@@ -27,7 +27,8 @@ export function renderChart(spec: ChartSpec): string {
   const right = MARGIN.right + (spec.colourBar ? COLOUR_BAR_WIDTH : 0);
   const x0 = MARGIN.left;
   const x1 = spec.width - right;
-  const y0 = MARGIN.top;
+  const legend = legendLayout(spec, x0, x1);
+  const y0 = MARGIN.top + 16 * Math.max(0, legend.rows - 1);
   const y1 = spec.height - MARGIN.bottom;
   const bands = spec.bands ?? [];
   const xs = [...spec.series.flatMap((s) => s.x), ...bands.flatMap((b) => b.x)];
@@ -111,27 +112,32 @@ export function renderChart(spec: ChartSpec): string {
     `<text class="axis-label" x="${(x0 + x1) / 2}" y="${spec.height - 8}" text-anchor="middle">${escapeHtml(spec.x.label)}</text>`,
     `<text class="axis-label" transform="translate(14 ${(y0 + y1) / 2}) rotate(-90)" text-anchor="middle">${escapeHtml(spec.y.label)}</text>`,
   );
-  out.push(legendSvg(spec, x0, x1));
+  out.push(legend.svg);
   if (spec.colourBar) out.push(colourBarSvg(id, spec.colourBar, x1 + 16, y0, y1));
   out.push('</svg>');
   return out.join('');
 }
 
-function legendSvg(spec: ChartSpec, x0: number, x1: number): string {
+/** Legend entries laid out left to right, wrapping onto further rows 16 px apart. */
+function legendLayout(spec: ChartSpec, x0: number, x1: number): { rows: number; svg: string } {
   const entries = spec.legend ?? [];
-  if (entries.length === 0) return '';
+  if (entries.length === 0) return { rows: 0, svg: '' };
   const parts: string[] = [];
   let x = x0;
-  const y = 16;
+  let row = 0;
   for (const e of entries) {
-    const w = 30 + e.name.length * 6;
-    if (x + w > x1 + 10) break;
+    const w = 30 + e.name.length * 5.8;
+    if (x > x0 && x + w > x1 + 10) {
+      row++;
+      x = x0;
+    }
+    const y = 16 + 16 * row;
     const line = e.line === 'none' ? '' : lineSvg(`M${x},${y}L${x + 18},${y}`, e.colour, e.line);
     parts.push(line, markerSvg(e.marker, x + 9, y, e.colour, 'legend-pt'));
     parts.push(`<text x="${x + 22}" y="${y}" dy="0.35em">${escapeHtml(e.name)}</text>`);
     x += w;
   }
-  return `<g class="legend">${parts.join('')}</g>`;
+  return { rows: row + 1, svg: `<g class="legend">${parts.join('')}</g>` };
 }
 
 function colourBarSvg(

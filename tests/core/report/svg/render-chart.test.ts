@@ -72,3 +72,17 @@ describe('renderChart()', () => {
     expect(s).not.toContain('class="pt"');
   });
 });
+
+describe('renderChart() legend', () => {
+  it('renderChart() wraps a long legend onto a second row instead of dropping entries', () => {
+    const legend = Array.from({ length: 8 }, (_, i) => ({
+      name: `a rather long legend entry ${i}`,
+      colour: '#000',
+      marker: 'disc' as const,
+      line: 'none' as const,
+    }));
+    const s = renderChart({ ...spec, legend });
+    for (let i = 0; i < 8; i++) expect(s).toContain(`a rather long legend entry ${i}`);
+    expect(s).toMatch(/<text x="[\d.]+" y="32"/);
+  });
+});
