@@ -19,8 +19,14 @@ describe('decadeTicks()', () => {
     expect(t[0].label).toBe('10⁻¹⁰');
   });
 
-  it('decadeTicks() adds 2 and 5 steps when less than two decades are in view', () => {
+  it('decadeTicks() adds 2 and 5 steps when three decades or fewer are in view', () => {
     expect(decadeTicks(1.5, 30).map((x) => x.value)).toEqual([2, 5, 10, 20]);
+    expect(
+      decadeTicks(3e3, 2e5)
+        .filter((x) => x.major)
+        .map((x) => x.label),
+    ).toEqual(['10⁴', '10⁵']);
+    expect(decadeTicks(3e3, 2e5).map((x) => x.label)).toContain('5×10³');
   });
 
   it('decadeTicks() returns nothing for an empty, reversed or non-positive range', () => {

@@ -1,6 +1,6 @@
 /**
  * Tick positions for a log10 axis: every decade (10ⁿ), labelled as a power of ten. When the axis
- * spans less than about one decade, 2 and 5 multiples are added so there are always a few labels;
+ * spans three decades or fewer, 2 and 5 multiples are added so there are always a few labels;
  * over very wide spans only every k-th decade is labelled.
  */
 import { superscript } from '../../../../core/report/format';
@@ -29,7 +29,7 @@ export function decadeTicks(min: number, max: number, maxLabels = 10): LogTick[]
   const lo = Math.ceil(Math.log10(min) - 1e-9);
   const hi = Math.floor(Math.log10(max) + 1e-9);
   const decades = hi - lo + 1;
-  if (decades >= 2) {
+  if (decades >= 4) {
     const every = Math.max(1, Math.ceil(decades / maxLabels));
     const ticks: LogTick[] = [];
     for (let e = lo; e <= hi; e++) {
@@ -38,7 +38,7 @@ export function decadeTicks(min: number, max: number, maxLabels = 10): LogTick[]
     }
     return ticks;
   }
-  // Less than two decades in view: 1, 2, 5 steps.
+  // Three decades or fewer in view: 1, 2, 5 steps.
   const ticks: LogTick[] = [];
   for (let e = Math.floor(Math.log10(min)); e <= Math.ceil(Math.log10(max)); e++) {
     for (const m of [1, 2, 5]) {
