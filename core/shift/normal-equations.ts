@@ -5,7 +5,17 @@
 import type { FitProblem } from './problem';
 import { parameterCount } from './problem';
 import type { ResidualBuffer } from './residual-buffer';
-import { LOSS_HUBER, lossCode, robustRho, robustWeight } from './robust';
+import {
+  LOSS_HUBER as HUBER_CODE,
+  lossCode,
+  robustRho as rhoImport,
+  robustWeight as weightImport,
+} from './robust';
+
+// Local bindings (see residuals.ts): no getter per call under CommonJS transpilers.
+const LOSS_HUBER = HUBER_CODE;
+const robustRho = rhoImport;
+const robustWeight = weightImport;
 import type { RobustLoss } from './types';
 
 export class NormalSink {
@@ -15,18 +25,20 @@ export class NormalSink {
   lossSum = 0;
   weightedSquares = 0;
   count = 0;
+  readonly isHuber: boolean;
   private readonly n: number;
   private readonly code: number;
 
   constructor(
     private readonly p: FitProblem,
     loss: RobustLoss,
-    private readonly scale: number,
-    private readonly withMatrix = true,
+    readonly scale: number,
+    readonly withMatrix = true,
   ) {
     this.size = parameterCount(p);
     this.n = p.curves.length;
     this.code = lossCode(loss);
+    this.isHuber = this.code === LOSS_HUBER;
     this.a = new Float64Array(withMatrix ? this.size * this.size : 0);
     this.g = new Float64Array(withMatrix ? this.size : 0);
   }
@@ -97,6 +109,14 @@ export class NormalSink {
       }
     }
     return this;
+  }
+
+  rho(z: number): number {
+    return robustRho(this.code, z, this.scale);
+  }
+
+  weight(z: number): number {
+    return robustWeight(this.code, z, this.scale);
   }
 
   /** Mean robust loss per measured point in the overlaps: the objective minimised. */

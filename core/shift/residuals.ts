@@ -9,7 +9,12 @@
  */
 import type { FitProblem, FitSeries } from './problem';
 import { ResidualBuffer } from './residual-buffer';
-import { lowerBound, upperBound } from './series';
+import { lowerBound as lowerBoundImport, upperBound as upperBoundImport } from './series';
+
+// Local bindings: module-namespace imports can compile to getters under CommonJS transpilers (tsx),
+// which costs a property lookup per call in this hot loop.
+const lowerBound = lowerBoundImport;
+const upperBound = upperBoundImport;
 
 /**
  * Each residual r (decades) carries the weight w = σ²/var(r), σ the noise of one measured point:

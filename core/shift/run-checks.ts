@@ -5,6 +5,8 @@ import { gradeOf, mismatchRatio, noiseOfProblem, vanGurpPalmenDispersion } from 
 import { hasQuantity } from './drivers';
 import type { OffsetFit } from './fit-offsets';
 import { fitOffsets } from './fit-offsets';
+import { candidatePairs } from './pairs';
+import type { FitProblem } from './problem';
 import type { ResolvedShiftOptions, ShiftChecks, ShiftWarning } from './types';
 import type { VerticalOutcome } from './vertical';
 import { warn } from './warnings';
@@ -18,6 +20,40 @@ function comparedQuantities(dataset: Dataset, s: ResolvedShiftOptions): Quantity
   )
     return ['storageModulus', 'lossModulus'];
   return [];
+}
+
+/**
+ * The problem for one quantity alone: reuses the main fit's series when that quantity drove it
+ * (no rebuilding), otherwise builds it with the main fit's outliers left out.
+ */
+function singleDriver(
+  dataset: Dataset,
+  s: ResolvedShiftOptions,
+  fit: OffsetFit,
+  active: number[],
+  vertical: VerticalOutcome,
+  q: QuantityId,
+): FitProblem {
+  const d = s.drivers.indexOf(q);
+  if (d >= 0) {
+    const p: FitProblem = {
+      ...fit.problem,
+      curves: fit.problem.curves.map((c) => [c[d]]),
+      alpha: fit.problem.alpha.subarray(d, d + 1),
+      beta: fit.problem.beta.subarray(d, d + 1),
+    };
+    p.pairs = candidatePairs(p);
+    return p;
+  }
+  return buildProblem(dataset, {
+    active,
+    drivers: [q],
+    fixedLog10bT: vertical.joint ? null : vertical.log10bT,
+    joint: vertical.joint,
+    minOverlapPoints: s.minOverlapPoints,
+    maxPointsPerDecade: s.maxPointsPerDecade,
+    dropped: fit.outliers,
+  });
 }
 
 interface Disagreement {
@@ -41,18 +77,7 @@ function disagreement(
   });
   const fits = quantities.map((q) =>
     fitOffsets({
-      build: () => {
-        const p = buildProblem(dataset, {
-          active,
-          drivers: [q],
-          fixedLog10bT: vertical.joint ? null : vertical.log10bT,
-          joint: vertical.joint,
-          minOverlapPoints: s.minOverlapPoints,
-          maxPointsPerDecade: s.maxPointsPerDecade,
-          dropped: fit.outliers,
-        });
-        return p;
-      },
+      build: () => singleDriver(dataset, s, fit, active, vertical, q),
       temperaturesK: active.map((k) => dataset.isotherms[k].temperatureK),
       referenceK: s.referenceK,
       locked,

@@ -11,7 +11,9 @@
  */
 import type { FitProblem } from './problem';
 import type { ResidualBuffer } from './residual-buffer';
-import { lossCode, robustWeight } from './robust';
+import { lossCode, robustWeight as weightImport } from './robust';
+
+const robustWeight = weightImport; // local binding, see residuals.ts
 import type { RobustLoss } from './types';
 
 export class SandwichSink {

@@ -67,6 +67,35 @@ function pushMismatch(
   }
 }
 
+/** Σ|a − interpolated b| and count over points of a inside b's range shifted by `shift`. */
+function sumAbsMismatch(
+  a: Light,
+  b: Light,
+  shift: number,
+  yOff: number,
+): { sum: number; count: number } {
+  const bx = b.lx;
+  const by = b.y;
+  const last = bx.length - 1;
+  const lo = bx[0];
+  const hi = bx[last];
+  let k = 0;
+  let sum = 0;
+  let count = 0;
+  const ax = a.lx;
+  const ay = a.y;
+  for (let e = 0; e < ax.length; e++) {
+    const q = ax[e] + shift;
+    if (q < lo) continue;
+    if (q > hi) break;
+    while (k < last - 1 && bx[k + 1] < q) k++;
+    const yb = by[k] + ((by[k + 1] - by[k]) * (q - bx[k])) / (bx[k + 1] - bx[k]);
+    sum += Math.abs(ay[e] + yOff - yb);
+    count++;
+  }
+  return { sum, count };
+}
+
 /**
  * Best offset of curve v relative to curve u (dh = h_v − h_u, dv = v_v − v_u), or null when the
  * two never overlap by `minOverlapPoints`.
@@ -108,10 +137,28 @@ export function scanPair(
   const betas: number[] = [];
   const vb: number[] = [];
   const score = (dh: number): ScanResult | null => {
+    const shift = p.sigma * dh;
+    if (!p.joint) {
+      // Fast path: mean absolute mismatch without storing residuals.
+      let sum = 0;
+      let count = 0;
+      let enough = false;
+      for (let d = 0; d < nd; d++) {
+        if (cu[d].lx.length < 2 || cv[d].lx.length < 2) continue;
+        const yOff = p.alpha[d] * dh;
+        const a = sumAbsMismatch(cv[d], cu[d], shift, yOff);
+        const b = sumAbsMismatch(cu[d], cv[d], -shift, -yOff);
+        if (a.count + b.count >= p.minOverlapPoints) {
+          enough = true;
+          sum += a.sum + b.sum;
+          count += a.count + b.count;
+        }
+      }
+      return enough ? { dh, dv: 0, score: sum / count, count } : null;
+    }
     buf.length = 0;
     betas.length = 0;
     vb.length = 0;
-    const shift = p.sigma * dh;
     let enough = false;
     for (let d = 0; d < nd; d++) {
       if (cu[d].lx.length < 2 || cv[d].lx.length < 2) continue;
@@ -125,10 +172,8 @@ export function scanPair(
     }
     if (!enough) return null;
     let dv = 0;
-    if (p.joint) {
-      for (let q = 0; q < buf.length; q++) if (betas[q] !== 0) vb.push(-betas[q] * buf[q]);
-      if (vb.length > 0) dv = median(vb);
-    }
+    for (let q = 0; q < buf.length; q++) if (betas[q] !== 0) vb.push(-betas[q] * buf[q]);
+    if (vb.length > 0) dv = median(vb);
     // Mismatch "v minus u" at equal reduced abscissa; a vertical offset enters as +β·dv.
     let sum = 0;
     for (let q = 0; q < buf.length; q++) sum += Math.abs(buf[q] + betas[q] * dv);

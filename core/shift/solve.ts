@@ -15,6 +15,7 @@ import { residualsAt } from './residuals';
 import { ResidualBuffer } from './residual-buffer';
 import { luFactor, luInverse, luSolve } from './linear-solve';
 import { NormalSink } from './normal-equations';
+import { normalAt } from './normal-walk';
 import { SandwichSink } from './sandwich';
 import type { RobustLoss } from './types';
 
@@ -49,9 +50,9 @@ export interface SolveOutcome {
 }
 
 /** Steps below this are immaterial (decades). */
-const STEP_TOL_DECADES = 1e-6;
+const STEP_TOL_DECADES = 1e-5;
 /** Relative decrease of the objective below which the fit has converged. */
-const REL_TOL = 1e-10;
+const REL_TOL = 1e-8;
 /** Rejected steps in a row after which no further decrease is possible. */
 const MAX_REJECTIONS = 4;
 /** A rejected step smaller than this means the optimum is reached for all practical purposes. */
@@ -72,7 +73,7 @@ export function solveOffsets(
   projectOntoConstraints(theta, free, cons);
   const buf = s.buffer ?? new ResidualBuffer();
   const evaluate = (t: Float64Array, matrix: boolean): NormalSink => {
-    return new NormalSink(p, s.loss, s.scale, matrix).consume(residualsAt(p, t, buf));
+    return normalAt(p, t, s.loss, s.scale, matrix);
   };
   let cur = evaluate(theta, true);
   let lambda = 1e-3;

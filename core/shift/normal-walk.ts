@@ -1,0 +1,142 @@
+/**
+ * The normal equations straight from the merge walk, without storing residuals: the inner loop of
+ * every Levenberg–Marquardt iteration. Same residuals, weights and derivatives as residuals.ts
+ * (see there for the formulas); kept separate because this loop dominates the run time.
+ */
+import type { FitProblem } from './problem';
+import { pairOverlap as pairOverlapImport } from './residuals';
+import { NormalSink } from './normal-equations';
+import { lowerBound as lowerBoundImport, upperBound as upperBoundImport } from './series';
+import type { RobustLoss } from './types';
+
+// Local bindings (see residuals.ts).
+const lowerBound = lowerBoundImport;
+const upperBound = upperBoundImport;
+const pairOverlap = pairOverlapImport;
+
+function walkInto(
+  p: FitProblem,
+  owner: number,
+  other: number,
+  d: number,
+  theta: ArrayLike<number>,
+  sink: NormalSink,
+): void {
+  const a = p.curves[owner][d];
+  const b = p.curves[other][d];
+  const n = p.curves.length;
+  const dh = theta[owner] - theta[other];
+  const shift = p.sigma * dh;
+  const alpha = p.alpha[d];
+  const beta = p.beta[d];
+  const joint = p.joint && beta !== 0;
+  const yOff = alpha * dh + (p.joint ? beta * (theta[n + owner] - theta[n + other]) : 0);
+  const bx = b.lx;
+  const by = b.y;
+  const bw = b.w;
+  const last = bx.length - 1;
+  const ax = a.lx;
+  const ay = a.y;
+  const aw = a.w;
+  const first = lowerBound(ax, bx[0] - shift);
+  const end = upperBound(ax, bx[last] - shift);
+  if (end <= first) return;
+  const sigma = p.sigma;
+  const huber = sink.isHuber;
+  const c = sink.scale;
+  let lossSum = 0;
+  let count = 0;
+  let wsq = 0;
+  let gr = 0;
+  let aa = 0;
+  let gv = 0;
+  let av = 0;
+  let ahv = 0;
+  let k = 0;
+  for (let e = first; e < end; e++) {
+    const q = ax[e] + shift;
+    while (k < last - 1 && bx[k + 1] < q) k++;
+    const h = bx[k + 1] - bx[k];
+    const slope = (by[k + 1] - by[k]) / h;
+    const lam = (q - bx[k]) / h;
+    const w = 1 / (1 / aw[e] + ((1 - lam) * (1 - lam)) / bw[k] + (lam * lam) / bw[k + 1]);
+    const r = ay[e] + yOff - (by[k] + slope * (q - bx[k]));
+    const z = r * Math.sqrt(w);
+    const az = Math.abs(z);
+    let psi: number;
+    if (huber) {
+      lossSum += az <= c ? 0.5 * z * z : c * az - 0.5 * c * c;
+      psi = az <= c ? 1 : c / az;
+    } else {
+      lossSum += sink.rho(z);
+      psi = sink.weight(z);
+    }
+    count += aw[e];
+    const wt = w * psi;
+    wsq += wt * r * r;
+    const g = alpha - sigma * slope;
+    const wg = wt * g;
+    gr += wg * r;
+    aa += wg * g;
+    if (joint) {
+      gv += wt * beta * r;
+      av += wt * beta * beta;
+      ahv += wg * beta;
+    }
+  }
+  sink.lossSum += lossSum;
+  sink.count += count;
+  sink.weightedSquares += wsq;
+  if (!sink.withMatrix) return;
+  const s = sink.size;
+  const A = sink.a;
+  const G = sink.g;
+  const i = owner;
+  const j = other;
+  G[i] += gr;
+  G[j] -= gr;
+  A[i * s + i] += aa;
+  A[j * s + j] += aa;
+  A[i * s + j] -= aa;
+  A[j * s + i] -= aa;
+  if (joint) {
+    const vi = n + i;
+    const vj = n + j;
+    G[vi] += gv;
+    G[vj] -= gv;
+    A[vi * s + vi] += av;
+    A[vj * s + vj] += av;
+    A[vi * s + vj] -= av;
+    A[vj * s + vi] -= av;
+    A[i * s + vi] += ahv;
+    A[vi * s + i] += ahv;
+    A[j * s + vj] += ahv;
+    A[vj * s + j] += ahv;
+    A[i * s + vj] -= ahv;
+    A[vj * s + i] -= ahv;
+    A[j * s + vi] -= ahv;
+    A[vi * s + j] -= ahv;
+  }
+}
+
+/** Normal equations (or only the objective) at θ over all candidate pairs and drivers. */
+export function normalAt(
+  p: FitProblem,
+  theta: ArrayLike<number>,
+  loss: RobustLoss,
+  scale: number,
+  withMatrix: boolean,
+): NormalSink {
+  const sink = new NormalSink(p, loss, scale, withMatrix);
+  const nd = p.alpha.length;
+  for (let q = 0; q < p.pairs.length; q += 2) {
+    const i = p.pairs[q];
+    const j = p.pairs[q + 1];
+    for (let d = 0; d < nd; d++) {
+      if (pairOverlap(p, i, j, d, theta) < p.minOverlapPoints) continue;
+      walkInto(p, i, j, d, theta, sink);
+      walkInto(p, j, i, d, theta, sink);
+    }
+  }
+  return sink;
+}
