@@ -25,6 +25,15 @@ export function shiftOptionsFor(s: ResolvedAnalysisOptions): ShiftOptions {
   };
 }
 
+/**
+ * Shifts below 1e-12 decades are rounding noise (the reference isotherm's log10 aT = 0 by
+ * definition may come back as 1e-19); `+ 0` also turns −0 into 0, which JSON cannot hold.
+ */
+export function cleanLog(v: number | null): number | null {
+  if (v === null) return null;
+  return Math.abs(v) < 1e-12 ? 0 : v + 0;
+}
+
 function noteOf(c: ShiftResult['curves'][number]): string | undefined {
   const notes: string[] = [];
   if (c.excluded) notes.push('excluded by the user');
@@ -44,10 +53,9 @@ export function runShift(
     return {
       isothermId: c.id,
       temperatureK: c.temperatureK,
-      // `+ 0` turns −0 (the reference isotherm) into 0: JSON has no −0
-      log10aT: c.log10aT === null ? null : c.log10aT + 0,
+      log10aT: cleanLog(c.log10aT),
       log10aTStdErr: c.log10aTStdErr,
-      log10bT: c.log10bT === null ? null : c.log10bT + 0,
+      log10bT: cleanLog(c.log10bT),
       log10bTStdErr: c.log10bTStdErr,
       included: c.included,
       qualityRmsDecades: c.rmsResidualDecades,

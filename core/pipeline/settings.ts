@@ -104,7 +104,8 @@ export function settingTemperatureK(value: number | string, key: string, source:
       key,
       source,
     );
-  return reading.temperatureK;
+  // −20 °C + 273.15 gives 253.14999999999998 in binary floating point: round to 1e-9 K
+  return Math.round(reading.temperatureK * 1e9) / 1e9;
 }
 
 export function settingsToImportOptions(s: Settings): ImportOptions {

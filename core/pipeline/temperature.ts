@@ -4,3 +4,8 @@ import { kelvinToCelsius } from '../data/quantities';
 export function toCelsius(temperatureK: number): number {
   return Math.round(kelvinToCelsius(temperatureK) * 1e6) / 1e6;
 }
+
+/** Kelvin as text with at most 10 significant digits (253.14999999999998 → "253.15"). */
+export function toKelvinText(temperatureK: number): string {
+  return String(Number(temperatureK.toPrecision(10)));
+}

@@ -4,7 +4,7 @@
  * opens offline and prints to A4 or Letter PDF from any browser.
  */
 import type { Analysis } from '../pipeline/types';
-import { toCelsius } from '../pipeline/temperature';
+import { toCelsius, toKelvinText } from '../pipeline/temperature';
 import { CONVENTIONS } from '../pipeline/conventions';
 import { escapeHtml } from './escape';
 import { REPORT_CSS } from './styles';
@@ -44,7 +44,7 @@ function titleBlock(a: Analysis, o: ReportOptions, title: string): string {
     ['test', `${a.sample.testKind}, ${a.sample.deformation}`],
     [
       'reference temperature',
-      `${toCelsius(a.referenceTemperatureK)} °C (${a.referenceTemperatureK} K)`,
+      `${toCelsius(a.referenceTemperatureK)} °C (${toKelvinText(a.referenceTemperatureK)} K)`,
     ],
     [
       'isotherms',

@@ -4,7 +4,7 @@
  */
 import type { Analysis } from '../pipeline/types';
 import { CONVENTIONS } from '../pipeline/conventions';
-import { toCelsius } from '../pipeline/temperature';
+import { toCelsius, toKelvinText } from '../pipeline/temperature';
 import { formatFixed, formatNumber } from './format';
 import type { TableSpec } from './html-table';
 import { modulusFactor, type ModulusUnit } from './output-units';
@@ -232,6 +232,6 @@ export function settingsTable(a: Analysis): TableSpec {
     caption: 'Settings used',
     head: ['setting', 'value'],
     rows,
-    note: `Reference temperature ${toCelsius(a.settings.referenceTemperatureK)} °C (${a.settings.referenceTemperatureK} K)${a.settings.referenceTemperatureAuto ? ', chosen automatically' : ''}. Temperatures in the settings are in kelvin.`,
+    note: `Reference temperature ${toCelsius(a.settings.referenceTemperatureK)} °C (${toKelvinText(a.settings.referenceTemperatureK)} K)${a.settings.referenceTemperatureAuto ? ', chosen automatically' : ''}. Temperatures in the settings are in kelvin.`,
   };
 }

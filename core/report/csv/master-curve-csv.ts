@@ -3,7 +3,7 @@ import type { Analysis } from '../../pipeline/types';
 import type { QuantityId } from '../../data/types';
 import { QUANTITY_IDS } from '../../data/types';
 import { conventionCommentLines } from '../../pipeline/conventions';
-import { toCelsius } from '../../pipeline/temperature';
+import { toCelsius, toKelvinText } from '../../pipeline/temperature';
 import { csvDocument, csvNumber } from './csv-format';
 import { outputUnitLabel, toOutputUnit, type ModulusUnit } from '../output-units';
 
@@ -32,7 +32,7 @@ export function masterCurveCsv(a: Analysis, unit: ModulusUnit = 'Pa'): string {
   return csvDocument(
     [
       `Thermoshift ${a.version} master curve — sample: ${a.sample.name}`,
-      `reference temperature: ${toCelsius(a.referenceTemperatureK)} C (${a.referenceTemperatureK} K); ${a.sample.deformation}, ${a.sample.testKind}`,
+      `reference temperature: ${toCelsius(a.referenceTemperatureK)} °C (${toKelvinText(a.referenceTemperatureK)} K); ${a.sample.deformation}, ${a.sample.testKind}`,
       `${xCol}: ${a.sample.abscissa === 'angularFrequency' ? 'aT·ω' : 't/aT'}; quantities reduced to Tref (moduli × bT)`,
       ...conventionCommentLines(),
       'source_temperature_C and isotherm: where each point was measured; outlier = yes: flagged by the shift engine and left out of the fits',

@@ -17,16 +17,16 @@ export function pronyCsv(a: Analysis, unit: ModulusUnit = 'Pa'): string | null {
   const shiftModel: string[] = [];
   if (wlf)
     shiftModel.push(
-      `shift model wlf: C1 = ${csvNumber(wlf.c1)}, C2 = ${csvNumber(wlf.c2K)} K, Tr = ${toCelsius(wlf.referenceK)} C (fitted ${toCelsius(wlf.fittedRangeK[0])}..${toCelsius(wlf.fittedRangeK[1])} C)`,
+      `shift model wlf: C1 = ${csvNumber(wlf.c1)}, C2 = ${csvNumber(wlf.c2K)} K, Tr = ${toCelsius(wlf.referenceK)} °C (fitted ${toCelsius(wlf.fittedRangeK[0])}..${toCelsius(wlf.fittedRangeK[1])} °C)`,
     );
   if (arrhenius)
     shiftModel.push(
-      `shift model arrhenius: Ea = ${csvNumber(arrhenius.activationEnergyKJPerMol)} kJ/mol, Tr = ${toCelsius(arrhenius.referenceK)} C (fitted ${toCelsius(arrhenius.fittedRangeK[0])}..${toCelsius(arrhenius.fittedRangeK[1])} C)`,
+      `shift model arrhenius: Ea = ${csvNumber(arrhenius.activationEnergyKJPerMol)} kJ/mol, Tr = ${toCelsius(arrhenius.referenceK)} °C (fitted ${toCelsius(arrhenius.fittedRangeK[0])}..${toCelsius(arrhenius.fittedRangeK[1])} °C)`,
     );
   return csvDocument(
     [
       `Thermoshift ${a.version} Prony series (generalised Maxwell model) — sample: ${a.sample.name}`,
-      `valid at reference temperature ${toCelsius(a.referenceTemperatureK)} C; G(t) = Ge + sum g_i exp(-t/tau_i); G0 = Ge + sum g_i`,
+      `valid at reference temperature ${toCelsius(a.referenceTemperatureK)} °C; G(t) = Ge + sum g_i exp(-t/tau_i); G0 = Ge + sum g_i`,
       `Ge (equilibrium modulus) = ${csvNumber(p.equilibriumModulusPa / f)} ${unit}; Ge/G0 = ${csvNumber(p.equilibriumModulusPa / p.instantaneousModulusPa)}; G0 = ${csvNumber(p.instantaneousModulusPa / f)} ${unit}`,
       `fitted to ${p.fittedTo.join(' and ')}, ${p.modesPerDecade} mode(s) per decade, RMS relative error ${csvNumber(p.rmsRelativeError)}, reduced window ${csvNumber(p.reducedWindow[0])}..${csvNumber(p.reducedWindow[1])}`,
       ...shiftModel,

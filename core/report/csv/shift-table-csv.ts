@@ -1,7 +1,7 @@
 /** The shift table as CSV: one row per isotherm, conventions in the header comment. */
 import type { Analysis } from '../../pipeline/types';
 import { conventionCommentLines } from '../../pipeline/conventions';
-import { toCelsius } from '../../pipeline/temperature';
+import { toCelsius, toKelvinText } from '../../pipeline/temperature';
 import { csvDocument, csvNumber } from './csv-format';
 
 export const SHIFT_TABLE_COLUMNS = [
@@ -21,7 +21,7 @@ export function shiftTableCsv(a: Analysis): string {
   return csvDocument(
     [
       `Thermoshift ${a.version} shift table — sample: ${a.sample.name}`,
-      `reference temperature: ${toCelsius(a.referenceTemperatureK)} C (${a.referenceTemperatureK} K)`,
+      `reference temperature: ${toCelsius(a.referenceTemperatureK)} °C (${toKelvinText(a.referenceTemperatureK)} K)`,
       `shift driven by: ${a.shiftQuantities.join(', ')}; vertical shift: ${a.settings.verticalShift}`,
       ...conventionCommentLines(),
       'rms_residual_decades: RMS residual of the isotherm against the master curve (quality; smaller is better)',

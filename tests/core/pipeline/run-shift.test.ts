@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { shiftOptionsFor } from '../../../core/pipeline/run-shift';
+import { cleanLog, shiftOptionsFor } from '../../../core/pipeline/run-shift';
 import { resolveAnalysisOptions } from '../../../core/pipeline/options';
 
 describe('shiftOptionsFor()', () => {
@@ -29,5 +29,14 @@ describe('shiftOptionsFor()', () => {
     expect(o.drivers).toBeUndefined();
     expect(o.density).toBeUndefined();
     expect(o.vertical).toBe('none');
+  });
+});
+
+describe('cleanLog()', () => {
+  it('cleanLog() turns rounding noise and −0 into 0 and keeps real shifts', () => {
+    expect(Object.is(cleanLog(-0), 0)).toBe(true);
+    expect(cleanLog(-2e-19)).toBe(0);
+    expect(cleanLog(-1.5e-6)).toBe(-1.5e-6);
+    expect(cleanLog(null)).toBeNull();
   });
 });

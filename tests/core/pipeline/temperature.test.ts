@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { toCelsius } from '../../../core/pipeline/temperature';
+import { toCelsius, toKelvinText } from '../../../core/pipeline/temperature';
 
 describe('toCelsius()', () => {
   it('toCelsius() removes float noise from K → °C (0 °C = 273.15 K exactly, SI Brochure 2019)', () => {
@@ -7,5 +7,12 @@ describe('toCelsius()', () => {
     expect(toCelsius(253.15)).toBe(-20);
     expect(toCelsius(273.15)).toBe(0);
     expect(toCelsius(300.1234567)).toBe(26.973457);
+  });
+});
+
+describe('toKelvinText()', () => {
+  it('toKelvinText() prints at most 10 significant digits', () => {
+    expect(toKelvinText(253.14999999999998)).toBe('253.15');
+    expect(toKelvinText(300)).toBe('300');
   });
 });
