@@ -6,12 +6,14 @@ import { Command, CommanderError } from 'commander';
 import { registerCommands } from './commands/index.ts';
 import { EXIT } from './exit-codes.ts';
 import { CliError } from './cli-error.ts';
+import { THERMOSHIFT_VERSION } from '../../core/pipeline/version.ts';
 
 export async function main(argv: string[]): Promise<number> {
   const program = new Command();
   program
     .name('thermoshift')
     .description('Time–temperature superposition master curves for polymers.')
+    .version(THERMOSHIFT_VERSION, '-V, --version', 'print the Thermoshift version')
     .option('--debug', 'print stack traces of unexpected errors')
     .exitOverride()
     .configureOutput({ writeErr: (s) => process.stderr.write(s) });

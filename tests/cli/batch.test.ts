@@ -71,6 +71,13 @@ describe('thermoshift batch', () => {
     expect(rows[3].error).toMatch(/broken_80C\.csv/);
   });
 
+  it('batch refuses to run over an existing index without --force, before any sample', () => {
+    const r = runCli(['batch', '--samples-in', lab, '--out', out]);
+    expect(r.status).toBe(EXIT.outputError);
+    expect(r.stderr).not.toMatch(/\[1\//);
+    expect(r.stderr).toMatch(/index\.csv already exists; use --force/);
+  });
+
   it('batch without samples is a usage error', () => {
     const r = runCli(['batch', '--out', join(dir, 'empty')]);
     expect(r.status).toBe(EXIT.usage);

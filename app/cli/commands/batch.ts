@@ -15,7 +15,7 @@ import { addSampleOptions, resolveSettings, type SampleOptionValues } from '../s
 import { DATA_FILE_PATTERN, readInputs } from '../io/read-inputs.ts';
 import { analyseSample } from '../run-sample.ts';
 import { writeOutputs } from '../outputs.ts';
-import { writeFileAtomic } from '../io/atomic-write.ts';
+import { assertWritable, writeFileAtomic } from '../io/atomic-write.ts';
 import { oneLine, toCliError } from '../error-map.ts';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
@@ -129,6 +129,8 @@ export function registerBatch(program: Command): void {
         EXIT.usage,
       );
     const date = checkDate(o.date);
+    const indexPath = join(o.out, 'index.csv');
+    assertWritable([indexPath], !!o.force); // fail before hours of work, not after
     const rows = runBatch(samples, {
       settings,
       settingsSource: o.settings ?? 'command line',
@@ -137,7 +139,6 @@ export function registerBatch(program: Command): void {
       date,
       log: (line) => process.stderr.write(`${line}\n`),
     });
-    const indexPath = join(o.out, 'index.csv');
     writeFileAtomic(indexPath, batchIndexCsv(rows, THERMOSHIFT_VERSION), { force: !!o.force });
     const failed = rows.filter((r) => !r.result.ok).length;
     process.stderr.write(
