@@ -114,6 +114,28 @@ describe('the Thermoshift app in Chromium', () => {
     expect(await page.locator('tr[data-isotherm]').count()).toBe(11);
   });
 
+  it('lists the imported files under Recent and takes dropped files into the import preview', async () => {
+    await page.click('[data-role="recent"]');
+    expect(await page.innerText('.menu')).toMatch(/\+ 10 more/);
+    await page.click('[data-role="recent"]');
+    const name = 'tf9-relaxation.tsv';
+    const text = readFileSync(join(ROOT, 'samples', 'adhesive-relaxation', name), 'utf8');
+    const data = await page.evaluateHandle(
+      ([n, t]) => {
+        const dt = new DataTransfer();
+        dt.items.add(new File([t], n, { type: 'text/plain' }));
+        return dt;
+      },
+      [name, text] as const,
+    );
+    await page.dispatchEvent('main', 'dragenter', { dataTransfer: data });
+    await page.dispatchEvent('main', 'drop', { dataTransfer: data });
+    await page.waitForSelector('[data-role="import-groups"] tr');
+    expect(await page.innerText('[data-role="import-preview"]')).toMatch(/tf9-relaxation\.tsv/);
+    await page.click('[data-role="import-cancel"]');
+    expect(await page.innerText('[data-role="sample-name"]')).toMatch(/QS-72/);
+  });
+
   it('changes the reference temperature and shows shifts that match the generator’s truth', async () => {
     await page.fill('[data-role="tref"]', '20');
     await page.press('[data-role="tref"]', 'Enter');

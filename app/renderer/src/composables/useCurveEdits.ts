@@ -67,6 +67,18 @@ export function useCurveEdits(
           points.map((p) => ({ file: p.file, row: p.row })),
         ),
       ),
-    changeSettings: (patch) => edit((d) => withOptions(d, patch)),
+    changeSettings: (patch) =>
+      edit((d) => {
+        const locks = Object.keys(d.options.lockedLog10aT ?? {}).length;
+        const trefChanges =
+          'referenceTemperatureK' in patch &&
+          patch.referenceTemperatureK !== d.options.referenceTemperatureK;
+        if (!trefChanges || locks === 0) return withOptions(d, patch);
+        // Locked shifts are relative to Tref: with a new Tref they would mean other shifts.
+        notify(
+          `The new reference temperature released ${locks} locked shift${locks > 1 ? 's' : ''} (they were relative to the old one). Undo brings them back.`,
+        );
+        return withOptions(d, { ...patch, lockedLog10aT: {} });
+      }),
   };
 }
