@@ -7,6 +7,7 @@ import { ImportError } from './import-error';
 import { cleanText, headLines, isBlank, isComment } from './lines';
 import { deformationFromMetadata, quantityFromMetadata, temperatureFromMetadata } from './metadata';
 import { buildRecords } from './records';
+import { findBlocks } from './blocks';
 import type { PointRecords } from './records';
 import { scanTable } from './scan-table';
 import { findStructure } from './structure';
@@ -128,7 +129,16 @@ export function importFile(file: SourceFile, o: ResolvedImportOptions): FileImpo
     maxProblems: o.maxWarningsPerFile,
     perCell: plan.layout === 'wide',
   });
-  const records = buildRecords(table, plan, fileT?.temperatureK, sink);
+  const blocks = findBlocks(table.notes, structure.header, dialect.delimiter);
+  if (fileT?.from === 'option') blocks.starts = [];
+  const records = buildRecords(table, plan, fileT?.temperatureK, sink, blocks);
+  const blockTemperaturesK =
+    plan.layout === 'perIsotherm' && blocks.starts.length > 0
+      ? [
+          ...(blocks.starts[0].row > 0 ? [fileT!.temperatureK] : []),
+          ...blocks.starts.map((b) => b.temperatureK),
+        ]
+      : undefined;
   if (records.n === 0) {
     const first = sink.list.find((w) => w.row >= structure.firstDataRow);
     throw new ImportError(
@@ -154,6 +164,7 @@ export function importFile(file: SourceFile, o: ResolvedImportOptions): FileImpo
       usedRows: records.usedRows,
       metadata: structure.metadata,
       ...(fileT ? { temperatureK: fileT.temperatureK, temperatureFrom: fileT.from } : {}),
+      ...(blockTemperaturesK ? { blockTemperaturesK } : {}),
       testKind: plan.testKind,
       columns: plan.columns,
     },

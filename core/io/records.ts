@@ -4,6 +4,7 @@ import type { ColumnPlan } from './column-plan';
 import { ROLE_WORDS } from './roles';
 import type { ColumnReport } from './types';
 import type { WarningSink } from './warning-sink';
+import type { BlockPlan } from './blocks';
 
 /** Points read from one file, in stored units (K, rad/s or s, Pa …), columnar. */
 export interface PointRecords {
@@ -64,8 +65,10 @@ export function buildRecords(
   plan: ColumnPlan,
   fileTemperatureK: number | undefined,
   sink: WarningSink,
+  blocks: BlockPlan = { starts: [], quietRows: new Set() },
 ): PointRecords {
   for (const p of table.problems) {
+    if (blocks.quietRows.has(p.row)) continue;
     sink.add(
       p.line,
       p.column,
@@ -103,7 +106,13 @@ export function buildRecords(
   };
   const xWord = plan.abscissa === 'time' ? 'time' : 'frequency';
   const qArrays = [...groups.values()].map((list) => list.map((e) => out.quantities.get(e.q)!));
+  // One-isotherm files made of several temperature blocks: the block's temperature applies.
+  const starts = plan.layout === 'perIsotherm' ? blocks.starts : [];
+  let block = -1;
+  let blockT = NaN;
   for (let r = 0; r < table.rows; r++) {
+    while (block + 1 < starts.length && starts[block + 1].row <= r)
+      blockT = starts[++block].temperatureK;
     const line = table.line[r];
     const xRaw = xc.values[r];
     if (xRaw !== xRaw) continue; // reported by the scan
@@ -134,7 +143,7 @@ export function buildRecords(
     let g = 0;
     for (const [groupT, list] of groups) {
       const arrays = qArrays[g++];
-      const T = tc ? rowT : groupT;
+      const T = tc ? rowT : block >= 0 ? blockT : groupT;
       let ok = true;
       for (let j = 0; j < list.length && ok; j++) {
         const { q, c, column } = list[j];

@@ -25,7 +25,23 @@ export interface ScannedTable {
   /** The first `maxProblems` problems in detail (one per row); `problemCount` counts all. */
   problems: CellProblem[];
   problemCount: number;
+  /**
+   * Comment lines and rows with letters that failed, inside the table (at most MAX_NOTES): they may
+   * start a new block ("# Temperature: 60 °C", a repeated header). `row` is the index of the next
+   * table row for a comment line, or of the failed row itself.
+   */
+  notes: TableNote[];
 }
+
+/** A comment line or a text row met inside the table body. */
+export interface TableNote {
+  row: number;
+  line: number;
+  text: string;
+  comment: boolean;
+}
+
+const MAX_NOTES = 10_000;
 
 export interface ScanSpec {
   delimiter: DelimiterName;
@@ -71,6 +87,7 @@ export function scanTable(
   const bad = new Uint8Array(capacity);
   const values = spec.wanted.map((w) => (w ? new Float64Array(capacity) : null));
   const problems: CellProblem[] = [];
+  const notes: TableNote[] = [];
   let problemCount = 0;
   const delim =
     spec.delimiter === 'comma'
@@ -115,6 +132,14 @@ export function scanTable(
     while (k < stop && (text.charCodeAt(k) === 32 || text.charCodeAt(k) === 9)) k++;
     const firstChar = k < stop ? text.charCodeAt(k) : -1;
     const blank = firstChar < 0 || isDelimiterOnly(text, k, stop, delim);
+    if (!blank && firstChar === COMMENT && notes.length < MAX_NOTES) {
+      notes.push({
+        row: rows,
+        line: lineNo,
+        text: text.slice(pos, Math.min(stop, pos + 200)),
+        comment: true,
+      });
+    }
     if (!blank && firstChar !== COMMENT) {
       rowReported = false;
       line[rows] = lineNo;
@@ -152,6 +177,11 @@ export function scanTable(
         }
         for (; col < ncols; col++) if (values[col]) flag(col, 'missing', '');
       }
+      if (bad[rows] && notes.length < MAX_NOTES) {
+        const rowText = text.slice(pos, Math.min(stop, pos + 200));
+        if (/[A-Za-z]/.test(rowText))
+          notes.push({ row: rows, line: lineNo, text: rowText, comment: false });
+      }
       if (bad[rows] && !spec.perCell)
         for (let c = 0; c < ncols; c++) values[c]?.fill(NaN, rows, rows + 1);
       rows++;
@@ -159,7 +189,7 @@ export function scanTable(
     pos = end + 1;
     lineNo++;
   }
-  return { rows, line, values, bad, problems, problemCount };
+  return { rows, line, values, bad, problems, problemCount, notes };
 }
 
 function isDelimiterOnly(text: string, from: number, to: number, delim: number): boolean {

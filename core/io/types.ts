@@ -119,6 +119,11 @@ export interface FileReport {
   /** Per-isotherm files: the file's temperature and where it came from. */
   temperatureK?: number;
   temperatureFrom?: 'option' | 'metadata' | 'fileName';
+  /**
+   * One-isotherm files made of several blocks, each opened by a temperature line: the block
+   * temperatures in file order, K (the first may be the file's own temperature).
+   */
+  blockTemperaturesK?: number[];
   testKind: TestKind;
   deformation: DeformationMode;
   columns: ColumnReport[];

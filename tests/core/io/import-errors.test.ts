@@ -316,11 +316,17 @@ describe('importFiles() — recoverable problems', () => {
     expect(r.warnings[10].message).toMatch(/^40 more problem rows/);
   });
 
-  it('importFiles() skips blank lines, comment lines and repeated headers inside the table', () => {
+  it('importFiles() skips blank lines, comment lines and repeated headers inside the table quietly', () => {
     const text = "T (°C),f (Hz),G' (Pa)\n\n40,1,1\n# pause\n,,\nT (°C),f (Hz),G' (Pa)\n40,2,2\n";
     const r = importFiles([{ name: 'g.csv', text }]);
     expect(r.dataset.isotherms[0].source.map((s) => s.row)).toEqual([3, 7]);
-    expect(r.warnings.map((w) => w.row)).toEqual([6]);
+    expect(r.warnings).toEqual([]); // the repeated header row is skipped quietly
+  });
+
+  it('importFiles() still warns about other text rows inside the table', () => {
+    const text = "T (°C),f (Hz),G' (Pa)\n40,1,1\npump stopped,,\n40,2,2\n";
+    const r = importFiles([{ name: 't.csv', text }]);
+    expect(r.warnings).toEqual([expect.objectContaining({ row: 3, column: 1 })]);
   });
 
   it('importFiles() reads old Mac line ends (CR only)', () => {

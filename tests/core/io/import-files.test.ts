@@ -1,4 +1,6 @@
 import { describe, it, expect } from 'vitest';
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
 import { importFiles } from '../../../core/io';
 import type { ImportResult, SourceFile } from '../../../core/io';
 import type { Dataset, QuantityId } from '../../../core/data/types';
@@ -62,6 +64,11 @@ function expectSameAsTruth(
     expect(iso.mask.every(Boolean)).toBe(true);
   });
 }
+
+const fixture = (name: string): SourceFile => ({
+  name,
+  text: readFileSync(fileURLToPath(new URL(`../../fixtures/io/${name}`, import.meta.url)), 'utf8'),
+});
 
 const long = (o: WriteOptions, ds = oscillatory, name = 'long.csv'): SourceFile[] => [
   { name, text: writeLong(ds, o) },
@@ -233,6 +240,15 @@ describe('importFiles() — one file per isotherm', () => {
     expectSameAsTruth(r, oscillatory);
     expect(r.files.map((f) => f.temperatureFrom)).toEqual(new Array(5).fill('fileName'));
     expect(r.dataset.name).toBe('seal');
+  });
+
+  it('importFiles() splits a file of several blocks at their temperature lines', () => {
+    const r = importFiles([fixture('blocks.csv')]);
+    expect(r.groups.map((g) => Number((g.temperatureK - 273.15).toFixed(2)))).toEqual([40, 60, 80]);
+    expect(r.groups.map((g) => g.points)).toEqual([3, 3, 2]);
+    expect(r.files[0].blockTemperaturesK).toEqual([313.15, 333.15, 353.15]);
+    expect(r.warnings).toEqual([]);
+    expect(r.dataset.isotherms[1].source.map((s) => s.row)).toEqual([11, 12, 13]);
   });
 
   it('importFiles() lets an option force the temperature of a file', () => {

@@ -51,6 +51,14 @@ describe('scanTable()', () => {
     expect(t.problemCount).toBe(3);
   });
 
+  it('scanTable() keeps comment lines and text rows of the body as notes', () => {
+    const t = scanTable('1,2\n# Temperature: 60 C\nf,G\n3,4\n', 0, 1, spec());
+    expect(t.notes).toEqual([
+      { row: 1, line: 2, text: '# Temperature: 60 C', comment: true },
+      { row: 1, line: 3, text: 'f,G', comment: false },
+    ]);
+  });
+
   it('scanTable() reports missing cells of short rows', () => {
     const t = scanTable('1\n', 0, 1, spec());
     expect(t.problems[0]).toMatchObject({ column: 2, kind: 'missing' });
