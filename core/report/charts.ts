@@ -291,3 +291,34 @@ export function vanGurpPalmenChart(a: Analysis, unit: ModulusUnit): ChartSpec | 
     colourBar: { minC: toCelsius(lo), maxC: toCelsius(hi) },
   };
 }
+
+/** log10 bT ± s.e. against temperature; null when no vertical shift was applied. */
+export function verticalShiftChart(a: Analysis): ChartSpec | null {
+  if (a.settings.verticalShift === 'none') return null;
+  const [lo, hi] = temperatureRange(a);
+  const series: ChartSeries[] = a.curves
+    .filter((c) => c.log10bT !== null)
+    .map((c) => ({
+      name: c.isothermId,
+      x: [toCelsius(c.temperatureK)],
+      y: [c.log10bT as number],
+      yError: [c.log10bTStdErr],
+      colour: c.included ? temperatureColour(c.temperatureK, lo, hi) : '#999',
+      line: 'none',
+      marker: c.included ? 'disc' : 'ring',
+    }));
+  if (series.length === 0) return null;
+  const how =
+    a.settings.verticalShift === 'density' ? 'entropic, from density' : 'estimated from the data';
+  return {
+    id: 'chart-vertical',
+    title: 'Vertical shift factors against temperature',
+    width: W,
+    height: 300,
+    x: { kind: 'linear', label: 'temperature (°C)' },
+    y: { kind: 'linear', label: `log10 bT (decades; ${how})` },
+    series,
+    legend: [{ name: 'log10 bT ± s.e.', colour: '#444', marker: 'disc', line: 'none' }],
+    colourBar: { minC: toCelsius(lo), maxC: toCelsius(hi) },
+  };
+}

@@ -9,7 +9,13 @@ import { CONVENTIONS } from '../pipeline/conventions';
 import { escapeHtml } from './escape';
 import { REPORT_CSS } from './styles';
 import { CAUTIONS, methodParagraphs } from './text-blocks';
-import { isothermsChart, masterCurveChart, shiftFactorChart, vanGurpPalmenChart } from './charts';
+import {
+  isothermsChart,
+  masterCurveChart,
+  shiftFactorChart,
+  vanGurpPalmenChart,
+  verticalShiftChart,
+} from './charts';
 import { renderChart } from './svg/render-chart';
 import type { ChartSpec } from './svg/chart-types';
 import { htmlTable, type TableSpec } from './html-table';
@@ -103,6 +109,10 @@ export function reportHtml(a: Analysis, options: ReportOptions): string {
     chartBlock(
       shiftFactorChart(a),
       `Shift factors log10 aT ± standard error against temperature, with each fitted model and its 95 % confidence band; open circles are isotherms left out. ${CONVENTIONS.horizontal}.`,
+    ),
+    chartBlock(
+      verticalShiftChart(a),
+      `Vertical shift factors log10 bT ± standard error (${CONVENTIONS.vertical}). Large or erratic bT is itself a sign that superposition fails.`,
     ),
     chartBlock(
       vanGurpPalmenChart(a, unit),

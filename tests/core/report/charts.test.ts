@@ -5,6 +5,7 @@ import {
   plottedQuantities,
   shiftFactorChart,
   vanGurpPalmenChart,
+  verticalShiftChart,
 } from '../../../core/report/charts';
 import { fixtureAnalysis } from './analysis-fixture';
 import { expectAbsClose, expectRelClose } from '../../helpers/assert-close';
@@ -72,5 +73,20 @@ describe('vanGurpPalmenChart()', () => {
   });
   it('vanGurpPalmenChart() is null for relaxation data', () => {
     expect(vanGurpPalmenChart(fixtureAnalysis('relaxation'), 'Pa')).toBeNull();
+  });
+});
+
+describe('verticalShiftChart()', () => {
+  it('verticalShiftChart() is null without a vertical shift and plots log10 bT otherwise', () => {
+    expect(verticalShiftChart(a)).toBeNull();
+    const b = {
+      ...a,
+      settings: { ...a.settings, verticalShift: 'density' as const },
+      curves: a.curves.map((c, i) => ({ ...c, log10bT: 0.01 * (3 - i) })),
+    };
+    const c = verticalShiftChart(b)!;
+    expect(c.series).toHaveLength(7);
+    expect(c.series[0].y).toEqual([0.03]);
+    expect(c.y.label).toContain('entropic');
   });
 });

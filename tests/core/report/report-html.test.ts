@@ -71,3 +71,12 @@ describe('reportHtml()', () => {
     expect(r).toContain('No warnings were raised');
   });
 });
+
+describe('reportHtml() with a vertical shift', () => {
+  it('reportHtml() adds the log10 bT chart when bT was applied', () => {
+    const b = { ...a, settings: { ...a.settings, verticalShift: 'data' as const } };
+    const r = reportHtml(b, { date: 'd' });
+    expect(r).toContain('id="chart-vertical"');
+    expect(r).toContain('Large or erratic bT');
+  });
+});
