@@ -27,6 +27,8 @@ export interface UseCurveEditsReturn {
 export function useCurveEdits(
   wb: UseWorkbenchReturn,
   analysis: ShallowRef<Analysis | null>,
+  /** Tells the user about a side effect of an edit. */
+  notify: (text: string) => void = () => undefined,
 ): UseCurveEditsReturn {
   /** The shift an isotherm has now: its locked value, else the fitted one. */
   const currentShift = (doc: AnalysisDocument, id: string): number | null =>
