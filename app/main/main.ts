@@ -19,9 +19,10 @@ let win: BrowserWindow | null = null;
 let appRef: AppWindowRef | null = null;
 
 app.enableSandbox();
-setupSecurity(devUrl);
 
 void app.whenReady().then(() => {
+  // The session exists only once the app is ready; windows are made after this.
+  setupSecurity(devUrl);
   const ipc = {
     ipcMain,
     isTrusted: (e: Electron.IpcMainInvokeEvent) => isTrustedSender(e, appRef),
