@@ -9,6 +9,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { smoothProny, syntheticIsotherms } from '../core/synthetic/index.ts';
 import { runBatch, listSamples } from '../app/cli/commands/batch.ts';
+import { analyseSample } from '../app/cli/run-sample.ts';
+import { readInputs } from '../app/cli/io/read-inputs.ts';
 
 const SAMPLES = 100;
 
@@ -74,6 +76,14 @@ export async function run(): Promise<void> {
     );
     console.log(
       `  total ${(ms / 1000).toFixed(2)} s, ${(ms / rows.length).toFixed(1)} ms per sample, ${failed} failed`,
+    );
+    // The same samples again without writing: how much of it is the analysis itself.
+    const t1 = performance.now();
+    for (const sample of samples)
+      analyseSample(readInputs(sample.paths), { referenceTemperature: 100 }, 'bench');
+    const analysisMs = (performance.now() - t1) / samples.length;
+    console.log(
+      `  of which read + analyse (import, shifts, models, Prony, indicators): ${analysisMs.toFixed(1)} ms per sample`,
     );
   } finally {
     rmSync(root, { recursive: true, force: true });
