@@ -1,4 +1,5 @@
-import { cellProblem, parseCell, splitCells } from './cells';
+import { cellProblem, parseCell } from './cells';
+import { QuotedLines } from './quoted-lines';
 import type { CellProblemKind } from './cells';
 import type { DelimiterName } from './types';
 
@@ -73,7 +74,8 @@ function isPlainNumberChar(c: number): boolean {
 /**
  * Reads the table body from `start` (offset of the first data row, whose line is `firstLine`).
  * Fast path: unquoted lines are cut at the delimiter by hand and plain numeric cells go straight to
- * Number(); lines with quotes go through papaparse, odd cells through the strict `parseCell`.
+ * Number(); lines with quotes go through papaparse (QuotedLines), odd cells through the strict
+ * `parseCell`.
  */
 export function scanTable(
   text: string,
@@ -98,6 +100,8 @@ export function scanTable(
           ? 9
           : -1;
   const spaces = delim < 0;
+  const quoted = new QuotedLines(text, spec.delimiter);
+  const decimalComma = spec.decimalComma;
   let rows = 0;
   let nextQuote = -1;
   let lineNo = firstLine;
@@ -117,7 +121,12 @@ export function scanTable(
   const store = (col: number, cell: string, plain: boolean): void => {
     const out = values[col];
     if (!out) return;
-    let v = plain && cell.length > 0 ? Number(cell) : parseCell(cell, spec.decimalComma);
+    // A plain cell is digits, signs, "." and exponents (and "," with a decimal comma): Number()
+    // reads it strictly; anything else goes through the strict parseCell.
+    let v =
+      plain && cell.length > 0
+        ? Number(decimalComma ? cell.replace(',', '.') : cell)
+        : parseCell(cell, decimalComma);
     if (!Number.isFinite(v)) v = NaN;
     out[rows] = v;
     if (v !== v) flag(col, cellProblem(cell), cell);
@@ -149,7 +158,7 @@ export function scanTable(
       }
       const hasQuote = nextQuote < stop;
       if (hasQuote) {
-        const cells = splitCells(text.slice(pos, stop), spec.delimiter);
+        const cells = quoted.cells(pos, stop, lineNo);
         for (let c = 0; c < ncols; c++) {
           if (!values[c]) continue;
           if (c >= cells.length) flag(c, 'missing', '');
@@ -164,7 +173,7 @@ export function scanTable(
           const c = i < stop ? text.charCodeAt(i) : -2;
           const boundary = c === -2 || (spaces ? c === 32 || c === 9 : c === delim);
           if (!boundary) {
-            if (plain && !isPlainNumberChar(c)) plain = false;
+            if (plain && !isPlainNumberChar(c) && !(c === 44 && decimalComma)) plain = false;
             continue;
           }
           if (values[col]) store(col, text.slice(cellStart, i), plain);

@@ -37,6 +37,27 @@ describe('scanTable()', () => {
     expect([...s.values[0]!.subarray(0, 2), ...s.values[1]!.subarray(0, 2)]).toEqual([1, 3, 2, 4]);
   });
 
+  it('scanTable() keeps line numbers exact around quotes spanning lines', () => {
+    const t = scanTable('"1","2"\n"3\n4","5"\n"6","7"\n', 0, 1, spec());
+    const rowOf6 = [...t.values[0]!.subarray(0, t.rows)].indexOf(6);
+    expect(t.line[rowOf6]).toBe(4);
+    expect(t.values[1]![rowOf6]).toBe(7);
+    expect(t.values[0]![0]).toBe(1);
+  });
+
+  it('scanTable() reads decimal commas on the fast path strictly', () => {
+    const t = scanTable(
+      '1,5;2\n1,2,3;4\n',
+      0,
+      1,
+      spec({ delimiter: 'semicolon', decimalComma: true }),
+    );
+    expect(t.values[0]![0]).toBe(1.5);
+    expect(t.problems).toEqual([
+      expect.objectContaining({ line: 2, column: 1, kind: 'nonNumeric' }),
+    ]);
+  });
+
   it('scanTable() marks a bad row once in long tables and every bad cell in wide ones', () => {
     const long = scanTable('x,y\n1,2\n', 0, 1, spec());
     expect(long.problems).toEqual([{ row: 0, line: 1, column: 1, kind: 'nonNumeric', text: 'x' }]);
