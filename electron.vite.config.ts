@@ -37,6 +37,7 @@ export default defineConfig({
     worker: { format: 'es' },
     build: {
       outDir: at('./out/renderer'),
+      minify: true,
       chunkSizeWarningLimit: 1500,
       rollupOptions: { input: at('./app/renderer/index.html') },
     },

@@ -35,8 +35,10 @@ export function useEngine(options: UseEngineOptions = {}): UseEngineReturn {
   const worker = (options.createWorker ?? defaultWorker)();
   const pending = ref(0);
   const progress = ref<{ fraction: number; stage: string } | null>(null);
-  const waiting = new Map<number, (r: EngineResult) => void>();
+  const waiting = new Map<number, { req: EngineRequest; resolve: (r: EngineResult) => void }>();
   let nextId = 1;
+  /** Set when the worker failed (e.g. module workers refused): then everything runs here. */
+  let broken = false;
 
   worker?.addEventListener('message', (e: MessageEvent<WorkerOutbound>) => {
     const m = e.data;
@@ -45,29 +47,32 @@ export function useEngine(options: UseEngineOptions = {}): UseEngineReturn {
       return;
     }
     const { id, ...result } = m;
-    waiting.get(id)?.(result);
+    waiting.get(id)?.resolve(result);
     waiting.delete(id);
   });
   worker?.addEventListener('error', (e) => {
-    for (const resolve of waiting.values())
-      resolve({
-        kind: 'failed',
-        message: `The analysis stopped: ${e.message}`,
-        errorName: 'Error',
-      });
+    // The worker could not start or crashed: answer what was waiting on the main thread (slower,
+    // but the analysis still works) and stop using the worker.
+    console.error(
+      '[thermoshift] analysis worker failed; computing in the window instead',
+      e.message,
+    );
+    broken = true;
+    worker.terminate();
+    for (const { req, resolve } of waiting.values()) resolve(runRequest(req));
     waiting.clear();
   });
 
   async function run(req: EngineRequest): Promise<EngineResult> {
     pending.value++;
     try {
-      if (!worker) {
+      if (!worker || broken) {
         await Promise.resolve();
         return runRequest(req);
       }
       const id = nextId++;
       return await new Promise<EngineResult>((resolve) => {
-        waiting.set(id, resolve);
+        waiting.set(id, { req, resolve });
         const msg: WorkerInbound = { ...req, id };
         worker.postMessage(msg);
       });
