@@ -11,11 +11,16 @@ import { EXIT } from './exit-codes.ts';
 
 export function toCliError(e: unknown): unknown {
   if (e instanceof CliError) return e;
-  if (e instanceof ImportError) return new CliError(e.message, EXIT.dataError);
-  if (e instanceof SettingsError) return new CliError(e.message, EXIT.usage);
-  if (e instanceof OptionsError) return new CliError(e.message, EXIT.usage);
-  if (e instanceof PipelineError) return new CliError(e.message, EXIT.dataError);
-  return e;
+  const code =
+    e instanceof ImportError || e instanceof PipelineError
+      ? EXIT.dataError
+      : e instanceof SettingsError || e instanceof OptionsError
+        ? EXIT.usage
+        : undefined;
+  if (code === undefined) return e;
+  const err = new CliError((e as Error).message, code);
+  err.cause = e; // --debug prints where it came from
+  return err;
 }
 
 /** The one-line message of any error (for batch progress and the index table). */

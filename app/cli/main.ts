@@ -29,6 +29,10 @@ export async function main(argv: string[]): Promise<number> {
     }
     if (e instanceof CliError) {
       process.stderr.write(`thermoshift: ${e.message}\n`);
+      if (argv.includes('--debug')) {
+        const origin = e.cause instanceof Error ? e.cause : e;
+        if (origin.stack) process.stderr.write(`${origin.stack}\n`);
+      }
       return e.exitCode;
     }
     const debug = argv.includes('--debug');

@@ -200,6 +200,9 @@ describe('thermoshift build (errors)', () => {
     expect(r.status).toBe(EXIT.dataError);
     expect(r.stderr.trim().split('\n')).toHaveLength(1);
     expect(r.stderr).toMatch(/bad_80C\.csv", row 1, column 2/);
+    const debug = runCli(['build', bad, '--debug']);
+    expect(debug.status).toBe(EXIT.dataError);
+    expect(debug.stderr).toMatch(/\n\s+at /); // --debug adds where the error came from
   });
   it('build rejects a bad option value and a bad settings key with exit 2', () => {
     const tref = runCli(['build', 'samples/seal-dma', '--tref', 'warm']);
