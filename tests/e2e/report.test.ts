@@ -16,6 +16,7 @@ describe('report.html in Chromium', () => {
   let ctx: BrowserContext;
   let page: Page;
   let reportPath: string;
+  const requests: string[] = [];
   beforeAll(async () => {
     const dir = tempDir('thermoshift-report-');
     writeSyntheticSample(join(dir, 'data'));
@@ -37,6 +38,7 @@ describe('report.html in Chromium', () => {
     reportPath = join(out, 'report.html');
     ctx = await launchBrowser();
     page = await ctx.newPage();
+    page.on('request', (req) => requests.push(req.url()));
     await page.goto(pathToFileURL(reportPath).href);
   });
   afterAll(async () => {
@@ -81,6 +83,10 @@ describe('report.html in Chromium', () => {
     expect(charts[2].lines).toBeGreaterThanOrEqual(1); // model curves
   });
 
+  it('report.html loads nothing but itself (works offline)', () => {
+    expect(requests).toEqual([pathToFileURL(reportPath).href]);
+  });
+
   it('report.html fits the page width (nothing clipped) and shows the cautions and tables', async () => {
     const overflow = await page.evaluate(
       () => document.documentElement.scrollWidth - document.documentElement.clientWidth,
@@ -106,5 +112,7 @@ describe('report.html in Chromium', () => {
     const pages = (readFileSync(pdfPath, 'latin1').match(/\/Type\s*\/Page[^s]/g) ?? []).length;
     expect(pages).toBeGreaterThanOrEqual(3);
     expect(pages).toBeLessThanOrEqual(12);
+    const letter = await page.pdf({ format: 'Letter', printBackground: true });
+    expect(letter.subarray(0, 5).toString()).toBe('%PDF-');
   });
 });
