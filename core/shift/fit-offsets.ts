@@ -19,7 +19,9 @@ import type { FitInfo, RobustLoss } from './types';
 
 /** Cauchy tuning constant for 95 % efficiency under normal errors (Holland & Welsch 1977). */
 const CAUCHY_K = 2.385;
-const MIN_SCALE_DECADES = 0.002;
+const MIN_SCALE_DECADES = 0.005;
+/** Smallest robust spread assumed for outlier flagging, decades (about 1 %). */
+const OUTLIER_FLOOR_DECADES = 0.005;
 
 export interface OffsetFitInput {
   /** Builds the problem; `dropped` = per curve, entries' point indices to leave out. */
@@ -35,6 +37,7 @@ export interface OffsetFitInput {
   flagOutliers: boolean;
   outlierThreshold: number;
   maxIterations: number;
+  toleranceDecades: number;
   scanStep: number;
   directionAllowance: number | null;
   maxOffset: number;
@@ -183,6 +186,7 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
   }
 
   const buffer = new ResidualBuffer();
+  let finalStats: StatsSink | null = null;
   const outliers: Set<number>[] = Array.from({ length: n }, () => new Set<number>());
   const runPass = (t: Float64Array) => {
     const pre = new StatsSink(problem).consume(residualsAt(problem, t, buffer));
@@ -193,6 +197,7 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
       maxIterations: input.maxIterations,
       fixed,
       constraints,
+      toleranceDecades: input.toleranceDecades,
       buffer,
     });
   };
@@ -202,7 +207,9 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
   if (input.flagOutliers && incFinal.length > 1) {
     const stats = new StatsSink(problem).consume(residualsAt(problem, outcome.theta, buffer));
     const sigma = MAD_TO_SIGMA * medianAbs(stats.residuals);
-    const limit = input.outlierThreshold * Math.max(sigma, MIN_SCALE_DECADES / HUBER_K);
+    // Points within OUTLIER_FLOOR_DECADES·threshold of the others are never flagged: on very clean
+    // data the robust spread is tiny and interpolation alone would otherwise flag good points.
+    const limit = input.outlierThreshold * Math.max(sigma, OUTLIER_FLOOR_DECADES);
     let flagged = 0;
     problem.curves.forEach((curve, k) =>
       curve.forEach((s, d) => {
@@ -216,6 +223,7 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
         }
       }),
     );
+    if (flagged === 0) finalStats = stats;
     if (flagged > 0) {
       problem = restrict(input.build(outliers));
       outcome = runPass(outcome.theta);
@@ -224,7 +232,8 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
     }
   }
   theta = outcome.theta;
-  const stats = new StatsSink(problem).consume(residualsAt(problem, theta, buffer));
+  // Reuse the outlier pass's statistics when nothing was flagged (same θ, same problem).
+  const stats = finalStats ?? new StatsSink(problem).consume(residualsAt(problem, theta, buffer));
   const curveRms = new Float64Array(n);
   for (let k = 0; k < n; k++) curveRms[k] = stats.curveRms(k);
   for (const k of incFinal)

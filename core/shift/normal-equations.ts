@@ -1,5 +1,5 @@
 /**
- * Accumulates the IRLS normal equations JᵀWJ and JᵀWr from a residual buffer: each residual
+ * Accumulates the normal equations (curvature Σ w ρ''·g gᵀ, gradient Σ w ψ/z·g r) from a residual buffer: each residual
  * touches at most four parameters (h_i, h_j, v_i, v_j), so no Jacobian is stored.
  */
 import type { FitProblem } from './problem';
@@ -10,13 +10,15 @@ import {
   lossCode,
   robustRho as rhoImport,
   robustWeight as weightImport,
+  robustCurvature as curvatureImport,
 } from './robust';
+import type { RobustLoss } from './types';
 
 // Local bindings (see residuals.ts): no getter per call under CommonJS transpilers.
 const LOSS_HUBER = HUBER_CODE;
 const robustRho = rhoImport;
 const robustWeight = weightImport;
-import type { RobustLoss } from './types';
+const robustCurvature = curvatureImport;
 
 export class NormalSink {
   readonly size: number;
@@ -61,12 +63,15 @@ export class NormalSink {
       const az = Math.abs(z);
       let rho: number;
       let psiOverZ: number;
+      let curv: number;
       if (code === LOSS_HUBER) {
         rho = az <= c ? 0.5 * z * z : c * az - 0.5 * c * c;
         psiOverZ = az <= c ? 1 : c / az;
+        curv = az <= c ? 1 : (0.25 * c) / az;
       } else {
         rho = robustRho(code, z, c);
         psiOverZ = robustWeight(code, z, c);
+        curv = robustCurvature(code, z, c);
       }
       this.lossSum += rho;
       this.count += BIN[m];
@@ -77,7 +82,9 @@ export class NormalSink {
       const j = OT[m];
       const gi = G[m];
       const wg = wt * gi;
-      const wgg = wg * gi;
+      // Curvature with ρ'' (see normal-walk.ts); gradient with ψ/z.
+      const wc = w * curv;
+      const wgg = wc * gi * gi;
       grad[i] += wg * r;
       grad[j] -= wg * r;
       a[i * s + i] += wgg;
@@ -89,8 +96,8 @@ export class NormalSink {
         const vi = n + i;
         const vj = n + j;
         const wb = wt * beta;
-        const wbb = wb * beta;
-        const wgb = wg * beta;
+        const wbb = wc * beta * beta;
+        const wgb = wc * gi * beta;
         grad[vi] += wb * r;
         grad[vj] -= wb * r;
         a[vi * s + vi] += wbb;
@@ -117,6 +124,10 @@ export class NormalSink {
 
   weight(z: number): number {
     return robustWeight(this.code, z, this.scale);
+  }
+
+  curvature(z: number): number {
+    return robustCurvature(this.code, z, this.scale);
   }
 
   /** Mean robust loss per measured point in the overlaps: the objective minimised. */

@@ -33,11 +33,14 @@ function walkInto(
   const yOff = alpha * dh + (p.joint ? beta * (theta[n + owner] - theta[n + other]) : 0);
   const bx = b.lx;
   const by = b.y;
-  const bw = b.w;
+  const bInvW = b.invW;
+  const bSlope = b.segSlope;
+  const bInvH = b.invH;
   const last = bx.length - 1;
   const ax = a.lx;
   const ay = a.y;
   const aw = a.w;
+  const aInvW = a.invW;
   const first = lowerBound(ax, bx[0] - shift);
   const end = upperBound(ax, bx[last] - shift);
   if (end <= first) return;
@@ -56,32 +59,41 @@ function walkInto(
   for (let e = first; e < end; e++) {
     const q = ax[e] + shift;
     while (k < last - 1 && bx[k + 1] < q) k++;
-    const h = bx[k + 1] - bx[k];
-    const slope = (by[k + 1] - by[k]) / h;
-    const lam = (q - bx[k]) / h;
-    const w = 1 / (1 / aw[e] + ((1 - lam) * (1 - lam)) / bw[k] + (lam * lam) / bw[k + 1]);
-    const r = ay[e] + yOff - (by[k] + slope * (q - bx[k]));
+    const slope = bSlope[k];
+    const dq = q - bx[k];
+    const lam = dq * bInvH[k];
+    const lam1 = 1 - lam;
+    const w = 1 / (aInvW[e] + lam1 * lam1 * bInvW[k] + lam * lam * bInvW[k + 1]);
+    const r = ay[e] + yOff - (by[k] + slope * dq);
     const z = r * Math.sqrt(w);
     const az = Math.abs(z);
+    // ψ(z)/z weights the gradient; ρ''(z) the curvature (Newton on the robust loss converges
+    // faster than plain reweighting when many residuals sit beyond the Huber corner).
     let psi: number;
+    let curv: number;
     if (huber) {
-      lossSum += az <= c ? 0.5 * z * z : c * az - 0.5 * c * c;
-      psi = az <= c ? 1 : c / az;
+      const inside = az <= c;
+      lossSum += inside ? 0.5 * z * z : c * az - 0.5 * c * c;
+      psi = inside ? 1 : c / az;
+      // ρ'' is 0 beyond the corner; keep a quarter of the reweighting curvature there so a curve
+      // whose residuals all lie beyond it still has a well-posed step.
+      curv = inside ? 1 : 0.25 * psi;
     } else {
       lossSum += sink.rho(z);
       psi = sink.weight(z);
+      curv = sink.curvature(z);
     }
     count += aw[e];
     const wt = w * psi;
+    const wc = w * curv;
     wsq += wt * r * r;
     const g = alpha - sigma * slope;
-    const wg = wt * g;
-    gr += wg * r;
-    aa += wg * g;
+    gr += wt * g * r;
+    aa += wc * g * g;
     if (joint) {
       gv += wt * beta * r;
-      av += wt * beta * beta;
-      ahv += wg * beta;
+      av += wc * beta * beta;
+      ahv += wc * g * beta;
     }
   }
   sink.lossSum += lossSum;

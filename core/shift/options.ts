@@ -94,6 +94,7 @@ export function resolveShiftOptions(dataset: Dataset, o: ShiftOptions): Resolved
     reverseAllowanceDecades: Math.max(0, o.reverseAllowanceDecades ?? 0.5),
     scanStepDecades: positive('scanStepDecades', o.scanStepDecades ?? 0.05),
     maxIterations: Math.round(positive('maxIterations', o.maxIterations ?? 60)),
+    toleranceDecades: positive('toleranceDecades', o.toleranceDecades ?? 0.001),
     checks: o.checks ?? true,
   };
 }

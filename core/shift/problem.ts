@@ -20,6 +20,10 @@ export interface FitSeries {
   ySorted: Float64Array;
   /** dy/dlx at each entry from a local quadratic through 5 entries (noise-damped slope). */
   slope: Float64Array;
+  /** 1/w per entry, and per segment k (entries k, k+1): its slope and 1/length (hot-loop cache). */
+  invW: Float64Array;
+  segSlope: Float64Array;
+  invH: Float64Array;
 }
 
 export interface FitProblem {

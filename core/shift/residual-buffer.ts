@@ -5,16 +5,33 @@
  */
 export class ResidualBuffer {
   size = 0;
-  owner = new Int32Array(1024);
-  other = new Int32Array(1024);
-  driver = new Int32Array(1024);
-  entry = new Int32Array(1024);
-  knot = new Int32Array(1024);
-  r = new Float64Array(1024);
-  w = new Float64Array(1024);
-  g = new Float64Array(1024);
-  bin = new Float64Array(1024);
-  lam = new Float64Array(1024);
+  constructor(capacity = 1024) {
+    this.allocate(Math.max(16, capacity));
+  }
+
+  private allocate(cap: number): void {
+    this.owner = new Int32Array(cap);
+    this.other = new Int32Array(cap);
+    this.driver = new Int32Array(cap);
+    this.entry = new Int32Array(cap);
+    this.knot = new Int32Array(cap);
+    this.r = new Float64Array(cap);
+    this.w = new Float64Array(cap);
+    this.g = new Float64Array(cap);
+    this.bin = new Float64Array(cap);
+    this.lam = new Float64Array(cap);
+  }
+
+  owner = new Int32Array(0);
+  other = new Int32Array(0);
+  driver = new Int32Array(0);
+  entry = new Int32Array(0);
+  knot = new Int32Array(0);
+  r = new Float64Array(0);
+  w = new Float64Array(0);
+  g = new Float64Array(0);
+  bin = new Float64Array(0);
+  lam = new Float64Array(0);
 
   reset(): void {
     this.size = 0;

@@ -38,6 +38,17 @@ export function robustWeight(loss: RobustLoss | number, r: number, c: number): n
   return 1 / (1 + z * z);
 }
 
+/** ρ''(r) with a floor, for Newton steps and the covariance. */
+export function robustCurvature(loss: RobustLoss | number, r: number, c: number): number {
+  const code = typeof loss === 'number' ? loss : lossCode(loss);
+  if (code === LOSS_NONE) return 1;
+  // Beyond Huber's corner ρ'' = 0, and Cauchy's turns negative: keep a quarter of the reweighting
+  // curvature ψ/r so every parameter keeps a well-posed step (a safeguard, not part of the loss).
+  if (code === LOSS_HUBER) return Math.abs(r) <= c ? 1 : (0.25 * c) / Math.abs(r);
+  const u2 = (r / c) ** 2;
+  return Math.max(0.25 / (1 + u2), (1 - u2) / ((1 + u2) * (1 + u2)));
+}
+
 /** Median of the absolute values (a copy is partially sorted; the input is left alone). */
 export function medianAbs(values: ArrayLike<number>): number {
   const n = values.length;

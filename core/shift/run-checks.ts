@@ -87,6 +87,7 @@ function disagreement(
       flagOutliers: false,
       outlierThreshold: s.outlierThreshold,
       maxIterations: s.maxIterations,
+      toleranceDecades: s.toleranceDecades,
       scanStep: s.scanStepDecades,
       directionAllowance: s.reverseAllowanceDecades,
       maxOffset: Infinity,

@@ -13,9 +13,13 @@ export function buildSeries(
   maxPerDecade: number,
 ): FitSeries {
   const order: number[] = [];
+  let sorted = true;
   for (let i = 0; i < lx.length; i++)
-    if (Number.isFinite(lx[i]) && Number.isFinite(y[i])) order.push(i);
-  order.sort((a, b) => lx[a] - lx[b]);
+    if (Number.isFinite(lx[i]) && Number.isFinite(y[i])) {
+      if (order.length > 0 && lx[i] < lx[order[order.length - 1]]) sorted = false;
+      order.push(i);
+    }
+  if (!sorted) order.sort((a, b) => lx[a] - lx[b]);
   const span = order.length > 1 ? lx[order[order.length - 1]] - lx[order[0]] : 0;
   // Bin only when the curve as a whole is denser than allowed; otherwise merge exact duplicates.
   const binWidth =
@@ -48,14 +52,24 @@ export function buildSeries(
   }
   starts.push(idx.length);
   const yArr = Float64Array.from(outY);
+  const xArr = Float64Array.from(outX);
+  const segSlope = new Float64Array(Math.max(0, xArr.length - 1));
+  const invH = new Float64Array(segSlope.length);
+  for (let k = 0; k < segSlope.length; k++) {
+    invH[k] = 1 / (xArr[k + 1] - xArr[k]);
+    segSlope[k] = (yArr[k + 1] - yArr[k]) * invH[k];
+  }
   return {
-    lx: Float64Array.from(outX),
+    invW: Float64Array.from(outW, (w) => 1 / w),
+    segSlope,
+    invH,
+    lx: xArr,
     y: yArr,
     w: Float64Array.from(outW),
     pointIndex: Int32Array.from(idx),
     binStart: Int32Array.from(starts),
     ySorted: Float64Array.from(yArr).sort(),
-    slope: localSlopes(Float64Array.from(outX), yArr),
+    slope: localSlopes(xArr, yArr),
   };
 }
 

@@ -80,6 +80,7 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
     flagOutliers: s.flagOutliers,
     outlierThreshold: s.outlierThreshold,
     maxIterations: s.maxIterations,
+    toleranceDecades: s.toleranceDecades,
     scanStep: s.scanStepDecades,
     directionAllowance: s.reverseAllowanceDecades,
     maxOffset: Infinity,

@@ -32,6 +32,8 @@ export interface SolveSettings {
   /** 1 = parameter kept at its starting value. */
   fixed: Uint8Array;
   constraints: LinearConstraint[];
+  /** Stop when no parameter moves by more than this, decades. */
+  toleranceDecades: number;
   /** Reused residual storage (optional). */
   buffer?: ResidualBuffer;
 }
@@ -49,14 +51,12 @@ export interface SolveOutcome {
   objective: number;
 }
 
-/** Steps below this are immaterial (decades). */
-const STEP_TOL_DECADES = 1e-5;
+/** Largest change of any offset in one iteration, decades. */
+const MAX_STEP_DECADES = 0.5;
 /** Relative decrease of the objective below which the fit has converged. */
-const REL_TOL = 1e-8;
+const REL_TOL = 1e-7;
 /** Rejected steps in a row after which no further decrease is possible. */
 const MAX_REJECTIONS = 4;
-/** A rejected step smaller than this means the optimum is reached for all practical purposes. */
-const SMALL_STEP_DECADES = 1e-4;
 
 export function solveOffsets(
   p: FitProblem,
@@ -76,7 +76,14 @@ export function solveOffsets(
     return normalAt(p, t, s.loss, s.scale, matrix);
   };
   let cur = evaluate(theta, true);
-  let lambda = 1e-3;
+  // A point that leaves the overlaps keeps costing the mean loss per point at the start, so the
+  // score (normalised by the N0 points at the start) cannot improve merely because fewer points
+  // are compared.
+  const n0 = cur.count;
+  const lostLoss = n0 > 0 ? cur.lossSum / n0 : 0;
+  const score = (k: NormalSink): number =>
+    n0 > 0 ? (k.lossSum + lostLoss * Math.max(0, n0 - k.count)) / n0 : k.objective();
+  let lambda = 1e-6;
   let iterations = 0;
   let converged = m === 0;
   let reason = m === 0 ? 'nothing to fit' : 'iteration limit';
@@ -93,33 +100,37 @@ export function solveOffsets(
       }
       const trial = Float64Array.from(theta);
       let maxStep = 0;
-      for (let k = 0; k < m; k++) {
-        trial[free[k]] += step[k];
-        maxStep = Math.max(maxStep, Math.abs(step[k]));
-      }
-      if (maxStep < STEP_TOL_DECADES) {
+      for (let k = 0; k < m; k++) maxStep = Math.max(maxStep, Math.abs(step[k]));
+      // Trust region: no shift moves by more than MAX_STEP_DECADES in one iteration.
+      const shrink = maxStep > MAX_STEP_DECADES ? MAX_STEP_DECADES / maxStep : 1;
+      for (let k = 0; k < m; k++) trial[free[k]] += shrink * step[k];
+      maxStep *= shrink;
+      if (maxStep < s.toleranceDecades) {
         converged = true;
         reason = 'step below tolerance';
         break;
       }
       const next = evaluate(trial, true);
-      const before = cur.objective();
-      const after = next.objective();
+      const before = score(cur);
+      const after = score(next);
       if (after <= before) {
         theta.set(trial);
         cur = next;
-        lambda = Math.max(lambda / 3, 1e-9);
+        lambda = Math.max(lambda / 10, 1e-12);
         accepted = true;
-        if (before - after <= REL_TOL * before) {
+        if (maxStep < s.toleranceDecades) {
+          converged = true;
+          reason = 'step below tolerance';
+        } else if (before - after <= REL_TOL * before) {
           converged = true;
           reason = 'objective change below tolerance';
         }
       } else {
         lambda *= 4;
         rejections++;
-        if (maxStep < SMALL_STEP_DECADES) {
+        if (maxStep < 3 * s.toleranceDecades) {
           converged = true;
-          reason = 'step below 1e-4 decades';
+          reason = 'rejected step below 3× tolerance';
           break;
         }
       }

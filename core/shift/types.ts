@@ -62,7 +62,7 @@ export interface ShiftOptions {
   robustLoss?: RobustLoss;
   /**
    * Scale of the robust loss, decades. @default undefined = 1.345 × the robust (MAD) spread of the
-   * residuals at the start of each pass (Huber's 95 %-efficiency constant), at least 0.002 decades.
+   * residuals at the start of each pass (Huber's 95 %-efficiency constant), at least 0.005 decades.
    */
   robustScaleDecades?: number;
   /** Flag points whose residual exceeds this many robust standard deviations. @default 4 */
@@ -85,6 +85,11 @@ export interface ShiftOptions {
   scanStepDecades?: number;
   /** Iteration limit of the joint refinement. @default 60 */
   maxIterations?: number;
+  /**
+   * The refinement stops when no shift moves by more than this, decades. The default (0.2 % in
+   * aT) is about a tenth of typical standard errors; lower it for noise-free data. @default 0.001
+   */
+  toleranceDecades?: number;
   /** Run the superposition checks (van Gurp–Palmen, per-quantity disagreement). @default true */
   checks?: boolean;
 }

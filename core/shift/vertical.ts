@@ -78,6 +78,7 @@ export function verticalShift(
     flagOutliers: s.flagOutliers,
     outlierThreshold: s.outlierThreshold,
     maxIterations: s.maxIterations,
+    toleranceDecades: s.toleranceDecades,
     scanStep: s.scanStepDecades / 5,
     directionAllowance: null,
     maxOffset: VGP_MAX_OFFSET,

@@ -24,6 +24,7 @@ describe('resolveShiftOptions()', () => {
       reverseAllowanceDecades: 0.5,
       scanStepDecades: 0.05,
       maxIterations: 60,
+      toleranceDecades: 0.001,
       checks: true,
     });
   });
