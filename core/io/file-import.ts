@@ -116,12 +116,12 @@ export function importFile(file: SourceFile, o: ResolvedImportOptions): FileImpo
   });
   const fileT =
     plan.layout === 'perIsotherm' ? fileTemperature(file, structure.metadata, o, sink) : undefined;
-  const wanted = plan.columns.map(
-    (c) =>
-      c.index - 1 === plan.xColumn ||
-      c.index - 1 === plan.temperatureColumn ||
-      plan.quantityColumns.some((q) => q.column === c.index - 1),
-  );
+  const read = new Set([
+    plan.xColumn,
+    plan.temperatureColumn,
+    ...plan.quantityColumns.map((q) => q.column),
+  ]);
+  const wanted = plan.columns.map((c) => read.has(c.index - 1));
   const table = scanTable(text, structure.firstDataOffset, structure.firstDataRow, {
     delimiter: dialect.delimiter,
     decimalComma: dialect.decimalComma,

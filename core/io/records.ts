@@ -98,8 +98,12 @@ export function buildRecords(
     n: 0,
     temperatureK: new Float64Array(capacity),
     x: new Float64Array(capacity),
+    // One array per quantity (a wide table has many columns of the same quantity).
     quantities: new Map(
-      plan.quantityColumns.map((qc) => [qc.quantity, new Float64Array(capacity)]),
+      [...new Set(plan.quantityColumns.map((qc) => qc.quantity))].map((q) => [
+        q,
+        new Float64Array(capacity),
+      ]),
     ),
     row: new Int32Array(capacity),
     usedRows: 0,

@@ -51,7 +51,10 @@ export interface ImportOptions {
   testKind?: TestKind | 'auto';
   /** Deformation mode; 'auto' infers it from the symbols (G/J shear, E/D tension). @default 'auto' */
   deformation?: DeformationMode | 'auto';
-  /** Sample name; when omitted, from metadata (sample, name, material) or the first file name. */
+  /**
+   * Sample name shown to users.
+   * @default undefined — then from metadata (sample, name, material) or the first file name
+   */
   sampleName?: string;
   /**
    * Row-level warnings listed per file; further ones are counted in one summary warning.

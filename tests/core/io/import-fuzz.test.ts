@@ -288,6 +288,16 @@ describe('importFiles() under fuzzing', () => {
     }
   });
 
+  it('importFiles() reads a wide table of 5,000 temperature columns', () => {
+    const temps = Array.from({ length: 5000 }, (_, i) => `G(t) ${i * 2 - 100}°C [Pa]`);
+    const rows = [['t (s)', ...temps].join(',')];
+    for (let r = 1; r <= 5; r++)
+      rows.push([r, ...temps.map((_, i) => 1000 - r - i / 100)].join(','));
+    const r = importOrImportError([{ name: 'wide.csv', text: rows.join('\n') }]);
+    expect(r).not.toBeInstanceOf(ImportError);
+    if (!(r instanceof ImportError)) expect(r.groups).toHaveLength(5000);
+  });
+
   it('importFiles() refuses 50 MB without a table quickly', () => {
     const e = importOrImportError([{ name: 'junk.txt', text: 'lorem ipsum '.repeat(4_200_000) }]);
     expect(e).toBeInstanceOf(ImportError);
