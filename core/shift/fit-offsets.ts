@@ -61,6 +61,10 @@ export interface OffsetFit {
   /** Per curve, point indices flagged as outliers. */
   outliers: Set<number>[];
   info: FitInfo;
+  /** The solver set-up of the last pass, for linearised follow-up fits (checks). */
+  fixed: Uint8Array;
+  constraints: LinearConstraint[];
+  scale: number;
 }
 
 function robustScale(loss: RobustLoss, residuals: ArrayLike<number>): number {
@@ -188,9 +192,11 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
   const buffer = new ResidualBuffer();
   let finalStats: StatsSink | null = null;
   const outliers: Set<number>[] = Array.from({ length: n }, () => new Set<number>());
+  let usedScale = input.scale ?? MIN_SCALE_DECADES;
   const runPass = (t: Float64Array) => {
     const pre = new StatsSink(problem).consume(residualsAt(problem, t, buffer));
     const scale = input.scale ?? robustScale(input.loss, pre.residuals);
+    usedScale = scale;
     return solveOffsets(problem, t, {
       loss: input.loss,
       scale,
@@ -258,6 +264,9 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
     rms: stats.rms(),
     robustSigma: MAD_TO_SIGMA * medianAbs(stats.residuals),
     outliers,
+    fixed,
+    constraints,
+    scale: usedScale,
     info: {
       converged: outcome.converged,
       iterations,
