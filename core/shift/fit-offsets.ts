@@ -20,6 +20,8 @@ import type { FitInfo, RobustLoss } from './types';
 /** Cauchy tuning constant for 95 % efficiency under normal errors (Holland & Welsch 1977). */
 const CAUCHY_K = 2.385;
 const MIN_SCALE_DECADES = 0.005;
+/** Prior standard deviation of log10 bT in a joint fit, decades (a factor 1.26). */
+export const JOINT_BT_PRIOR_DECADES = 0.1;
 /** Smallest robust spread assumed for outlier flagging, decades (about 1 %). */
 const OUTLIER_FLOOR_DECADES = 0.005;
 
@@ -62,6 +64,7 @@ export interface OffsetFit {
   outliers: Set<number>[];
   info: FitInfo;
   /** The solver set-up of the last pass, for linearised follow-up fits (checks). */
+  prior: Float64Array | undefined;
   fixed: Uint8Array;
   constraints: LinearConstraint[];
   scale: number;
@@ -192,12 +195,20 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
   const buffer = new ResidualBuffer();
   let finalStats: StatsSink | null = null;
   const outliers: Set<number>[] = Array.from({ length: n }, () => new Set<number>());
+  // A joint fit gets a weak prior on log10 bT: bT stays within a few per cent of 1 for a simple
+  // material (Ferry 1980), and without it a featureless (power-law) curve could trade bT against
+  // aT without bound.
+  const prior = problem.joint ? new Float64Array(size) : undefined;
+  if (prior)
+    for (let k = 0; k < n; k++)
+      prior[n + k] = 1 / (JOINT_BT_PRIOR_DECADES * JOINT_BT_PRIOR_DECADES);
   let usedScale = input.scale ?? MIN_SCALE_DECADES;
   const runPass = (t: Float64Array) => {
     const pre = new StatsSink(problem).consume(residualsAt(problem, t, buffer));
     const scale = input.scale ?? robustScale(input.loss, pre.residuals);
     usedScale = scale;
     return solveOffsets(problem, t, {
+      prior,
       loss: input.loss,
       scale,
       maxIterations: input.maxIterations,
@@ -264,6 +275,7 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
     rms: stats.rms(),
     robustSigma: MAD_TO_SIGMA * medianAbs(stats.residuals),
     outliers,
+    prior,
     fixed,
     constraints,
     scale: usedScale,

@@ -91,6 +91,7 @@ function disagreement(
       maxIterations: 2,
       fixed: fit.fixed,
       constraints: fit.constraints,
+      prior: fit.prior,
       toleranceDecades: s.toleranceDecades,
     });
     const size = fit.theta.length;

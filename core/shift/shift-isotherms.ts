@@ -170,7 +170,13 @@ function structuralWarnings(
         'disconnected-group',
         `Isotherm ${describeIsotherm(isos[k])} overlaps only isotherms that do not connect to the rest: it is left out of the master curve.`,
       );
-    if (cs.included && cs.log10aTStdErr !== null && cs.log10aTStdErr > LARGE_STD_ERR_DECADES)
+    if (cs.included && !cs.locked && cs.log10aTStdErr === null)
+      warn(
+        warnings,
+        'large-uncertainty',
+        `The uncertainty of the shift of isotherm ${describeIsotherm(isos[k])} could not be determined: its overlap does not fix it.`,
+      );
+    else if (cs.included && cs.log10aTStdErr !== null && cs.log10aTStdErr > LARGE_STD_ERR_DECADES)
       warn(
         warnings,
         'large-uncertainty',

@@ -34,6 +34,11 @@ export interface SolveSettings {
   constraints: LinearConstraint[];
   /** Stop when no parameter moves by more than this, decades. */
   toleranceDecades: number;
+  /**
+   * Optional Gaussian prior per parameter: 1/σ² (decades⁻²), 0 for none. Enters as
+   * ½·scale²·θ²/σ², on the same footing as the standardised residuals.
+   */
+  prior?: Float64Array;
   /** Reused residual storage (optional). */
   buffer?: ResidualBuffer;
 }
@@ -73,7 +78,7 @@ export function solveOffsets(
   projectOntoConstraints(theta, free, cons);
   const buf = s.buffer ?? new ResidualBuffer();
   const evaluate = (t: Float64Array, matrix: boolean): NormalSink => {
-    return normalAt(p, t, s.loss, s.scale, matrix);
+    return addPrior(normalAt(p, t, s.loss, s.scale, matrix), t, s.prior, s.scale);
   };
   let cur = evaluate(theta, true);
   // A point that leaves the overlaps keeps costing the mean loss per point at the start, so the
@@ -145,7 +150,12 @@ export function solveOffsets(
   // Covariance with noise-damped slopes (see FitProblem.smoothSlopes).
   const smooth: FitProblem = { ...p, smoothSlopes: true };
   residualsAt(smooth, theta, buf);
-  const bread = new NormalSink(smooth, s.loss, s.scale, true).consume(buf);
+  const bread = addPrior(
+    new NormalSink(smooth, s.loss, s.scale, true).consume(buf),
+    theta,
+    s.prior,
+    s.scale,
+  );
   const sandwich = new SandwichSink(smooth, s.loss, s.scale).consume(buf);
   const covariance = covarianceOf(bread, free, cons, residualVariance, sandwich.meat());
   return {
@@ -158,6 +168,26 @@ export function solveOffsets(
     residualCount: cur.count,
     objective: cur.objective(),
   };
+}
+
+function addPrior(
+  sink: NormalSink,
+  theta: ArrayLike<number>,
+  prior: Float64Array | undefined,
+  scale: number,
+): NormalSink {
+  if (!prior) return sink;
+  const c2 = scale * scale;
+  for (let i = 0; i < prior.length; i++) {
+    if (prior[i] === 0) continue;
+    const k = c2 * prior[i];
+    sink.lossSum += 0.5 * k * theta[i] * theta[i];
+    if (sink.withMatrix) {
+      sink.a[i * sink.size + i] += k;
+      sink.g[i] += k * theta[i];
+    }
+  }
+  return sink;
 }
 
 /** Smallest change of the free parameters that satisfies the constraints. */

@@ -5,7 +5,7 @@
  *  - 'data' with δ and |G*| available (oscillatory): shift log tan δ along log|G*| — δ carries no
  *    vertical shift, so the offset along log|G*| is log10 bT itself, free of aT (Mavridis & Shroff,
  *    Polym. Eng. Sci. 32, 1992; DOMAIN.md §2);
- *  - 'data' otherwise (relaxation, creep): bT is fitted jointly with aT (flagged by the caller).
+ *  - 'data' otherwise (relaxation, creep): refused with a ShiftOptionsError (see below).
  */
 import type { Dataset } from '../data/types';
 import { buildProblem } from './build-problem';
@@ -14,6 +14,7 @@ import { quantityValues } from './drivers';
 import { fitOffsets } from './fit-offsets';
 import type { OffsetFit } from './fit-offsets';
 import type { ResolvedShiftOptions } from './types';
+import { ShiftOptionsError } from './options';
 
 export interface VerticalOutcome {
   /** Per dataset index; NaN where unknown. */
@@ -55,7 +56,12 @@ export function verticalShift(
       return quantityValues('complexModulus', q) && quantityValues('tanDelta', q);
     });
   if (!canVgp)
-    return { log10bT: zeros(), stdErr: zeros(), joint: true, vgpFit: null, extrapolatedK: [] };
+    // A joint free fit of aT and bT on relaxation or creep curves is ill-posed wherever the curve
+    // is close to a power law (a horizontal and a vertical shift then look alike): on our
+    // synthetic sets it ran away by decades. It is therefore not offered.
+    throw new ShiftOptionsError(
+      "vertical 'data' needs oscillatory data with G' and G'' (or δ and |G*|) in every isotherm, so that bT can be found from δ against |G*|; for relaxation or creep data give a density (vertical 'density') or use 'none'.",
+    );
   const fit = fitOffsets({
     build: (dropped) =>
       buildProblem(dataset, {

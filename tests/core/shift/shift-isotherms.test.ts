@@ -357,3 +357,20 @@ describe('shiftIsotherms()', () => {
     expect(MELT.equilibriumModulusPa).toBe(0);
   });
 });
+
+describe('shiftIsotherms() with other drivers and modes', () => {
+  it('shiftIsotherms() shifts |η*| with its own reduction (|η*|·bT/aT)', () => {
+    const { dataset, truth } = make(MELT_ARRHENIUS, 0.02, 2);
+    for (const iso of dataset.isotherms)
+      iso.quantities.complexViscosity = iso.x.map(
+        (w, i) => Math.hypot(iso.quantities.storageModulus![i], iso.quantities.lossModulus![i]) / w,
+      );
+    const r = shiftIsotherms(dataset, { referenceK: 463.15, drivers: ['complexViscosity'] });
+    expectAbsClose(maxError(aTs(r), truth.log10aT), 0, 0.02, '|η*| alone');
+  });
+
+  it("shiftIsotherms() refuses vertical 'data' for relaxation data, explaining why", () => {
+    const { dataset } = make(RELAX_WLF, 0.02, 1);
+    expect(() => shiftIsotherms(dataset, { referenceK: 300, vertical: 'data' })).toThrow(/density/);
+  });
+});
