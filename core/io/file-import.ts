@@ -72,7 +72,8 @@ export function importFile(file: SourceFile, o: ResolvedImportOptions): FileImpo
     );
   }
   const candidates = head.filter((l) => !isBlank(l.text) && !isComment(l.text)).slice(0, 200);
-  const dialect = detectDialect(candidates.map((l) => l.text));
+  // Detection looks at the first 64 k characters of each line: enough for any real table.
+  const dialect = detectDialect(candidates.map((l) => l.text.slice(0, 65536)));
   const structure = dialect ? findStructure(head, dialect) : undefined;
   if (!dialect || !structure) {
     throw new ImportError(

@@ -5,7 +5,9 @@ import {
   describeConversion,
   normaliseUnitText,
   parseUnit,
+  siUnitOf,
   toStoredUnit,
+  unitsOf,
 } from '../../../core/units';
 import type { UnitDimension } from '../../../core/units';
 import { expectRelClose } from '../../helpers/assert-close';
@@ -131,6 +133,14 @@ describe('parseUnit()', () => {
 
   it('parseUnit() does not read very long texts', () => {
     expect(parseUnit('Pa'.repeat(100)).ok).toBe(false);
+  });
+});
+
+describe('siUnitOf() and unitsOf()', () => {
+  it('siUnitOf() names the stored unit and unitsOf() the accepted ones of each dimension', () => {
+    expect(siUnitOf('frequency')).toBe('rad/s');
+    expect(siUnitOf('angle')).toBe('°');
+    expect(unitsOf('modulus')).toEqual(['Pa', 'kPa', 'MPa', 'GPa', 'dyn/cm²', 'psi', 'ksi']);
   });
 });
 
