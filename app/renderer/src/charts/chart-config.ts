@@ -30,6 +30,41 @@ export const whiteBackground: Plugin<'scatter'> = {
   },
 };
 
+/** A dataset may carry symmetric y errors (the shift factors' standard errors). */
+type WithErrors = { yError?: (number | null)[] };
+
+/** Draws the ±1 s.e. bars of datasets that carry `yError`; reads the live chart data. */
+export const errorBars: Plugin<'scatter'> = {
+  id: 'thermoshiftErrorBars',
+  afterDatasetsDraw(chart) {
+    const { ctx } = chart;
+    const { x, y } = chart.scales;
+    ctx.save();
+    ctx.lineWidth = 1.2;
+    for (const ds of chart.data.datasets) {
+      const errs = (ds as WithErrors).yError;
+      if (!errs) continue;
+      ctx.strokeStyle = String(ds.borderColor);
+      (ds.data as { x: number; y: number }[]).forEach((p, i) => {
+        const e = errs[i];
+        if (e === null || e === undefined || !(e > 0)) return;
+        const px = x.getPixelForValue(p.x);
+        const top = y.getPixelForValue(p.y + e);
+        const bottom = y.getPixelForValue(p.y - e);
+        ctx.beginPath();
+        ctx.moveTo(px, top);
+        ctx.lineTo(px, bottom);
+        ctx.moveTo(px - 3, top);
+        ctx.lineTo(px + 3, top);
+        ctx.moveTo(px - 3, bottom);
+        ctx.lineTo(px + 3, bottom);
+        ctx.stroke();
+      });
+    }
+    ctx.restore();
+  },
+};
+
 function seriesDataset(
   s: PlotSeries,
   shiftDecades: number,
@@ -49,6 +84,7 @@ function seriesDataset(
     pointHoverRadius: line ? 0 : 5,
     pointHitRadius: line ? 0 : 5,
     pointBorderColor: colour,
+    ...(s.yError ? ({ yError: s.yError } satisfies WithErrors) : {}),
   };
 }
 
@@ -137,7 +173,7 @@ export function plotChartConfig(
       },
       plugins: { tooltip: { enabled: false }, legend: { display: false } },
     },
-    plugins: [whiteBackground],
+    plugins: [whiteBackground, errorBars],
   };
   return { config, map: { seriesIndex } };
 }
