@@ -221,6 +221,10 @@ export function inspectionText(r: ImportResult): string {
       .join(', ');
     out.push(`  ${where}: ${w.message}`);
   }
+  out.push(
+    '',
+    'Check the columns and units above against the instrument settings before building a master curve (docs/import.md).',
+  );
   return `${out.join('\n')}\n`;
 }
 
