@@ -13,7 +13,8 @@ const DATA_FILTERS: FileFilter[] = [
   { name: 'All files', extensions: ['*'] },
 ];
 const ANALYSIS_FILTERS: FileFilter[] = [
-  { name: 'Thermoshift analysis', extensions: ['thermoshift.json', 'json'] },
+  // Extensions are matched after the last dot, so "*.thermoshift.json" files fall under json.
+  { name: 'Thermoshift analysis', extensions: ['json'] },
 ];
 
 function filtersFor(name: string): FileFilter[] {
