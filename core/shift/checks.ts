@@ -42,7 +42,8 @@ export function mismatchRatio(robustSigma: number, noise: number): number | null
 
 export interface VgpDispersion {
   rmsDeg: number;
-  ratio: number;
+  /** null when the noise of δ cannot be estimated (curves under 4 points). */
+  ratio: number | null;
 }
 
 /**
@@ -77,7 +78,7 @@ export function vanGurpPalmenDispersion(
   const rmsDeg = stats.rms();
   const robust = MAD_TO_SIGMA * medianAbs(stats.residuals);
   const noise = noiseLevel(p.curves.map((c) => c[0]));
-  const ratio = robust / Math.hypot(Number.isFinite(noise) ? noise : 0, VGP_FLOOR_DEG);
+  const ratio = Number.isFinite(noise) ? robust / Math.hypot(noise, VGP_FLOOR_DEG) : null;
   return { rmsDeg, ratio };
 }
 

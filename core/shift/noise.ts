@@ -8,49 +8,74 @@
  */
 import { MAD_TO_SIGMA, medianAbs } from './robust';
 
+/**
+ * Standardised residual at entry c of a least-squares quadratic through entries lo..hi (inclusive),
+ * or NaN when the window cannot give one. Leverage from (M⁻¹)₀₀ with abscissae centred on c.
+ */
+function windowResidual(
+  lx: ArrayLike<number>,
+  y: ArrayLike<number>,
+  lo: number,
+  hi: number,
+  c: number,
+): number {
+  let s0 = 0;
+  let s1 = 0;
+  let s2 = 0;
+  let s3 = 0;
+  let s4 = 0;
+  let t0 = 0;
+  let t1 = 0;
+  let t2 = 0;
+  for (let i = lo; i <= hi; i++) {
+    const x = lx[i] - lx[c];
+    const x2 = x * x;
+    s0 += 1;
+    s1 += x;
+    s2 += x2;
+    s3 += x2 * x;
+    s4 += x2 * x2;
+    t0 += y[i];
+    t1 += x * y[i];
+    t2 += x2 * y[i];
+  }
+  // Normal matrix M = [[s0 s1 s2][s1 s2 s3][s2 s3 s4]]; the fitted value at x = 0 is b0, and the
+  // leverage of entry c is (M⁻¹)₀₀ since its design row is (1, 0, 0).
+  const det = s0 * (s2 * s4 - s3 * s3) - s1 * (s1 * s4 - s3 * s2) + s2 * (s1 * s3 - s2 * s2);
+  if (!(Math.abs(det) > 1e-300)) return NaN;
+  const i00 = (s2 * s4 - s3 * s3) / det;
+  const i01 = -(s1 * s4 - s2 * s3) / det;
+  const i02 = (s1 * s3 - s2 * s2) / det;
+  const b0 = i00 * t0 + i01 * t1 + i02 * t2;
+  if (!(i00 < 1 - 1e-9)) return NaN;
+  return (y[c] - b0) / Math.sqrt(1 - i00);
+}
+
+/**
+ * Standardised residuals of every entry with a 5-point window (entries 2..n−3); a curve of only
+ * four entries (e.g. a DMA step at 1, 2, 5 and 10 Hz) gives its two inner entries from a quadratic
+ * through all four.
+ */
 export function standardisedLocalResiduals(
   lx: ArrayLike<number>,
   y: ArrayLike<number>,
   out: number[],
 ): void {
   const n = lx.length;
-  for (let c = 2; c < n - 2; c++) {
-    // Centred abscissae for conditioning.
-    let s0 = 0;
-    let s1 = 0;
-    let s2 = 0;
-    let s3 = 0;
-    let s4 = 0;
-    let t0 = 0;
-    let t1 = 0;
-    let t2 = 0;
-    for (let i = c - 2; i <= c + 2; i++) {
-      const x = lx[i] - lx[c];
-      const x2 = x * x;
-      s0 += 1;
-      s1 += x;
-      s2 += x2;
-      s3 += x2 * x;
-      s4 += x2 * x2;
-      t0 += y[i];
-      t1 += x * y[i];
-      t2 += x2 * y[i];
+  if (n === 4) {
+    for (const c of [1, 2]) {
+      const r = windowResidual(lx, y, 0, 3, c);
+      if (Number.isFinite(r)) out.push(r);
     }
-    // Normal matrix M = [[s0 s1 s2][s1 s2 s3][s2 s3 s4]]; fitted value at x = 0 is b0, and the
-    // leverage of the centre is (M⁻¹)₀₀ since its design row is (1, 0, 0).
-    const det = s0 * (s2 * s4 - s3 * s3) - s1 * (s1 * s4 - s3 * s2) + s2 * (s1 * s3 - s2 * s2);
-    if (!(Math.abs(det) > 1e-300)) continue;
-    const i00 = (s2 * s4 - s3 * s3) / det;
-    const i01 = -(s1 * s4 - s2 * s3) / det;
-    const i02 = (s1 * s3 - s2 * s2) / det;
-    const b0 = i00 * t0 + i01 * t1 + i02 * t2;
-    const h = i00;
-    if (!(h < 1)) continue;
-    out.push((y[c] - b0) / Math.sqrt(1 - h));
+    return;
+  }
+  for (let c = 2; c < n - 2; c++) {
+    const r = windowResidual(lx, y, c - 2, c + 2, c);
+    if (Number.isFinite(r)) out.push(r);
   }
 }
 
-/** Robust noise level of a set of curves, decades; NaN when no curve has 5 entries. */
+/** Robust noise level of a set of curves, decades; NaN when no curve has 4 entries. */
 export function noiseLevel(curves: { lx: ArrayLike<number>; y: ArrayLike<number> }[]): number {
   const out: number[] = [];
   for (const c of curves) standardisedLocalResiduals(c.lx, c.y, out);

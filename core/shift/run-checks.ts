@@ -161,7 +161,7 @@ export function runChecks(
   const figures = [
     mismatch !== null ? `mismatch ${mismatch.toFixed(1)}× the noise` : '',
     vgp
-      ? `van Gurp–Palmen spread ${vgp.ratio.toFixed(1)}× the noise (${vgp.rmsDeg.toFixed(1)}° RMS)`
+      ? `van Gurp–Palmen spread ${vgp.ratio !== null ? `${vgp.ratio.toFixed(1)}× the noise, ` : ''}${vgp.rmsDeg.toFixed(1)}° RMS`
       : '',
     dis
       ? `shifts from ${compared.join(' and ')} differ by up to ${dis.decades.toFixed(2)} decades`
