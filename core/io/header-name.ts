@@ -50,8 +50,21 @@ const PHRASES: Rule[] = [
     'temperature',
   ],
   [/^(?:time|(?:step|elapsed|test|creep|relaxation|total) time)$/, 'time'],
-  [/^(?:(?:oscillation |test )?frequency|freq\.)$/, 'frequency'],
+  [/^(?:(?:oscillation |osc\.? |test )?frequency|freq\.)$/, 'frequency'],
   [/^(?:ang(?:ular|\.)? ?freq(?:uency|\.)?|circular frequency)$/, 'angularFrequency'],
+  // German and French words found in instrument exports.
+  [/^(?:temperatur|température|temperature de l'essai)$/, 'temperature'],
+  [/^(?:zeit|temps|prüfzeit)$/, 'time'],
+  [/^(?:frequenz|fréquence)$/, 'frequency'],
+  [/^(?:kreisfrequenz|winkelfrequenz|fréquence angulaire|pulsation)$/, 'angularFrequency'],
+  [/^(?:speichermodul|module de conservation|module élastique)$/, 'storageModulus'],
+  [/^(?:verlustmodul|module de perte)$/, 'lossModulus'],
+  [/^(?:verlustfaktor|facteur de perte)$/, 'tanDelta'],
+  [/^(?:phasenwinkel|verlustwinkel|angle de phase|angle de perte)$/, 'phaseAngle'],
+  [/^(?:komplexer (?:schub)?modul|module complexe)$/, 'complexModulus'],
+  [/^(?:komplexe viskosität|viscosité complexe)$/, 'complexViscosity'],
+  [/^(?:relaxationsmodul|module de relaxation)$/, 'relaxationModulus'],
+  [/^(?:kriechnachgiebigkeit|nachgiebigkeit|complaisance(?: de fluage)?)$/, 'creepCompliance'],
 ];
 
 const MODE_WORDS: [RegExp, DeformationMode][] = [
@@ -66,8 +79,9 @@ export function normaliseName(name: string): string {
     .toLowerCase()
     .replace(/[′’‘´`]/g, "'")
     .replace(/[″"“”]/g, "''")
-    .replace(/\s+(['*|])/g, '$1')
-    .replace(/^\|\s+/, '|')
+    .replace(/\s+(['*])/g, '$1')
+    .replace(/\|\s+(?=\S*\*)/g, '|')
+    .replace(/(\*)\s+\|/g, '$1|')
     .replace(/\s+/g, ' ')
     .replace(/[:.]$/, '')
     .trim();
@@ -109,8 +123,13 @@ export function recogniseName(name: string): RecognisedName | undefined {
     for (let i = 1; i < words.length && !found; i++) {
       const a = single(words.slice(0, i).join(' '));
       const b = single(words.slice(i).join(' '));
-      if (a && b && a.role === b.role)
+      // "Temperature T", "Time t": a bare t/T agrees with a temperature or time phrase.
+      const tLetter = (w: string[]) => w.length === 1 && w[0] === 't';
+      if (a && (a.role === 'temperature' || a.role === 'time') && tLetter(words.slice(i)))
+        found = a;
+      else if (a && b && a.role === b.role) {
         found = { role: a.role, deformation: a.deformation ?? b.deformation };
+      }
     }
   }
   if (!found) return undefined;

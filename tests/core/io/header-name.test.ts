@@ -46,6 +46,20 @@ describe('recogniseName()', () => {
     ['J(t)', 'creepCompliance', 'shear'],
     ['D(t)', 'creepCompliance', 'tension'],
     ['Creep compliance', 'creepCompliance'],
+    ['Temperature T', 'temperature'],
+    ['Time t', 'time'],
+    ['Complex viscosity |η*|', 'complexViscosity'],
+    ['Complex modulus |G*|', 'complexModulus', 'shear'],
+    ['Osc. frequency', 'frequency'],
+    ['Temperatur', 'temperature'],
+    ['Zeit', 'time'],
+    ['Kreisfrequenz', 'angularFrequency'],
+    ["Speichermodul E'", 'storageModulus', 'tension'],
+    ['Verlustmodul', 'lossModulus'],
+    ['Verlustfaktor tan δ', 'tanDelta'],
+    ['Phasenwinkel', 'phaseAngle'],
+    ['Module de perte', 'lossModulus'],
+    ['Fréquence', 'frequency'],
   ];
   for (const [name, role, mode] of table) {
     it(`recogniseName() reads "${name}" as ${role}${mode ? ` (${mode})` : ''}`, () => {
