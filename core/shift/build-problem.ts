@@ -32,22 +32,31 @@ export function buildProblem(dataset: Dataset, spec: ProblemSpec): FitProblem {
   const curves: FitSeries[][] = spec.active.map((k, c) => {
     const iso = dataset.isotherms[k];
     const raw = spec.abscissa ? spec.abscissa(k) : iso.x;
-    const lx = Array.from(raw, (x) => (x > 0 ? Math.log10(x) : NaN));
+    const n = iso.x.length;
+    const lx = new Float64Array(n);
+    for (let i = 0; i < n; i++) lx[i] = raw[i] > 0 ? Math.log10(raw[i]) : NaN;
     const ordinate = spec.ordinate ?? logOrdinate;
     const drop = spec.dropped?.[c];
     return spec.drivers.map((q) => {
       const values = quantityValues(q, iso.quantities) ?? [];
       const offset = spec.fixedLog10bT ? betaOf(q) * spec.fixedLog10bT[k] : 0;
-      const xs: number[] = [];
-      const ys: number[] = [];
-      const idx: number[] = [];
-      for (let i = 0; i < iso.x.length; i++) {
-        if (!iso.mask[i] || drop?.has(i) || i >= values.length) continue;
-        xs.push(lx[i]);
-        ys.push(ordinate(q, values[i]) + offset);
-        idx.push(i);
+      const xs = new Float64Array(n);
+      const ys = new Float64Array(n);
+      const idx = new Int32Array(n);
+      let m = 0;
+      for (let i = 0; i < n; i++) {
+        if (!iso.mask[i] || i >= values.length || (drop !== undefined && drop.has(i))) continue;
+        xs[m] = lx[i];
+        ys[m] = ordinate(q, values[i]) + offset;
+        idx[m] = i;
+        m++;
       }
-      return buildSeries(xs, ys, idx, spec.maxPointsPerDecade);
+      return buildSeries(
+        xs.subarray(0, m),
+        ys.subarray(0, m),
+        idx.subarray(0, m),
+        spec.maxPointsPerDecade,
+      );
     });
   });
   const problem: FitProblem = {

@@ -12,45 +12,50 @@ export function buildSeries(
   pointIndex: ArrayLike<number>,
   maxPerDecade: number,
 ): FitSeries {
-  const order: number[] = [];
+  const n = lx.length;
+  let order = new Int32Array(n);
+  let count = 0;
   let sorted = true;
-  for (let i = 0; i < lx.length; i++)
+  for (let i = 0; i < n; i++)
     if (Number.isFinite(lx[i]) && Number.isFinite(y[i])) {
-      if (order.length > 0 && lx[i] < lx[order[order.length - 1]]) sorted = false;
-      order.push(i);
+      if (count > 0 && lx[i] < lx[order[count - 1]]) sorted = false;
+      order[count++] = i;
     }
-  if (!sorted) order.sort((a, b) => lx[a] - lx[b]);
-  const span = order.length > 1 ? lx[order[order.length - 1]] - lx[order[0]] : 0;
+  order = order.subarray(0, count);
+  if (!sorted) order = Int32Array.from(order).sort((a, b) => lx[a] - lx[b]);
+  const span = count > 1 ? lx[order[count - 1]] - lx[order[0]] : 0;
   // Bin only when the curve as a whole is denser than allowed; otherwise merge exact duplicates.
   const binWidth =
-    maxPerDecade > 0 && span > 0 && order.length / span > maxPerDecade ? 1 / maxPerDecade : 0;
-  const x0 = order.length > 0 ? lx[order[0]] : 0;
-  const key = (i: number): number => (binWidth > 0 ? Math.floor((lx[i] - x0) / binWidth) : lx[i]);
+    maxPerDecade > 0 && span > 0 && count / span > maxPerDecade ? 1 / maxPerDecade : 0;
+  const x0 = count > 0 ? lx[order[0]] : 0;
   const outX: number[] = [];
   const outY: number[] = [];
   const outW: number[] = [];
   const starts: number[] = [];
-  const idx: number[] = [];
+  const idx = new Int32Array(count);
   let k = 0;
-  while (k < order.length) {
-    const k0 = key(order[k]);
+  while (k < count) {
+    const k0 = binWidth > 0 ? Math.floor((lx[order[k]] - x0) / binWidth) : lx[order[k]];
     let m = k;
     let sx = 0;
     let sy = 0;
-    while (m < order.length && key(order[m]) === k0) {
-      sx += lx[order[m]];
+    while (m < count) {
+      const v = lx[order[m]];
+      const key = binWidth > 0 ? Math.floor((v - x0) / binWidth) : v;
+      if (key !== k0) break;
+      sx += v;
       sy += y[order[m]];
-      idx.push(pointIndex[order[m]]);
+      idx[m] = pointIndex[order[m]];
       m++;
     }
     const cnt = m - k;
-    starts.push(idx.length - cnt);
+    starts.push(k);
     outX.push(sx / cnt);
     outY.push(sy / cnt);
     outW.push(cnt);
     k = m;
   }
-  starts.push(idx.length);
+  starts.push(count);
   const yArr = Float64Array.from(outY);
   const xArr = Float64Array.from(outX);
   const segSlope = new Float64Array(Math.max(0, xArr.length - 1));
@@ -66,7 +71,7 @@ export function buildSeries(
     lx: xArr,
     y: yArr,
     w: Float64Array.from(outW),
-    pointIndex: Int32Array.from(idx),
+    pointIndex: idx,
     binStart: Int32Array.from(starts),
     ySorted: Float64Array.from(yArr).sort(),
     slope: localSlopes(xArr, yArr),

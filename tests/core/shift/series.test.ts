@@ -64,3 +64,21 @@ describe('standardisedLocalResiduals()', () => {
     expectAbsClose(sd, 0.01, 0.0005, 'noise recovered');
   });
 });
+
+describe('standardisedLocalResiduals() on short curves', () => {
+  it('standardisedLocalResiduals() uses a quadratic through all four points of a 4-point curve', () => {
+    // A quadratic through four points leaves one degree of freedom: exact data gives 0.
+    const lx = [0, 0.3, 0.7, 1];
+    const out: number[] = [];
+    standardisedLocalResiduals(
+      lx,
+      lx.map((x) => 1 + x - 2 * x * x),
+      out,
+    );
+    expect(out).toHaveLength(2);
+    out.forEach((r) => expectAbsClose(r, 0, 1e-12, 'exact quadratic'));
+    const none: number[] = [];
+    standardisedLocalResiduals([0, 1, 2], [1, 2, 3], none);
+    expect(none).toEqual([]);
+  });
+});
