@@ -181,6 +181,7 @@ export function scanPair(
   };
   let best: ScanResult | null = null;
   const consider = (dh: number): void => {
+    if (dh < dhLo - 1e-12 || dh > dhHi + 1e-12) return;
     const r = score(dh);
     if (r && (!best || r.score < best.score)) best = r;
   };
