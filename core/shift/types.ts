@@ -110,7 +110,6 @@ export type ShiftWarningCode =
   | 'no-overlap'
   | 'disconnected-group'
   | 'reference-extrapolated'
-  | 'reference-interpolated'
   | 'locks-conflict-reference'
   | 'free-vertical-shift'
   | 'density-extrapolated'
