@@ -100,7 +100,7 @@ export function assembleIsotherms(
           i,
           sameValues(p, i, prev)
             ? `duplicated row (same values as ${at}); skipped`
-            : `same ${xWord} as ${at} in the isotherm near ${fmtC(p.temperatureK[i])} but other values; kept ${at}, skipped this row`,
+            : `same ${xWord} as ${at} in the isotherm near ${fmtC(p.temperatureK[i])} but other values; kept ${at}, skipped this point`,
         );
         continue;
       }

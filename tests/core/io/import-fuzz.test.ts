@@ -246,6 +246,52 @@ describe('importFiles() under fuzzing', () => {
     expect(imported / runs).toBeGreaterThan(0.5);
   });
 
+  it('importFiles() accounts for every data row: it gives a point or is named in a warning', () => {
+    fc.assert(
+      fc.property(nearValid, (v) => {
+        const files = renderNearValid(v);
+        const r = importOrImportError(files, { maxWarningsPerFile: 10_000 });
+        if (r instanceof ImportError) return;
+        const seen = new Set<string>();
+        for (const iso of r.dataset.isotherms)
+          for (const s of iso.source) seen.add(`${s.file}:${s.row}`);
+        for (const w of r.warnings) seen.add(`${w.file}:${w.row}`);
+        for (const f of files) {
+          const lines = f.text.split(/\r?\n/);
+          // Line 1 is the comment, line 2 the header; every later line is a data row.
+          for (let row = 3; row <= lines.length; row++) {
+            if (/^[\s,;]*$/.test(lines[row - 1])) continue; // all cells empty: a blank line
+            expect(seen.has(`${f.name}:${row}`), `${f.name} row ${row} vanished`).toBe(true);
+          }
+        }
+        if (v.layout === 'wide') {
+          // Each cell of a wide row is a point at its column's temperature, or has a warning.
+          // A point's isotherm temperature is the mean of its group: within the 1 K tolerance.
+          const points = new Map<number, number[]>();
+          for (const iso of r.dataset.isotherms) {
+            for (const src of iso.source) {
+              points.set(src.row, [...(points.get(src.row) ?? []), iso.temperatureK - 273.15]);
+            }
+          }
+          const near = (row: number, t: number) =>
+            (points.get(row) ?? []).some((c) => Math.abs(c - t) <= 1 + 1e-9);
+          const warned = new Set(r.warnings.map((w) => `${w.row}:${w.column}`));
+          const rowWarned = new Set(r.warnings.filter((w) => w.column <= 1).map((w) => w.row));
+          const rows = files[0].text.split(/\r?\n/).length;
+          const wideLines = files[0].text.split(/\r?\n/);
+          for (let row = 3; row <= rows; row++) {
+            if (/^[\s,;]*$/.test(wideLines[row - 1])) continue;
+            v.tempsC.forEach((t, j) => {
+              const ok = near(row, t) || warned.has(`${row}:${j + 2}`) || rowWarned.has(row);
+              expect(ok, `wide row ${row}, ${t} °C vanished`).toBe(true);
+            });
+          }
+        }
+      }),
+      { numRuns: 300, seed: 31337 },
+    );
+  });
+
   it('importFiles() copes with a 200,000-character line', () => {
     const long = Array.from({ length: 70_000 }, (_, i) => String(i % 97)).join(',');
     expect(long.length).toBeGreaterThan(200_000);
