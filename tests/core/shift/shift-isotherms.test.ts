@@ -37,6 +37,7 @@ describe('shiftIsotherms()', () => {
     row(RELAX_ARRHENIUS, 0.02, false, 0.02),
     row(MELT_ARRHENIUS, 0.08, true, 0.05),
     row(MELT_WLF_PB, 0.08, true, 0.05),
+    row(MELT_WLF_UNIVERSAL, 0.08, true, 0.05),
     row(RELAX_WLF, 0.08, true, 0.05),
     row(RELAX_ARRHENIUS, 0.08, true, 0.05),
   ];
