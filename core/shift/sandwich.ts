@@ -110,42 +110,42 @@ export class SandwichSink {
       if (!groups.has(gk)) groups.set(gk, []);
       groups.get(gk)!.push({ partner, h, v: this.bv.get(key) ?? null });
     }
-    const idx: number[] = [];
-    const val: number[] = [];
+    const idx = new Int32Array(2 * size + 2);
+    const val = new Float64Array(2 * size + 2);
     for (const [gk, slots] of groups) {
       const d = gk % this.nd;
       const curve = (gk - d) / this.nd;
       const w = this.p.curves[curve][d].w;
       for (let e = 0; e < w.length; e++) {
-        idx.length = 0;
-        val.length = 0;
+        let len = 0;
         let selfH = 0;
         let selfV = 0;
-        for (const s of slots) {
+        for (let q = 0; q < slots.length; q++) {
+          const s = slots[q];
           const bh = s.h[e];
           const bv = s.v ? s.v[e] : 0;
           if (bh === 0 && bv === 0) continue;
           selfH += bh;
-          idx.push(s.partner);
-          val.push(-bh);
+          idx[len] = s.partner;
+          val[len++] = -bh;
           if (s.v) {
             selfV += bv;
-            idx.push(n + s.partner);
-            val.push(-bv);
+            idx[len] = n + s.partner;
+            val[len++] = -bv;
           }
         }
-        if (idx.length === 0) continue;
-        idx.push(curve);
-        val.push(selfH);
+        if (len === 0) continue;
+        idx[len] = curve;
+        val[len++] = selfH;
         if (this.p.joint) {
-          idx.push(n + curve);
-          val.push(selfV);
+          idx[len] = n + curve;
+          val[len++] = selfV;
         }
         const inv = 1 / w[e];
-        for (let a = 0; a < idx.length; a++) {
+        for (let a = 0; a < len; a++) {
           const row = idx[a] * size;
           const va = val[a] * inv;
-          for (let b = 0; b < idx.length; b++) out[row + idx[b]] += va * val[b];
+          for (let b = 0; b < len; b++) out[row + idx[b]] += va * val[b];
         }
       }
     }
