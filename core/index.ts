@@ -1,2 +1,15 @@
-/** Thermoshift core: a pure TypeScript library (no DOM, no Node, no Electron). */
+/**
+ * Thermoshift core: a pure TypeScript library (no DOM, no Node, no Electron).
+ * The one entry point for scripts is `buildMasterCurve(dataset, options)` (core/pipeline), fed by
+ * `importFiles(files, options)` (core/io); the app and the `thermoshift` command call the same.
+ */
 export * from './data';
+export * from './units';
+export * from './io';
+export * from './shift';
+export * from './models';
+export * from './spectrum';
+export * from './pipeline';
+export * from './report';
+// Both models and pipeline name the kind of shift model; they are the same union.
+export type { ShiftModelKind } from './models';
