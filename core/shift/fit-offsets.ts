@@ -63,6 +63,8 @@ export interface OffsetFit {
   /** Per curve, point indices flagged as outliers. */
   outliers: Set<number>[];
   info: FitInfo;
+  /** Residual storage, reusable by follow-up fits on problems of the same size. */
+  buffer: ResidualBuffer;
   /** The solver set-up of the last pass, for linearised follow-up fits (checks). */
   prior: Float64Array | undefined;
   fixed: Uint8Array;
@@ -275,6 +277,7 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
     rms: stats.rms(),
     robustSigma: MAD_TO_SIGMA * medianAbs(stats.residuals),
     outliers,
+    buffer,
     prior,
     fixed,
     constraints,

@@ -92,6 +92,7 @@ function disagreement(
       fixed: fit.fixed,
       constraints: fit.constraints,
       prior: fit.prior,
+      buffer: fit.buffer,
       toleranceDecades: s.toleranceDecades,
     });
     const size = fit.theta.length;
