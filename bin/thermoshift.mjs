@@ -3,6 +3,14 @@
 // app; tsx compiles it on the fly so the repository runs without a separate build step.
 import { register } from 'tsx/esm/api';
 
+// `thermoshift … | head` closes the pipe early: that is the reader's choice, not an error.
+for (const stream of [process.stdout, process.stderr]) {
+  stream.on('error', (e) => {
+    if (e && e.code === 'EPIPE') process.exit(process.exitCode ?? 0);
+    throw e;
+  });
+}
+
 register();
 const { main } = await import('../app/cli/main.ts');
 process.exitCode = await main(process.argv.slice(2));
