@@ -9,6 +9,7 @@ export {
   defaultReferenceK,
   OptionsError,
   DEFAULT_MODELS,
+  DEFAULT_PRONY_MODES_PER_DECADE,
   type AnalysisOptions,
   type ResolvedAnalysisOptions,
 } from './options';

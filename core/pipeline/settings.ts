@@ -46,7 +46,7 @@ export const settingsSchema = z.strictObject({
   expansionPerK: z.number().min(0).max(0.01).optional(),
   /** @default ['wlf', 'arrhenius', 'polynomial'] */
   models: z.array(z.enum(['wlf', 'arrhenius', 'polynomial'])).optional(),
-  /** 0 skips the Prony fit. @default 1 */
+  /** 0 skips the Prony fit. @default 2 */
   pronyModesPerDecade: z.union([z.literal(0), z.literal(1), z.literal(2)]).optional(),
   /** Glass transition temperature (°C or with unit). */
   glassTransition: temperature.optional(),

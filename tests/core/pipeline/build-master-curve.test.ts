@@ -114,6 +114,32 @@ describe('buildMasterCurve()', () => {
     expect(a.prony!.rmsRelativeError!).toBeLessThan(0.03);
   });
 
+  it('buildMasterCurve() with default options fits a Prony series within 3 % RMS of the true G′ and of the true G″', () => {
+    // Known truth: the generator's own Prony model (core/synthetic), 2 % noise as in issue 4. The
+    // default of 2 modes per decade is what meets the target; 1 per decade misses G″ (~4.5–4.9 %).
+    const { dataset } = make();
+    const a = buildMasterCurve(dataset, { referenceTemperatureK: 373.15 });
+    expect(a.settings.pronyModesPerDecade).toBe(2);
+    const p = {
+      equilibriumModulusPa: a.prony!.equilibriumModulusPa,
+      tauS: a.prony!.tauS,
+      modulusPa: a.prony!.modulusPa,
+    };
+    const [lo, hi] = a.prony!.reducedWindow;
+    let storage = 0;
+    let loss = 0;
+    const n = 41;
+    for (let k = 0; k < n; k++) {
+      const w = lo * (hi / lo) ** (k / (n - 1));
+      storage += (pronyStorage(p, w) / pronyStorage(prony, w) - 1) ** 2;
+      loss += (pronyLoss(p, w) / pronyLoss(prony, w) - 1) ** 2;
+    }
+    expect(Math.sqrt(storage / n)).toBeLessThan(0.03); // issue 4 target: G′ within 3 % RMS
+    expect(Math.sqrt(loss / n)).toBeLessThan(0.03); // issue 4 target: G″ within 3 % RMS
+    // against the noisy data itself (2 % noise): 1 mode per decade gives 3.0 % here, 2 give 2.1 %
+    expect(a.prony!.rmsRelativeError!).toBeLessThan(0.03);
+  });
+
   it('buildMasterCurve() works on relaxation data (reduced time t/aT)', () => {
     // A plumbing check (relaxation data through every step), not the engine's accuracy test (that
     // is tests/core/shift): a broad spectrum keeps every isotherm in the transition, 0.5 % noise.

@@ -15,7 +15,7 @@ describe('resolveAnalysisOptions()', () => {
       verticalShift: 'none',
       density: null,
       models: DEFAULT_MODELS,
-      pronyModesPerDecade: 1,
+      pronyModesPerDecade: 2,
       glassTransitionK: null,
       excludedIsothermIds: [],
       maskedPoints: [],
