@@ -27,6 +27,7 @@ function stats(fit: ShiftFitCommon, ids: Map<number, string>): ModelFitStats {
   );
   const band = shiftModelBand(fit, grid);
   const finite = (v: number): number | null => (Number.isFinite(v) ? v : null);
+  const covarianceKnown = fit.covariance.every((row) => row.every(Number.isFinite));
   return {
     r2: finite(fit.rSquared),
     rmsResidualDecades: finite(fit.rmsResidual),
@@ -43,6 +44,16 @@ function stats(fit: ShiftFitCommon, ids: Map<number, string>): ModelFitStats {
       log10aT: band.map((b) => b.log10aT + 0),
       lower95: band.map((b) => b.lower95 + 0),
       upper95: band.map((b) => b.upper95 + 0),
+    },
+    spec: {
+      kind: fit.kind,
+      referenceK: fit.referenceK,
+      values: [...fit.values],
+      // plain JSON: an undeterminable covariance is left out rather than stored as NaN
+      ...(covarianceKnown && { covariance: fit.covariance.map((row) => [...row]) }),
+      tQuantile95: fit.tQuantile95,
+      fittedRangeK: [lo, hi],
+      ...(fit.glassTransitionK !== undefined && { glassTransitionK: fit.glassTransitionK }),
     },
   };
 }

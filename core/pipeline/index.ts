@@ -33,6 +33,15 @@ export {
 export { CONVENTIONS, conventionCommentLines } from './conventions';
 export { reduceToMasterCurve } from './reduce';
 export { PipelineError } from './errors';
+export {
+  predictFromAnalysis,
+  defaultPredictionModel,
+  PredictionError,
+  type AnalysisQuery,
+  type AnalysisPrediction,
+} from './predict-from-analysis';
+export { log10bTAt, type VerticalShiftAt } from './vertical-at';
+export { vanGurpPalmenSeries, type VanGurpPalmenSeries } from './van-gurp-palmen';
 export { THERMOSHIFT_VERSION } from './version';
 export { toCelsius } from './temperature';
 export type * from './types';

@@ -8,6 +8,7 @@
  * bT = Tref·ρref/(T·ρ(T)), bT(Tref) = 1.
  */
 import type { AbscissaKind, Dataset, DeformationMode, QuantityId, TestKind } from '../data/types';
+import type { ShiftModelSpec } from '../models/types';
 import type { ResolvedAnalysisOptions } from './options';
 
 /** A problem found while analysing, shown to users; file/row/column when it concerns lab data. */
@@ -80,6 +81,13 @@ export interface ModelFitStats {
   fittedRangeK: [number, number];
   converged: boolean;
   band: ModelBand;
+  /**
+   * The model as core/models evaluates it (`shiftModelBand`, core/spectrum `predictQuantity`):
+   * parameter vector, covariance (omitted when it could not be determined), t quantile, fitted
+   * range and Tg. What `predictFromAnalysis` reads, so answers carry the 95 % range at any
+   * temperature without re-fitting.
+   */
+  spec: ShiftModelSpec;
 }
 
 /** WLF: log10 aT = −C1 (T − Tr)/(C2 + T − Tr) (Williams, Landel & Ferry 1955). */

@@ -10,6 +10,7 @@ import { pronyLoss, pronyRelaxation, pronyStorage } from '../spectrum/prony-mode
 import type { ChartSeries, ChartSpec, LegendEntry } from './svg/chart-types';
 import { temperatureColour } from './svg/colour';
 import { toCelsius } from '../pipeline/temperature';
+import { vanGurpPalmenSeries } from '../pipeline/van-gurp-palmen';
 import { outputUnitLabel, toOutputUnit, type ModulusUnit } from './output-units';
 
 const W = 640;
@@ -247,34 +248,14 @@ export function shiftFactorChart(a: Analysis): ChartSpec {
 export function vanGurpPalmenChart(a: Analysis, unit: ModulusUnit): ChartSpec | null {
   if (a.sample.testKind !== 'oscillatory') return null;
   const [lo, hi] = temperatureRange(a);
-  const bT = new Map(a.curves.map((c) => [c.isothermId, 10 ** (c.log10bT ?? 0)]));
-  const series: ChartSeries[] = [];
-  for (const iso of a.dataset.isotherms) {
-    const gp = iso.quantities.storageModulus;
-    const gpp = iso.quantities.lossModulus;
-    const gStar = iso.quantities.complexModulus;
-    const delta = iso.quantities.phaseAngle;
-    const x: number[] = [];
-    const y: number[] = [];
-    const b = bT.get(iso.id) ?? 1;
-    iso.x.forEach((_, i) => {
-      if (!iso.mask[i]) return;
-      const g = gp && gpp ? Math.hypot(gp[i], gpp[i]) : gStar?.[i];
-      const d = gp && gpp ? (Math.atan2(gpp[i], gp[i]) * 180) / Math.PI : delta?.[i];
-      if (g === undefined || d === undefined || !Number.isFinite(g) || !Number.isFinite(d)) return;
-      x.push(toOutputUnit('complexModulus', b * g, unit));
-      y.push(d);
-    });
-    if (x.length)
-      series.push({
-        name: iso.id,
-        x,
-        y,
-        colour: temperatureColour(iso.temperatureK, lo, hi),
-        line: 'none',
-        marker: 'disc',
-      });
-  }
+  const series: ChartSeries[] = vanGurpPalmenSeries(a).map((v) => ({
+    name: v.isothermId,
+    x: v.complexModulusPa.map((g) => toOutputUnit('complexModulus', g, unit)),
+    y: v.phaseAngleDeg,
+    colour: temperatureColour(v.temperatureK, lo, hi),
+    line: 'none',
+    marker: 'disc',
+  }));
   if (series.length === 0) return null;
   const sym = quantitySymbol('complexModulus', a.sample.deformation);
   return {

@@ -14,6 +14,8 @@ import { today, writeOutputs } from '../outputs.ts';
 import { toCliError } from '../error-map.ts';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
+import { parsePredictQuery } from '../predict-query.ts';
+import { predictionsText, runPredictions } from '../predictions.ts';
 
 interface BuildOptions extends SampleOptionValues {
   json?: boolean;
@@ -21,6 +23,7 @@ interface BuildOptions extends SampleOptionValues {
   force?: boolean;
   date?: string;
   quiet?: boolean;
+  predict?: string[];
 }
 
 export function printWarnings(a: Analysis, label = ''): void {
@@ -53,14 +56,22 @@ export function registerBuild(program: Command): void {
     )
     .option('--force', 'overwrite existing output files')
     .option('--date <YYYY-MM-DD>', 'date printed in the report (default: today)')
-    .option('--quiet', 'do not print warnings on stderr');
+    .option('--quiet', 'do not print warnings on stderr')
+    .option(
+      '--predict <query>',
+      'answer a design query, e.g. relaxation@60C,10y or storage@170C,1Hz (QUANTITY@TEMPERATURE,TIME|FREQUENCY[,MODEL]); repeatable',
+      (v: string, prev: string[] = []) => [...prev, v],
+    );
   addSampleOptions(cmd);
   cmd.action((files: string[], o: BuildOptions) => {
     try {
       const date = checkDate(o.date);
+      const queries = o.predict ?? [];
+      queries.forEach(parsePredictQuery); // a typo in a query fails before the analysis runs
       const settings = resolveSettings(o);
       const analysis = analyseSample(readInputs(files), settings, o.settings ?? 'command line');
       if (!o.quiet) printWarnings(analysis);
+      const predictions = runPredictions(analysis, queries);
       if (o.out) {
         const written = writeOutputs(analysis, o.out, {
           force: !!o.force,
@@ -69,8 +80,13 @@ export function registerBuild(program: Command): void {
         });
         if (!o.quiet) process.stderr.write(`wrote ${written.length} files to ${o.out}\n`);
       }
-      if (o.json) process.stdout.write(`${JSON.stringify(analysisSummary(analysis), null, 2)}\n`);
-      if (!o.json && !o.out) process.stdout.write(textSummary(analysis));
+      if (o.json) {
+        const summary = analysisSummary(analysis);
+        const out = predictions.length ? { ...summary, predictions } : summary;
+        process.stdout.write(`${JSON.stringify(out, null, 2)}\n`);
+      }
+      if (!o.json && !o.out && !predictions.length) process.stdout.write(textSummary(analysis));
+      if (!o.json && predictions.length) process.stdout.write(predictionsText(predictions));
     } catch (e) {
       throw toCliError(e);
     }

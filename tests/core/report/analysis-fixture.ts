@@ -94,6 +94,13 @@ export function fixtureAnalysis(kind: 'oscillatory' | 'relaxation' = 'oscillator
           lower95: mid.map((v) => v - 0.05),
           upper95: mid.map((v) => v + 0.05),
         },
+        // no covariance: the made-up band above is not the delta-method band of a real fit
+        spec: {
+          kind: 'wlf',
+          referenceK: FIXTURE_TRUTH.referenceK,
+          values: [FIXTURE_TRUTH.c1, FIXTURE_TRUTH.c2K],
+          fittedRangeK: [343.15, 403.15],
+        },
       },
       hint: { model: 'wlf', reason: 'fixture' },
     },

@@ -2,10 +2,12 @@
  * van Gurp–Palmen plot: phase angle δ against |G*| for every measured point, no horizontal shift
  * needed (van Gurp & Palmen, Rheology Bulletin 67, 1998). Isotherms on one line support
  * superposition; a fan of lines says it fails. With a vertical shift, |G*| is multiplied by bT.
+ * The points come from core (vanGurpPalmenSeries); this only styles them.
  */
 import { quantitySymbol } from '../../../../../core/data/quantities';
 import type { Analysis } from '../../../../../core/pipeline/types';
 import { toCelsius } from '../../../../../core/pipeline/temperature';
+import { vanGurpPalmenSeries } from '../../../../../core/pipeline/van-gurp-palmen';
 import { formatValue as formatNumber } from '../../tables/format-value';
 import type { PlotSeries, PlotSpec } from '../plot-spec';
 import { temperatureScale } from '../temperature-colours';
@@ -15,34 +17,14 @@ import { celsiusText } from './plot-labels';
 export function vgpPlot(a: Analysis): PlotSpec | null {
   if (a.sample.testKind !== 'oscillatory') return null;
   const scale = temperatureScale(a.dataset.isotherms.map((i) => i.temperatureK));
-  const bT = new Map(a.curves.map((c) => [c.isothermId, 10 ** (c.log10bT ?? 0)]));
-  const series: PlotSeries[] = [];
-  for (const iso of a.dataset.isotherms) {
-    const {
-      storageModulus: gp,
-      lossModulus: gpp,
-      complexModulus: gs,
-      phaseAngle: ph,
-    } = iso.quantities;
-    const b = bT.get(iso.id) ?? 1;
-    const points: PlotSeries['points'] = [];
-    iso.x.forEach((_, i) => {
-      if (!iso.mask[i]) return;
-      const g = gp && gpp ? Math.hypot(gp[i], gpp[i]) : gs?.[i];
-      const d = gp && gpp ? (Math.atan2(gpp[i], gp[i]) * 180) / Math.PI : ph?.[i];
-      if (g !== undefined && d !== undefined && g > 0 && Number.isFinite(d))
-        points.push({ x: b * g, y: d });
-    });
-    if (points.length)
-      series.push({
-        id: `${iso.id}:vgp`,
-        label: celsiusText(iso.temperatureK),
-        colour: scale.colour(iso.temperatureK),
-        style: 'disc',
-        isothermId: iso.id,
-        points,
-      });
-  }
+  const series: PlotSeries[] = vanGurpPalmenSeries(a).map((v) => ({
+    id: `${v.isothermId}:vgp`,
+    label: celsiusText(v.temperatureK),
+    colour: scale.colour(v.temperatureK),
+    style: 'disc',
+    isothermId: v.isothermId,
+    points: v.complexModulusPa.map((g, i) => ({ x: g, y: v.phaseAngleDeg[i] })),
+  }));
   if (!series.length) return null;
   const sym = quantitySymbol('complexModulus', a.sample.deformation);
   const prefix = a.settings.verticalShift === 'none' ? '' : 'bT·';
