@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import Papa from 'papaparse';
 import { runCli, tempDir, writeSyntheticSample } from './cli-helpers';
 import { EXIT } from '../../app/cli/exit-codes';
-import { OUTPUT_FILES } from '../../app/cli/outputs';
+import { OUTPUT_FILES } from '../../core/report/output-files';
 import { BATCH_INDEX_COLUMNS } from '../../core/report/csv';
 
 describe('thermoshift batch', () => {

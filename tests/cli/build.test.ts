@@ -5,7 +5,7 @@ import Papa from 'papaparse';
 import { runCli, tempDir, writeSyntheticSample, SYNTHETIC_WLF } from './cli-helpers';
 import type { AnalysisSummary } from '../../core/pipeline/summary';
 import { EXIT } from '../../app/cli/exit-codes';
-import { OUTPUT_FILES } from '../../app/cli/outputs';
+import { OUTPUT_FILES } from '../../core/report/output-files';
 import { expectAbsClose, expectRelClose } from '../helpers/assert-close';
 
 interface Truth {

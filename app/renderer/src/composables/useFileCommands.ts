@@ -12,7 +12,8 @@ import {
   parseAnalysis,
   serializeAnalysis,
 } from '../document/analysis-file';
-import { exportFiles, fileStem, type ExportFile } from '../exports/export-files';
+import { fileStem } from '../exports/export-files';
+import { OUTPUT_FILE_SPECS, type OutputFileSpec } from '../../../../core/report/output-files';
 import type { FileAccess, RecentEntry, TextFile } from '../platform/file-access';
 import type { UseImportSessionReturn } from './useImportSession';
 import type { UseWorkbenchReturn } from './useWorkbench';
@@ -29,10 +30,11 @@ export interface UseFileCommandsReturn {
   openDropped(files: TextFile[]): Promise<void>;
   acceptImport(): void;
   save(): Promise<void>;
-  exportOne(file: ExportFile): Promise<void>;
+  exportOne(file: OutputFileSpec): Promise<void>;
   exportAll(): Promise<void>;
   saveExport(name: string, content: string, encoding: 'utf8' | 'base64'): Promise<void>;
-  exportList(): ExportFile[];
+  /** The files the export menu offers (none without an analysis). */
+  exportList(): readonly OutputFileSpec[];
 }
 
 const looksLikeAnalysis = (f: TextFile): boolean =>
@@ -67,12 +69,14 @@ export function useFileCommands(
       recent.value = await access.listRecent();
     });
 
-  async function exportOne(file: ExportFile): Promise<void> {
+  async function exportOne(file: OutputFileSpec): Promise<void> {
     await guard('Export', async () => {
-      const text = file.make();
+      const a = analysis.value;
+      if (!a) return;
+      const text = file.build(a, { date: today() });
       if (text === null)
         return notify(`${file.label}: nothing to export for this analysis.`, 'error');
-      const stem = fileStem(analysis.value?.sample.name ?? 'thermoshift');
+      const stem = fileStem(a.sample.name);
       const written = await access.saveFile({
         suggestedName: `${stem}-${file.name}`,
         content: text,
@@ -138,10 +142,9 @@ export function useFileCommands(
     },
     exportOne,
     async exportAll() {
-      const a = analysis.value;
-      if (!a) return;
-      for (const f of exportFiles(a, today())) await exportOne(f);
+      if (!analysis.value) return;
+      for (const f of OUTPUT_FILE_SPECS) await exportOne(f);
     },
-    exportList: () => (analysis.value ? exportFiles(analysis.value, today()) : []),
+    exportList: () => (analysis.value ? OUTPUT_FILE_SPECS : []),
   };
 }
