@@ -4,51 +4,23 @@
  * `runBatch`, the very function behind `thermoshift batch`: import, shifts, models, Prony series,
  * indicators, and every output file including the HTML report. Prints total and per-sample time.
  */
-import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { smoothProny, syntheticIsotherms } from '../core/synthetic/index.ts';
+import { syntheticWlfComponent, writeSyntheticSample } from '../tests/cli/cli-helpers.ts';
 import { runBatch, listSamples } from '../app/cli/commands/batch.ts';
 import { analyseSample } from '../app/cli/run-sample.ts';
 import { readInputs } from '../app/cli/io/read-inputs.ts';
 
 const SAMPLES = 100;
 
+/** One invented sample: the CLI tests' synthetic files, WLF C1 varied with the seed. */
 function writeSample(dir: string, seed: number): void {
-  const { dataset } = syntheticIsotherms({
-    testKind: 'oscillatory',
-    deformation: 'shear',
-    referenceK: 373.15,
-    temperaturesK: Array.from({ length: 9 }, (_, i) => 343.15 + 10 * i),
-    components: [
-      {
-        prony: smoothProny({
-          tauMinS: 1e-6,
-          tauMaxS: 1e4,
-          modesPerDecade: 2,
-          glassyModulusPa: 1e9,
-          equilibriumModulusPa: 1e6,
-        }),
-        law: { kind: 'wlf', c1: 8.86 + (seed % 5) * 0.2, c2K: 101.6 },
-      },
-    ],
-    xMin: 0.1,
-    xMax: 100,
-    pointsPerDecade: 5,
-    relativeNoise: 0.02,
-    seed,
-  });
-  mkdirSync(dir, { recursive: true });
-  for (const iso of dataset.isotherms) {
-    const c = Math.round((iso.temperatureK - 273.15) * 100) / 100;
-    const rows = iso.x.map(
-      (w, i) => `${w},${iso.quantities.storageModulus![i]},${iso.quantities.lossModulus![i]}`,
-    );
-    writeFileSync(
-      join(dir, `iso_${c}C.csv`),
-      `omega (rad/s),G' (Pa),G'' (Pa)\n${rows.join('\n')}\n`,
-    );
-  }
+  writeSyntheticSample(
+    dir,
+    { seed, components: [syntheticWlfComponent(8.86 + (seed % 5) * 0.2)] },
+    { named: false },
+  );
 }
 
 export async function run(): Promise<void> {

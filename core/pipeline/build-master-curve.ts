@@ -14,7 +14,7 @@ import { reduceToMasterCurve } from './reduce';
 import { runSpectrum } from './run-spectrum';
 import { PipelineError } from './errors';
 import { THERMOSHIFT_VERSION } from './version';
-import type { Analysis, AnalysisWarning } from './types';
+import type { Analysis, AnalysisSample, AnalysisWarning } from './types';
 
 /**
  * Builds the master curve of one sample.
@@ -66,14 +66,7 @@ export function buildMasterCurve(dataset: Dataset, options: AnalysisOptions = {}
   progress(1, 'done');
   return {
     version: THERMOSHIFT_VERSION,
-    sample: {
-      name: dataset.name,
-      testKind: dataset.testKind,
-      deformation: dataset.deformation,
-      abscissa: dataset.abscissa,
-      files: [...dataset.files],
-      metadata: { ...dataset.metadata },
-    },
+    sample: sampleOf(dataset),
     settings,
     referenceTemperatureK: settings.referenceTemperatureK,
     dataset: data,
@@ -85,5 +78,17 @@ export function buildMasterCurve(dataset: Dataset, options: AnalysisOptions = {}
     prony,
     indicators,
     warnings,
+  };
+}
+
+/** What an analysis says about its sample: name, kind of test, files and metadata (copied). */
+export function sampleOf(dataset: Dataset): AnalysisSample {
+  return {
+    name: dataset.name,
+    testKind: dataset.testKind,
+    deformation: dataset.deformation,
+    abscissa: dataset.abscissa,
+    files: [...dataset.files],
+    metadata: { ...dataset.metadata },
   };
 }

@@ -2,7 +2,7 @@
  * The single entry point of the Thermoshift core (`buildMasterCurve`) and what goes with it: the
  * options and settings schemas, the stable JSON summary, and the conventions stated everywhere.
  */
-export { buildMasterCurve } from './build-master-curve';
+export { buildMasterCurve, sampleOf } from './build-master-curve';
 export {
   analysisOptionsSchema,
   resolveAnalysisOptions,

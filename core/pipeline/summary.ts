@@ -3,26 +3,17 @@
  * Keys are documented in docs/cli.md; add keys, never rename or remove them.
  * Temperatures in °C unless the key ends in K; log quantities in decades.
  */
-import type { Analysis, AnalysisWarning, ModelFitStats } from './types';
+import type { Analysis, AnalysisCurve, AnalysisWarning, ModelFitStats } from './types';
 import type { ResolvedAnalysisOptions } from './options';
 import { CONVENTIONS } from './conventions';
 import { toCelsius } from './temperature';
 
 export const SUMMARY_SCHEMA = 'thermoshift-summary/1';
 
-export interface SummaryCurve {
-  isothermId: string;
+/** An isotherm's shift in the summary: the analysis' curve plus its temperature in °C. */
+export interface SummaryCurve extends AnalysisCurve {
   /** °C */
   temperature: number;
-  temperatureK: number;
-  log10aT: number | null;
-  log10aTStdErr: number | null;
-  log10bT: number | null;
-  log10bTStdErr: number | null;
-  included: boolean;
-  /** RMS residual against the master curve, decades. */
-  qualityRmsDecades: number | null;
-  note?: string;
 }
 
 interface SummaryFit {

@@ -9,6 +9,7 @@
  */
 import type { AbscissaKind, Dataset, DeformationMode, QuantityId, TestKind } from '../data/types';
 import type { ShiftModelSpec } from '../models/types';
+import type { CurveShift } from '../shift/types';
 import type { ResolvedAnalysisOptions } from './options';
 
 /** A problem found while analysing, shown to users; file/row/column when it concerns lab data. */
@@ -26,21 +27,16 @@ export interface AnalysisWarning {
   isothermId?: string;
 }
 
-/** The shift of one isotherm. */
-export interface AnalysisCurve {
+/**
+ * The shift of one isotherm: the shift engine's figures (core/shift `CurveShift`: temperature,
+ * log10 aT and log10 bT with standard errors, null when undetermined, and whether the isotherm
+ * is part of the master curve) under the isotherm's id, with its quality and a note.
+ */
+export interface AnalysisCurve extends Pick<
+  CurveShift,
+  'temperatureK' | 'log10aT' | 'log10aTStdErr' | 'log10bT' | 'log10bTStdErr' | 'included'
+> {
   isothermId: string;
-  /** Mean measured temperature, K. */
-  temperatureK: number;
-  /** log10 aT (decades); `null` when it could not be determined (e.g. no overlap). */
-  log10aT: number | null;
-  /** Standard error of log10 aT, decades. */
-  log10aTStdErr: number | null;
-  /** log10 bT (decades), 0 without a vertical shift. */
-  log10bT: number | null;
-  /** Standard error of log10 bT, decades (0 when bT is computed, not estimated). */
-  log10bTStdErr: number | null;
-  /** True when the isotherm is part of the master curve. */
-  included: boolean;
   /** RMS residual of the isotherm against the master curve, decades. */
   qualityRmsDecades: number | null;
   /** Why the isotherm is not included, or how its shift was set. */

@@ -40,22 +40,12 @@ export function batchIndexCsv(rows: BatchIndexRow[], version: string): string {
     ],
     [...BATCH_INDEX_COLUMNS],
     rows.map((r) => {
+      // a failed sample: name, status, blank figures, the error and the folder
       if (!r.result.ok)
         return [
           r.sample,
           'failed',
-          '',
-          '',
-          '',
-          '',
-          '',
-          '',
-          '',
-          '',
-          '',
-          '',
-          '',
-          '',
+          ...Array<string>(BATCH_INDEX_COLUMNS.length - 4).fill(''),
           r.result.error,
           r.folder,
         ];

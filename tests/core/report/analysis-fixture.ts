@@ -9,6 +9,7 @@ import { wlfLog10aT } from '../../../core/models/shift-laws';
 import { resolveAnalysisOptions } from '../../../core/pipeline/options';
 import { reduceToMasterCurve } from '../../../core/pipeline/reduce';
 import { THERMOSHIFT_VERSION } from '../../../core/pipeline/version';
+import { sampleOf } from '../../../core/pipeline/build-master-curve';
 import type { Analysis, AnalysisCurve } from '../../../core/pipeline/types';
 import { pronyInstantaneous } from '../../../core/spectrum/prony-model';
 
@@ -57,11 +58,7 @@ export function fixtureAnalysis(kind: 'oscillatory' | 'relaxation' = 'oscillator
   return {
     version: THERMOSHIFT_VERSION,
     sample: {
-      name: dataset.name,
-      testKind: dataset.testKind,
-      deformation: dataset.deformation,
-      abscissa: dataset.abscissa,
-      files: dataset.files,
+      ...sampleOf(dataset),
       metadata: { ...dataset.metadata, supplier: 'Invented Resins <Ltd> & Co' },
     },
     settings,
