@@ -11,7 +11,8 @@ import { ResidualBuffer } from './residual-buffer';
 import type { ReferenceWeights } from './reference';
 import { referenceWeights } from './reference';
 import { HUBER_K, MAD_TO_SIGMA, medianAbs } from './robust';
-import type { LinearConstraint } from './solve';
+import type { LinearConstraint, SolveSettings } from './solve';
+import { offsetCovariance } from './covariance';
 import { solveOffsets } from './solve';
 import { startingOffsets } from './start';
 import { StatsSink } from './stats-sink';
@@ -60,6 +61,8 @@ export interface OffsetFit {
   rms: number;
   /** Robust (MAD) spread of the final residuals, decades. */
   robustSigma: number;
+  /** Weighted residual variance of the last pass (the s² of the standard errors), decades². */
+  residualVariance: number;
   /** Per curve, point indices flagged as outliers. */
   outliers: Set<number>[];
   info: FitInfo;
@@ -204,12 +207,11 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
   if (prior)
     for (let k = 0; k < n; k++)
       prior[n + k] = 1 / (JOINT_BT_PRIOR_DECADES * JOINT_BT_PRIOR_DECADES);
-  let usedScale = input.scale ?? MIN_SCALE_DECADES;
-  const runPass = (t: Float64Array) => {
+  let settings: SolveSettings | null = null;
+  const runPass = (t: Float64Array, covariance: boolean) => {
     const pre = new StatsSink(problem).consume(residualsAt(problem, t, buffer));
     const scale = input.scale ?? robustScale(input.loss, pre.residuals);
-    usedScale = scale;
-    return solveOffsets(problem, t, {
+    settings = {
       prior,
       loss: input.loss,
       scale,
@@ -218,12 +220,16 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
       constraints,
       toleranceDecades: input.toleranceDecades,
       buffer,
-    });
+      covariance,
+    };
+    return solveOffsets(problem, t, settings);
   };
-  let outcome = runPass(theta);
+  // A first pass that outlier flagging may follow leaves the (costly) covariance for later.
+  const mayRefit = input.flagOutliers && incFinal.length > 1;
+  let outcome = runPass(theta, !mayRefit);
   let iterations = outcome.iterations;
   let passes = 1;
-  if (input.flagOutliers && incFinal.length > 1) {
+  if (mayRefit) {
     const stats = new StatsSink(problem).consume(residualsAt(problem, outcome.theta, buffer));
     const sigma = MAD_TO_SIGMA * medianAbs(stats.residuals);
     // Points within OUTLIER_FLOOR_DECADES·threshold of the others are never flagged: on very clean
@@ -242,10 +248,17 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
         }
       }),
     );
-    if (flagged === 0) finalStats = stats;
-    if (flagged > 0) {
+    if (flagged === 0) {
+      finalStats = stats;
+      outcome.covariance = offsetCovariance(
+        problem,
+        outcome.theta,
+        settings!,
+        outcome.residualVariance,
+      );
+    } else {
       problem = restrict(input.build(outliers));
-      outcome = runPass(outcome.theta);
+      outcome = runPass(outcome.theta, true);
       iterations += outcome.iterations;
       passes = 2;
     }
@@ -276,12 +289,13 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
     curveRms,
     rms: stats.rms(),
     robustSigma: MAD_TO_SIGMA * medianAbs(stats.residuals),
+    residualVariance: outcome.residualVariance,
     outliers,
     buffer,
     prior,
     fixed,
     constraints,
-    scale: usedScale,
+    scale: settings!.scale,
     info: {
       converged: outcome.converged,
       iterations,

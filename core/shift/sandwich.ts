@@ -61,41 +61,64 @@ export class SandwichSink {
       knot: KN,
       lam: LAM,
     } = buf;
+    const n = this.n;
+    const nd = this.nd;
+    const code = this.code;
+    const scale = this.scale;
+    const joint = this.p.joint;
+    // Residuals come in runs of one (owner, other, driver): look their slots up once per run.
+    let runKey = -1;
+    let ownH: Float64Array = new Float64Array(0);
+    let othH = ownH;
+    let ownV: Float64Array | null = null;
+    let othV: Float64Array | null = null;
+    let beta = 0;
     for (let m = 0; m < buf.size; m++) {
-      const r = R[m];
-      const w = W[m];
       const owner = OW[m];
       const other = OT[m];
       const d = DR[m];
+      const key = (owner * n + other) * nd + d;
+      if (key !== runKey) {
+        runKey = key;
+        ownH = this.slot(this.bh, owner, other, d);
+        othH = this.slot(this.bh, other, owner, d);
+        beta = this.p.beta[d];
+        const withV = joint && beta !== 0;
+        ownV = withV ? this.slot(this.bv, owner, other, d) : null;
+        othV = withV ? this.slot(this.bv, other, owner, d) : null;
+      }
+      const r = R[m];
+      const w = W[m];
       const e = EN[m];
       const k = KN[m];
       const lam = LAM[m];
-      const wt = w * robustWeight(this.code, r * Math.sqrt(w), this.scale);
+      const wt = w * robustWeight(code, r * Math.sqrt(w), scale);
       // Score contribution wt·r·∇r with ∇r = g (u_owner − u_other) [+ β (v_owner − v_other)].
       // r = e_owner − (1 − λ) e_k − λ e_k+1 + …; a knot of `other` enters with the opposite sign,
       // and (u_owner − u_other) = −(u_other − u_owner), so both knots get +coef in their own frame.
       const ch = wt * G[m];
-      this.slot(this.bh, owner, other, d)[e] += ch;
-      const oh = this.slot(this.bh, other, owner, d);
-      oh[k] += ch * (1 - lam);
-      oh[k + 1] += ch * lam;
-      const beta = this.p.beta[d];
-      if (this.p.joint && beta !== 0) {
+      ownH[e] += ch;
+      othH[k] += ch * (1 - lam);
+      othH[k + 1] += ch * lam;
+      if (ownV && othV) {
         const cv = wt * beta;
-        this.slot(this.bv, owner, other, d)[e] += cv;
-        const ov = this.slot(this.bv, other, owner, d);
-        ov[k] += cv * (1 - lam);
-        ov[k + 1] += cv * lam;
+        ownV[e] += cv;
+        othV[k] += cv * (1 - lam);
+        othV[k + 1] += cv * lam;
       }
     }
     return this;
   }
 
-  /** Σ_p c_p c_pᵀ / n_p over the full parameter vector (size × size, row-major). */
-  meat(): Float64Array {
+  /**
+   * Calls `visit(len, idx, val, invCount)` once per measured entry with its score vector c_p in
+   * sparse form (parameter indices idx[0..len), coefficients val[0..len)) and 1/n_p.
+   */
+  private forEachPoint(
+    visit: (len: number, idx: Int32Array, val: Float64Array, invCount: number) => void,
+  ): void {
     const n = this.n;
     const size = this.p.joint ? 2 * n : n;
-    const out = new Float64Array(size * size);
     // Group the slots by (curve, driver) so each point's vector is assembled once.
     const groups = new Map<
       number,
@@ -141,14 +164,36 @@ export class SandwichSink {
           idx[len] = n + curve;
           val[len++] = selfV;
         }
-        const inv = 1 / w[e];
-        for (let a = 0; a < len; a++) {
-          const row = idx[a] * size;
-          const va = val[a] * inv;
-          for (let b = 0; b < len; b++) out[row + idx[b]] += va * val[b];
-        }
+        visit(len, idx, val, 1 / w[e]);
       }
     }
+  }
+
+  /** Σ_p c_p c_pᵀ / n_p over the full parameter vector (size × size, row-major). */
+  meat(): Float64Array {
+    const size = this.p.joint ? 2 * this.n : this.n;
+    const out = new Float64Array(size * size);
+    this.forEachPoint((len, idx, val, inv) => {
+      for (let a = 0; a < len; a++) {
+        const row = idx[a] * size;
+        const va = val[a] * inv;
+        for (let b = 0; b < len; b++) out[row + idx[b]] += va * val[b];
+      }
+    });
     return out;
+  }
+
+  /**
+   * vᵀ·(Σ_p c_p c_pᵀ / n_p)·v without forming the matrix: Σ_p (c_p·v)² / n_p. Enough for the
+   * variance of one linear combination of the offsets (e.g. one shift), at a fraction of the cost.
+   */
+  quadraticForm(v: ArrayLike<number>): number {
+    let sum = 0;
+    this.forEachPoint((len, idx, val, inv) => {
+      let dot = 0;
+      for (let a = 0; a < len; a++) dot += val[a] * v[idx[a]];
+      sum += dot * dot * inv;
+    });
+    return sum;
   }
 }

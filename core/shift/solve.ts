@@ -1,29 +1,23 @@
 /**
  * Joint refinement of all offsets: Levenberg–Marquardt on the IRLS normal equations (Marquardt,
  * J. SIAM 11, 1963), with fixed (locked) parameters removed and linear equality constraints
- * (the reference: aT(Tref) = 1, bT(Tref) = 1) kept exactly through the KKT system
- *   [A + λ·diag(A)  Cᵀ] [δ]   [−g       ]
- *   [C              0 ] [μ] = [rhs − Cθ ]
- * (Nocedal & Wright, Numerical Optimization, 2nd ed. 2006, §16.1). The covariance of the offsets is
- * s²·(top-left block of the inverse KKT matrix without damping), s² the weighted residual variance:
- * the curvature of the objective at the optimum, so errors are relative to the constraints, i.e. to
- * the reference temperature.
+ * (the reference: aT(Tref) = 1, bT(Tref) = 1) kept exactly through the KKT system (kkt.ts). The
+ * covariance of the offsets is s²·M B M, M the top-left block of the inverse KKT matrix without
+ * damping (the curvature of the objective at the optimum), B the propagated point noise
+ * (sandwich.ts) and s² the weighted residual variance; errors are relative to the constraints,
+ * i.e. to the reference temperature.
  */
 import type { FitProblem } from './problem';
 import { parameterCount } from './problem';
-import { residualsAt } from './residuals';
-import { ResidualBuffer } from './residual-buffer';
-import { luFactor, luInverse, luSolve } from './linear-solve';
-import { NormalSink } from './normal-equations';
+import type { ResidualBuffer } from './residual-buffer';
+import { offsetCovariance } from './covariance';
+import type { LinearConstraint } from './kkt';
+import { addPrior, kktStep, projectOntoConstraints } from './kkt';
+import type { NormalSink } from './normal-equations';
 import { normalAt } from './normal-walk';
-import { SandwichSink } from './sandwich';
 import type { RobustLoss } from './types';
 
-export interface LinearConstraint {
-  /** Coefficients over the full parameter vector. */
-  coef: Float64Array;
-  rhs: number;
-}
+export type { LinearConstraint } from './kkt';
 
 export interface SolveSettings {
   loss: RobustLoss;
@@ -41,6 +35,11 @@ export interface SolveSettings {
   prior?: Float64Array;
   /** Reused residual storage (optional). */
   buffer?: ResidualBuffer;
+  /**
+   * Compute the covariance at the optimum (the costly part: a sandwich over every residual).
+   * Off for a pass that is followed by another one. @default true
+   */
+  covariance?: boolean;
 }
 
 export interface SolveOutcome {
@@ -48,7 +47,10 @@ export interface SolveOutcome {
   converged: boolean;
   iterations: number;
   reason: string;
-  /** Covariance over the full parameter vector (zeros for fixed ones); null if singular. */
+  /**
+   * Covariance over the full parameter vector (zeros for fixed ones); null if singular or not
+   * asked for (see offsetCovariance()).
+   */
   covariance: Float64Array | null;
   /** Weighted residual variance, decades². */
   residualVariance: number;
@@ -76,7 +78,6 @@ export function solveOffsets(
   const cons = s.constraints.filter((c) => free.some((i) => c.coef[i] !== 0));
   const nc = cons.length;
   projectOntoConstraints(theta, free, cons);
-  const buf = s.buffer ?? new ResidualBuffer();
   const evaluate = (t: Float64Array, matrix: boolean): NormalSink => {
     return addPrior(normalAt(p, t, s.loss, s.scale, matrix), t, s.prior, s.scale);
   };
@@ -147,165 +148,14 @@ export function solveOffsets(
   }
   const dof = Math.max(1, cur.count - m + nc);
   const residualVariance = cur.weightedSquares / dof;
-  // Covariance with noise-damped slopes (see FitProblem.smoothSlopes).
-  const smooth: FitProblem = { ...p, smoothSlopes: true };
-  residualsAt(smooth, theta, buf);
-  const bread = addPrior(
-    new NormalSink(smooth, s.loss, s.scale, true).consume(buf),
-    theta,
-    s.prior,
-    s.scale,
-  );
-  const sandwich = new SandwichSink(smooth, s.loss, s.scale).consume(buf);
-  const covariance = covarianceOf(bread, free, cons, residualVariance, sandwich.meat());
   return {
     theta,
     converged,
     iterations,
     reason,
-    covariance,
+    covariance: s.covariance === false ? null : offsetCovariance(p, theta, s, residualVariance),
     residualVariance,
     residualCount: cur.count,
     objective: cur.objective(),
   };
-}
-
-function addPrior(
-  sink: NormalSink,
-  theta: ArrayLike<number>,
-  prior: Float64Array | undefined,
-  scale: number,
-): NormalSink {
-  if (!prior) return sink;
-  const c2 = scale * scale;
-  for (let i = 0; i < prior.length; i++) {
-    if (prior[i] === 0) continue;
-    const k = c2 * prior[i];
-    sink.lossSum += 0.5 * k * theta[i] * theta[i];
-    if (sink.withMatrix) {
-      sink.a[i * sink.size + i] += k;
-      sink.g[i] += k * theta[i];
-    }
-  }
-  return sink;
-}
-
-/** Smallest change of the free parameters that satisfies the constraints. */
-function projectOntoConstraints(
-  theta: Float64Array,
-  free: number[],
-  cons: LinearConstraint[],
-): void {
-  const nc = cons.length;
-  if (nc === 0) return;
-  const cct = new Float64Array(nc * nc);
-  const viol = new Float64Array(nc);
-  for (let a = 0; a < nc; a++) {
-    let v = cons[a].rhs;
-    for (let i = 0; i < theta.length; i++) v -= cons[a].coef[i] * theta[i];
-    viol[a] = v;
-    for (let b = 0; b < nc; b++) {
-      let sum = 0;
-      for (const i of free) sum += cons[a].coef[i] * cons[b].coef[i];
-      cct[a * nc + b] = sum;
-    }
-  }
-  const f = luFactor(cct, nc);
-  if (f.singular) return;
-  const mu = luSolve(f, viol);
-  for (const i of free) {
-    let d = 0;
-    for (let a = 0; a < nc; a++) d += cons[a].coef[i] * mu[a];
-    theta[i] += d;
-  }
-}
-
-/** KKT matrix (row-major, (m + nc)²) with Marquardt damping λ·diag(A). */
-function kktMatrix(
-  sink: NormalSink,
-  free: number[],
-  cons: LinearConstraint[],
-  lambda: number,
-): Float64Array {
-  const m = free.length;
-  const nc = cons.length;
-  const n = m + nc;
-  const size = sink.size;
-  const k = new Float64Array(n * n);
-  let meanDiag = 0;
-  for (const i of free) meanDiag += sink.a[i * size + i];
-  meanDiag = m > 0 ? meanDiag / m : 0;
-  // A parameter without any residual keeps a tiny diagonal so the system stays solvable.
-  const floor = 1e-9 * meanDiag + 1e-12;
-  for (let u = 0; u < m; u++) {
-    const row = free[u] * size;
-    for (let v = 0; v < m; v++) k[u * n + v] = sink.a[row + free[v]];
-    const d = Math.max(sink.a[row + free[u]], floor);
-    k[u * n + u] = d * (1 + lambda);
-  }
-  for (let a = 0; a < nc; a++)
-    for (let u = 0; u < m; u++) {
-      const c = cons[a].coef[free[u]];
-      k[(m + a) * n + u] = c;
-      k[u * n + m + a] = c;
-    }
-  return k;
-}
-
-function kktStep(
-  sink: NormalSink,
-  free: number[],
-  cons: LinearConstraint[],
-  theta: Float64Array,
-  lambda: number,
-): Float64Array | null {
-  const m = free.length;
-  const nc = cons.length;
-  const f = luFactor(kktMatrix(sink, free, cons, lambda), m + nc);
-  if (f.singular) return null;
-  const b = new Float64Array(m + nc);
-  for (let u = 0; u < m; u++) b[u] = -sink.g[free[u]];
-  for (let a = 0; a < nc; a++) {
-    let v = cons[a].rhs;
-    for (let i = 0; i < theta.length; i++) v -= cons[a].coef[i] * theta[i];
-    b[m + a] = v;
-  }
-  const x = luSolve(f, b);
-  const out = x.subarray(0, m);
-  for (let u = 0; u < m; u++) if (!Number.isFinite(out[u])) return null;
-  return out;
-}
-
-function covarianceOf(
-  sink: NormalSink,
-  free: number[],
-  cons: LinearConstraint[],
-  s2: number,
-  meat: Float64Array,
-): Float64Array | null {
-  const size = sink.size;
-  const m = free.length;
-  const n = m + cons.length;
-  const cov = new Float64Array(size * size);
-  if (m === 0) return cov;
-  const f = luFactor(kktMatrix(sink, free, cons, 0), n);
-  if (f.singular) return null;
-  const inv = luInverse(f);
-  // Cov = σ²·M B M (sandwich), M = top-left m×m block of the inverse (symmetric).
-  const mb = new Float64Array(m * m);
-  for (let u = 0; u < m; u++)
-    for (let w = 0; w < m; w++) {
-      const muw = inv[u * n + w];
-      if (muw === 0) continue;
-      const row = free[w] * size;
-      for (let v = 0; v < m; v++) mb[u * m + v] += muw * meat[row + free[v]];
-    }
-  for (let u = 0; u < m; u++)
-    for (let v = u; v < m; v++) {
-      let sum = 0;
-      for (let w = 0; w < m; w++) sum += mb[u * m + w] * inv[w * n + v];
-      cov[free[u] * size + free[v]] = s2 * sum;
-      cov[free[v] * size + free[u]] = s2 * sum;
-    }
-  return cov;
 }
