@@ -49,7 +49,7 @@ export function buildMasterCurve(dataset: Dataset, options: AnalysisOptions = {}
   const data = applyMasks(dataset, settings.maskedPoints, warnings);
 
   progress(0.05, 'shift');
-  const { result, curves } = runShift(data, settings);
+  const { result, curves } = runShift(data, settings, options.warmStartLog10aT);
   for (const w of result.warnings) warnings.push({ code: w.code, message: w.message });
   const masterCurve = reduceToMasterCurve(
     data,

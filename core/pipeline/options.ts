@@ -60,6 +60,12 @@ export type AnalysisOptions = z.input<typeof analysisOptionsSchema> & {
   onProgress?: (fraction: number, stage: string) => void;
   /** Warnings from the import, carried into the analysis's warnings. Not part of the settings. */
   importWarnings?: readonly DataWarning[];
+  /**
+   * Warm start: log10 aT per isotherm id to start the shift engine from (e.g. the previous
+   * result while a curve is dragged); with every active isotherm given, the initial scan is
+   * skipped. Changes the speed, not the optimum it converges to. Not part of the settings.
+   */
+  warmStartLog10aT?: Readonly<Record<string, number>>;
 };
 
 /** The options with every default applied: what the analysis really used. */
@@ -115,7 +121,12 @@ export function resolveAnalysisOptions(
   options: AnalysisOptions,
   measuredTemperaturesK: readonly number[],
 ): ResolvedAnalysisOptions {
-  const { onProgress: _progress, importWarnings: _warnings, ...rest } = options;
+  const {
+    onProgress: _progress,
+    importWarnings: _warnings,
+    warmStartLog10aT: _warmStart,
+    ...rest
+  } = options;
   const parsed = analysisOptionsSchema.safeParse(rest);
   if (!parsed.success) {
     const { key, text } = describeIssue(parsed.error.issues[0]);

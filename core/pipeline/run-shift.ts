@@ -46,8 +46,12 @@ function noteOf(c: ShiftResult['curves'][number]): string | undefined {
 export function runShift(
   dataset: Dataset,
   s: ResolvedAnalysisOptions,
+  warmStartLog10aT?: Readonly<Record<string, number>>,
 ): { result: ShiftResult; curves: AnalysisCurve[] } {
-  const result = shiftIsotherms(dataset, shiftOptionsFor(s));
+  const result = shiftIsotherms(dataset, {
+    ...shiftOptionsFor(s),
+    ...(warmStartLog10aT && { initialLog10aT: { ...warmStartLog10aT } }),
+  });
   const curves = result.curves.map((c): AnalysisCurve => {
     const note = noteOf(c);
     return {

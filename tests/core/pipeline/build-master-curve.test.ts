@@ -140,6 +140,23 @@ describe('buildMasterCurve()', () => {
     expect(a.prony!.rmsRelativeError!).toBeLessThan(0.03);
   });
 
+  it('buildMasterCurve() started warm from earlier shifts skips the scan and finds the same shifts', () => {
+    const { dataset } = make();
+    const opts = { referenceTemperatureK: 373.15, models: [], pronyModesPerDecade: 0 as const };
+    const cold = buildMasterCurve(dataset, opts);
+    const start = Object.fromEntries(cold.curves.map((c) => [c.isothermId, c.log10aT! + 0.03]));
+    const warm = buildMasterCurve(dataset, { ...opts, warmStartLog10aT: start });
+    warm.curves.forEach((c, i) =>
+      expectAbsClose(
+        c.log10aT!,
+        cold.curves[i].log10aT!,
+        1e-3,
+        'same optimum from a start 0.03 decades off',
+      ),
+    );
+    expect(warm.settings).toEqual(cold.settings); // the warm start is not a setting
+  });
+
   it('buildMasterCurve() works on relaxation data (reduced time t/aT)', () => {
     // A plumbing check (relaxation data through every step), not the engine's accuracy test (that
     // is tests/core/shift): a broad spectrum keeps every isotherm in the transition, 0.5 % noise.

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { ref } from 'vue';
-import { useWorkbench } from '../../../app/renderer/src/composables/useWorkbench';
+import { useWorkbench, warmStartFrom } from '../../../app/renderer/src/composables/useWorkbench';
 import { newDocument, setLocked } from '../../../app/renderer/src/document/analysis-document';
 import type { EngineRequest, EngineResult } from '../../../app/renderer/src/engine/engine-protocol';
 import type { UseEngineReturn } from '../../../app/renderer/src/engine/useEngine';
@@ -17,7 +17,15 @@ function fakeEngine(seen: EngineRequest[]): UseEngineReturn {
       seen.push(req);
       return {
         kind: 'analysed',
-        analysis: { settings: req.kind === 'analyse' ? req.options : {} } as unknown as Analysis,
+        analysis: {
+          settings: req.kind === 'analyse' ? req.options : {},
+          dataset: req.kind === 'analyse' ? req.dataset : null,
+          referenceTemperatureK: 400,
+          curves:
+            req.kind === 'analyse'
+              ? req.dataset.isotherms.map((i, k) => ({ isothermId: i.id, log10aT: -0.5 * k }))
+              : [],
+        } as unknown as Analysis,
       };
     },
   };
@@ -56,5 +64,25 @@ describe('useWorkbench()', () => {
     wb.cancelPreview();
     expect(wb.doc.value).toBe(start);
     await wb.settled();
+  });
+});
+
+describe('warmStartFrom()', () => {
+  it('warmStartFrom() starts a live re-fit from the shifts on show, and the drag previews send them', async () => {
+    const seen: EngineRequest[] = [];
+    const wb = useWorkbench(fakeEngine(seen));
+    const start = newDocument(tinyDataset(), 'tiny');
+    wb.reset(start);
+    await wb.settled();
+    const ids = start.dataset.isotherms.map((i) => i.id);
+    const expected = Object.fromEntries(ids.map((id, k) => [id, -0.5 * k]));
+    expect(warmStartFrom(wb.analysis.value, start)).toEqual(expected);
+    wb.preview(setLocked(start, ids[1], 0.2));
+    await wb.settled();
+    const last = seen[seen.length - 1];
+    expect(last.kind === 'analyse' && last.warmStartLog10aT).toEqual(expected);
+    expect(warmStartFrom(null, start)).toBeUndefined();
+    const otherTref = { ...start, options: { ...start.options, referenceTemperatureK: 300 } };
+    expect(warmStartFrom(wb.analysis.value, otherTref)).toBeUndefined();
   });
 });

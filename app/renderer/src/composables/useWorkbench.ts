@@ -39,6 +39,25 @@ export interface UseWorkbenchReturn {
   settled(): Promise<void>;
 }
 
+/**
+ * The shifts shown now, as the starting point of a live re-fit (a drag moves one curve a little,
+ * so the others start next to their optimum and the shift engine skips its scan). Only when the
+ * shown analysis has the same data and reference temperature as the document to re-fit.
+ */
+export function warmStartFrom(
+  shown: Analysis | null,
+  doc: AnalysisDocument,
+): Record<string, number> | undefined {
+  if (!shown || shown.dataset.name !== doc.dataset.name) return undefined;
+  const tref = doc.options.referenceTemperatureK;
+  if (tref !== undefined && tref !== shown.referenceTemperatureK) return undefined;
+  const ids = new Set(doc.dataset.isotherms.map((i) => i.id));
+  const out: Record<string, number> = {};
+  for (const c of shown.curves)
+    if (c.log10aT !== null && ids.has(c.isothermId)) out[c.isothermId] = c.log10aT;
+  return Object.keys(out).length ? out : undefined;
+}
+
 export function useWorkbench(engine: UseEngineReturn): UseWorkbenchReturn {
   const history = shallowRef<History<AnalysisDocument | null>>(createHistory(null));
   const analysis = shallowRef<Analysis | null>(null);
@@ -48,11 +67,13 @@ export function useWorkbench(engine: UseEngineReturn): UseWorkbenchReturn {
   // tens of milliseconds instead of a few hundred, so the other curves follow the pointer.
   const runner = useLatestRunner<{ doc: AnalysisDocument; light: boolean }>(
     async ({ doc, light }) => {
+      const warm = light ? warmStartFrom(analysis.value, doc) : undefined;
       const r = await engine.run({
         kind: 'analyse',
         dataset: doc.dataset,
         options: light ? { ...doc.options, models: [], pronyModesPerDecade: 0 } : doc.options,
         importWarnings: doc.importWarnings,
+        ...(warm && { warmStartLog10aT: warm }),
       });
       if (history.value.present !== doc) {
         // A newer document is waiting; still show this result if nothing better exists yet.

@@ -7,7 +7,10 @@ import type { DataWarning, Dataset } from '../../../../core/data/types';
 import type { AnalysisOptions } from '../../../../core/pipeline/options';
 
 /** The serialisable options (no progress callback; import warnings are kept beside them). */
-export type DocumentOptions = Omit<AnalysisOptions, 'onProgress' | 'importWarnings'>;
+export type DocumentOptions = Omit<
+  AnalysisOptions,
+  'onProgress' | 'importWarnings' | 'warmStartLog10aT'
+>;
 
 export interface AnalysisDocument {
   dataset: Dataset;

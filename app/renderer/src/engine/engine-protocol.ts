@@ -14,6 +14,8 @@ export type EngineRequest =
       dataset: Dataset;
       options: DocumentOptions;
       importWarnings: DataWarning[];
+      /** Shifts to start from (live re-fit while dragging): log10 aT by isotherm id. */
+      warmStartLog10aT?: Record<string, number>;
     }
   | { kind: 'import'; files: TextFile[]; options: ImportOptions };
 

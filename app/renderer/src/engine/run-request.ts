@@ -17,6 +17,7 @@ export function runRequest(
     const analysis = buildMasterCurve(req.dataset, {
       ...req.options,
       importWarnings: req.importWarnings,
+      ...(req.warmStartLog10aT && { warmStartLog10aT: req.warmStartLog10aT }),
       onProgress,
     });
     return { kind: 'analysed', analysis };
