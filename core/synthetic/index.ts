@@ -1,5 +1,6 @@
 export * from './random';
 export * from './isotherm-set';
+export * from './creep-set';
 export * from './spectrum-shapes';
 export * from './wander';
 export * from './number-text';

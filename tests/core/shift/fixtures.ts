@@ -5,8 +5,8 @@
  * relaxation modulus falling steeply through the window. Temperatures are spaced so that
  * neighbouring isotherms overlap by two decades or more (common practice when planning TTS tests).
  */
-import { smoothProny, syntheticIsotherms } from '../../../core/synthetic';
-import type { ShiftLaw, SyntheticOptions } from '../../../core/synthetic';
+import { smoothProny, syntheticCreep, syntheticIsotherms } from '../../../core/synthetic';
+import type { ShiftLaw, SyntheticCreepOptions, SyntheticOptions } from '../../../core/synthetic';
 import type { PronySeries } from '../../../core/spectrum/prony-model';
 
 /** Melt: power-law modes up to 1 s, no equilibrium modulus → terminal zone below ~1 rad/s. */
@@ -189,4 +189,42 @@ export function maxError(estimated: (number | null)[], truth: number[]): number 
     (m, v, k) => Math.max(m, v === null ? Infinity : Math.abs(v - truth[k])),
     0,
   );
+}
+
+/** Creep cases: the creep compliance of RELAXING (J ∝ t^0.9 through the window), 1–1000 s. */
+export interface CreepCase {
+  name: string;
+  options: Omit<SyntheticCreepOptions, 'relativeNoise' | 'seed'>;
+}
+const creep = { deformation: 'shear', tMinS: 1, tMaxS: 1000, pointsPerDecade: 5 } as const;
+export const CREEP_WLF: CreepCase = {
+  name: 'creep, WLF universal constants, 10 isotherms 4 K apart',
+  options: {
+    ...creep,
+    referenceK: 300,
+    temperaturesK: temperatures(300, 10, 4, 4),
+    prony: RELAXING,
+    law: WLF_UNIVERSAL,
+  },
+};
+export const CREEP_ARRHENIUS: CreepCase = {
+  name: 'creep, Arrhenius 200 kJ/mol, 10 isotherms 4 K apart',
+  options: {
+    ...creep,
+    referenceK: 350,
+    temperaturesK: temperatures(350, 10, 4, 4),
+    prony: RELAXING,
+    law: ARRHENIUS_STEEP,
+  },
+};
+
+/** Creep set; `disturbed` gives the first three points of isotherms 8 and 9 30 % noise. */
+export function makeCreep(c: CreepCase, relativeNoise: number, seed: number, disturbed = false) {
+  return syntheticCreep({
+    ...c.options,
+    relativeNoise,
+    seed,
+    ...(disturbed ? { outliers: LOW_TORQUE } : {}),
+    name: `invented ${c.name}`,
+  });
 }
