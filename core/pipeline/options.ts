@@ -38,8 +38,8 @@ export const analysisOptionsSchema = z.strictObject({
   models: z.array(z.enum(['wlf', 'arrhenius', 'polynomial'])).optional(),
   /**
    * Relaxation times per decade of the Prony series (1 or 2); 0 skips the Prony fit. 2 is the
-   * default because 1 per decade leaves ripples of about 4–5 % RMS in G″ (measured on synthetic
-   * data), above the 3 % target; 2 per decade follow a smooth curve to within the noise.
+   * default: 1 per decade can leave ripples in G″ above the 3 % RMS target (4.5–4.9 % on some
+   * synthetic sets, 3.0 % against the data in tests/core/pipeline), 2 per decade stay within it.
    * @default 2
    */
   pronyModesPerDecade: z.union([z.literal(0), z.literal(1), z.literal(2)]).optional(),

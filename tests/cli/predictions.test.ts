@@ -1,11 +1,10 @@
 /**
- * `thermoshift build --predict` end to end on synthetic data with known truth: a rubber-like solid
- * measured in stress relaxation at 60–140 °C, shifted by the WLF 'universal' constants at Tg + 50 K
- * (8.86 / 101.6 K; Williams, Landel & Ferry, JACS 77, 3701, 1955), Tref 100 °C.
+ * `thermoshift build --predict` end to end on synthetic data with known truth: the invented seal
+ * of tests/core/pipeline/seal-fixture.ts (stress relaxation, WLF 8.86 / 101.6 K at 100 °C;
+ * Williams, Landel & Ferry, JACS 77, 3701, 1955) and the CLI tests' oscillatory sample.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import { join } from 'node:path';
-import { smoothProny } from '../../core/synthetic';
 import { wlfLog10aT } from '../../core/models/shift-laws';
 import { pronyRelaxation, pronyStorage } from '../../core/spectrum/prony-model';
 import type { PredictionEntry } from '../../app/cli/predictions';
@@ -18,16 +17,8 @@ import {
   syntheticWlfComponent,
 } from './cli-helpers';
 import { expectRelClose } from '../helpers/assert-close';
+import { SEAL_DATA, SEAL_PRONY, sealLog10aT, TEN_YEARS_S } from '../core/pipeline/seal-fixture';
 
-const seal = smoothProny({
-  tauMinS: 1e-6,
-  tauMaxS: 1e9,
-  modesPerDecade: 2,
-  glassyModulusPa: 1e9,
-  equilibriumModulusPa: 2e6,
-  slope: 0.15,
-});
-const TEN_YEARS_S = 10 * 365.25 * 86400;
 const trueLog10aT = (T: number) =>
   wlfLog10aT(T, SYNTHETIC_WLF.c1, SYNTHETIC_WLF.c2K, SYNTHETIC_WLF.referenceK);
 
@@ -35,17 +26,7 @@ let relaxationDir = '';
 let oscillatoryDir = '';
 beforeAll(() => {
   relaxationDir = join(tempDir(), 'seal');
-  writeSyntheticSample(relaxationDir, {
-    testKind: 'relaxation',
-    temperaturesK: Array.from({ length: 9 }, (_, i) => 333.15 + 10 * i),
-    components: [
-      { prony: seal, law: { kind: 'wlf', c1: SYNTHETIC_WLF.c1, c2K: SYNTHETIC_WLF.c2K } },
-    ],
-    xMin: 1,
-    xMax: 1e4,
-    relativeNoise: 0.01,
-    seed: 60,
-  });
+  writeSyntheticSample(relaxationDir, SEAL_DATA);
   oscillatoryDir = join(tempDir(), 'osc');
   writeSyntheticSample(oscillatoryDir);
 });
@@ -65,7 +46,7 @@ describe('thermoshift build --predict', () => {
     expect(r.status, r.stderr).toBe(EXIT.ok);
     const [p] = (JSON.parse(r.stdout) as { predictions: PredictionEntry[] }).predictions;
     const T = 333.15;
-    const expected = pronyRelaxation(seal, TEN_YEARS_S / 10 ** trueLog10aT(T));
+    const expected = pronyRelaxation(SEAL_PRONY, TEN_YEARS_S / 10 ** sealLog10aT(T));
     // 5 %: 1 % noise, the shift error (≤ 0.02 decades, issue 3), the Prony fit (≤ 3 %, issue 4)
     expectRelClose(p.value, expected, 0.05, 'G(10 years) at 60 °C');
     expect(p.unit).toBe('Pa');

@@ -3,6 +3,7 @@ import { smoothProny, syntheticIsotherms, type SyntheticOptions } from '../../..
 import { buildMasterCurve } from '../../../core/pipeline/build-master-curve';
 import { OptionsError } from '../../../core/pipeline/options';
 import { PipelineError } from '../../../core/pipeline/errors';
+import type { Analysis } from '../../../core/pipeline/types';
 import { pronyLoss, pronyStorage } from '../../../core/spectrum/prony-model';
 import { expectAbsClose, expectRelClose } from '../../helpers/assert-close';
 
@@ -28,6 +29,29 @@ function make(over: Partial<SyntheticOptions> = {}) {
     seed: 11,
     ...over,
   });
+}
+
+/** RMS relative error of the fitted series against the true G′ and G″ on 41 points of its window. */
+function rmsAgainstTruth(a: Analysis): { storage: number; loss: number; joint: number } {
+  const p = {
+    equilibriumModulusPa: a.prony!.equilibriumModulusPa,
+    tauS: a.prony!.tauS,
+    modulusPa: a.prony!.modulusPa,
+  };
+  const [lo, hi] = a.prony!.reducedWindow;
+  let storage = 0;
+  let loss = 0;
+  const n = 41;
+  for (let k = 0; k < n; k++) {
+    const w = lo * (hi / lo) ** (k / (n - 1));
+    storage += (pronyStorage(p, w) / pronyStorage(prony, w) - 1) ** 2;
+    loss += (pronyLoss(p, w) / pronyLoss(prony, w) - 1) ** 2;
+  }
+  return {
+    storage: Math.sqrt(storage / n),
+    loss: Math.sqrt(loss / n),
+    joint: Math.sqrt((storage + loss) / (2 * n)),
+  };
 }
 
 describe('buildMasterCurve()', () => {
@@ -95,48 +119,21 @@ describe('buildMasterCurve()', () => {
   it('buildMasterCurve() fits a Prony series that reproduces G′ and G″ of the true model within 3 % RMS', () => {
     const { dataset } = make({ relativeNoise: 0.01 });
     const a = buildMasterCurve(dataset, { referenceTemperatureK: 373.15, pronyModesPerDecade: 2 });
-    const p = {
-      equilibriumModulusPa: a.prony!.equilibriumModulusPa,
-      tauS: a.prony!.tauS,
-      modulusPa: a.prony!.modulusPa,
-    };
-    const [lo, hi] = a.prony!.reducedWindow;
-    let sum = 0;
-    let n = 0;
-    for (let k = 0; k <= 40; k++) {
-      const w = lo * (hi / lo) ** (k / 40);
-      sum +=
-        (pronyStorage(p, w) / pronyStorage(prony, w) - 1) ** 2 +
-        (pronyLoss(p, w) / pronyLoss(prony, w) - 1) ** 2;
-      n += 2;
-    }
-    expect(Math.sqrt(sum / n)).toBeLessThan(0.03); // issue 4: Prony reproduces G', G'' within 3 % RMS
+    const rms = rmsAgainstTruth(a);
+    expect(rms.joint).toBeLessThan(0.03); // issue 4: Prony reproduces G', G'' within 3 % RMS
     expect(a.prony!.rmsRelativeError!).toBeLessThan(0.03);
   });
 
   it('buildMasterCurve() with default options fits a Prony series within 3 % RMS of the true G′ and of the true G″', () => {
-    // Known truth: the generator's own Prony model (core/synthetic), 2 % noise as in issue 4. The
-    // default of 2 modes per decade is what meets the target; 1 per decade misses G″ (~4.5–4.9 %).
+    // Known truth: the generator's own Prony model (core/synthetic), 2 % noise as in issue 4.
+    // Measured on this data: 2 modes per decade give G′ 0.8 %, G″ 1.2 % against the truth and
+    // 2.1 % against the data; 1 per decade 1.7 %, 2.6 % and 3.0 % (the last one over the target).
     const { dataset } = make();
     const a = buildMasterCurve(dataset, { referenceTemperatureK: 373.15 });
     expect(a.settings.pronyModesPerDecade).toBe(2);
-    const p = {
-      equilibriumModulusPa: a.prony!.equilibriumModulusPa,
-      tauS: a.prony!.tauS,
-      modulusPa: a.prony!.modulusPa,
-    };
-    const [lo, hi] = a.prony!.reducedWindow;
-    let storage = 0;
-    let loss = 0;
-    const n = 41;
-    for (let k = 0; k < n; k++) {
-      const w = lo * (hi / lo) ** (k / (n - 1));
-      storage += (pronyStorage(p, w) / pronyStorage(prony, w) - 1) ** 2;
-      loss += (pronyLoss(p, w) / pronyLoss(prony, w) - 1) ** 2;
-    }
-    expect(Math.sqrt(storage / n)).toBeLessThan(0.03); // issue 4 target: G′ within 3 % RMS
-    expect(Math.sqrt(loss / n)).toBeLessThan(0.03); // issue 4 target: G″ within 3 % RMS
-    // against the noisy data itself (2 % noise): 1 mode per decade gives 3.0 % here, 2 give 2.1 %
+    const rms = rmsAgainstTruth(a);
+    expect(rms.storage).toBeLessThan(0.03); // issue 4 target: G′ within 3 % RMS
+    expect(rms.loss).toBeLessThan(0.03); // issue 4 target: G″ within 3 % RMS
     expect(a.prony!.rmsRelativeError!).toBeLessThan(0.03);
   });
 

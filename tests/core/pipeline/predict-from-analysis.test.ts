@@ -6,8 +6,8 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { smoothProny, syntheticIsotherms } from '../../../core/synthetic';
-import { wlfLog10aT } from '../../../core/models/shift-laws';
+import { syntheticIsotherms } from '../../../core/synthetic';
+import { SEAL_DATA, SEAL_PRONY, sealLog10aT, TEN_YEARS_S } from './seal-fixture';
 import { importFiles } from '../../../core/io';
 import { buildMasterCurve } from '../../../core/pipeline';
 import {
@@ -125,34 +125,11 @@ describe('predictFromAnalysis()', () => {
   });
 });
 
-// A rubber-like solid measured in stress relaxation, 1 s to 10⁴ s at 60–140 °C, shifted by the
-// WLF 'universal' constants at Tg + 50 K (8.86 / 101.6 K; Williams, Landel & Ferry, JACS 77, 3701,
-// 1955) with Tref = 100 °C: the design question "relaxed modulus after ten years at 60 °C".
-const seal = smoothProny({
-  tauMinS: 1e-6,
-  tauMaxS: 1e9,
-  modesPerDecade: 2,
-  glassyModulusPa: 1e9,
-  equilibriumModulusPa: 2e6,
-  slope: 0.15,
-});
-const sealData = syntheticIsotherms({
-  testKind: 'relaxation',
-  deformation: 'shear',
-  referenceK: 373.15,
-  temperaturesK: Array.from({ length: 9 }, (_, i) => 333.15 + 10 * i),
-  components: [{ prony: seal, law: { kind: 'wlf', c1: 8.86, c2K: 101.6 } }],
-  xMin: 1,
-  xMax: 1e4,
-  pointsPerDecade: 5,
-  relativeNoise: 0.01,
-  seed: 60,
-});
+const sealData = syntheticIsotherms(SEAL_DATA);
 const sealAnalysis = buildMasterCurve(sealData.dataset, {
   referenceTemperatureK: 373.15,
   models: ['wlf'],
 });
-const TEN_YEARS_S = 10 * 365.25 * 86400;
 
 describe('predictFromAnalysis() on a solid with known truth', () => {
   it('predictFromAnalysis() gives the relaxed modulus after ten years at 60 °C close to the truth', () => {
@@ -162,8 +139,7 @@ describe('predictFromAnalysis() on a solid with known truth', () => {
       temperatureK: T,
       timeS: TEN_YEARS_S,
     });
-    const trueLog10aT = wlfLog10aT(T, 8.86, 101.6, 373.15);
-    const expected = pronyRelaxation(seal, TEN_YEARS_S / 10 ** trueLog10aT);
+    const expected = pronyRelaxation(SEAL_PRONY, TEN_YEARS_S / 10 ** sealLog10aT(T));
     // 5 %: 1 % noise, the shift error at the coldest isotherm (≤ 0.02 decades, issue 3) and the
     // Prony fit's own error (≤ 3 %, issue 4)
     expectRelClose(p.value, expected, 0.05, 'G(10 years) at 60 °C');
