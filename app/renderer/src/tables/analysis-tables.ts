@@ -2,7 +2,7 @@
  * The analysis tables as header + rows of plain values (full precision, SI or stated units), used
  * both for copying to spreadsheets and for the on-screen tables.
  */
-import type { Analysis } from '../../../../core/pipeline/types';
+import type { Analysis, ModelFitStats } from '../../../../core/pipeline/types';
 import { toCelsius } from '../../../../core/pipeline/temperature';
 import type { Cell } from './tsv';
 
@@ -38,78 +38,59 @@ export function shiftTable(a: Analysis): PlainTable {
   };
 }
 
+/** One constant of a model: name, value, s.e., 95 % interval (or null) and unit. */
+type Constant = [string, number, number | null, [number, number] | null, string];
+
 export function modelTable(a: Analysis): PlainTable {
-  const rows: Cell[][] = [];
   const { wlf, arrhenius, polynomial } = a.models;
-  const fit = (m: {
-    r2: number | null;
-    rmsResidualDecades: number | null;
-    fittedRangeK: [number, number];
-  }): Cell[] => [
-    m.r2,
-    m.rmsResidualDecades,
-    `${toCelsius(m.fittedRangeK[0]).toFixed(1)} … ${toCelsius(m.fittedRangeK[1]).toFixed(1)}`,
-  ];
-  if (wlf) {
-    rows.push([
+  const models: [string, ModelFitStats & { referenceK: number }, Constant[]][] = [];
+  if (wlf)
+    models.push([
       'WLF',
-      'C1',
-      wlf.c1,
-      wlf.c1StdErr,
-      wlf.c1Ci95?.[0],
-      wlf.c1Ci95?.[1],
-      '',
-      toCelsius(wlf.referenceK),
-      ...fit(wlf),
+      wlf,
+      [
+        ['C1', wlf.c1, wlf.c1StdErr, wlf.c1Ci95, ''],
+        ['C2', wlf.c2K, wlf.c2KStdErr, wlf.c2KCi95, 'K'],
+      ],
     ]);
-    rows.push([
-      'WLF',
-      'C2',
-      wlf.c2K,
-      wlf.c2KStdErr,
-      wlf.c2KCi95?.[0],
-      wlf.c2KCi95?.[1],
-      'K',
-      toCelsius(wlf.referenceK),
-      ...fit(wlf),
-    ]);
-  }
   if (arrhenius)
-    rows.push([
+    models.push([
       'Arrhenius',
-      'Ea',
-      arrhenius.activationEnergyKJPerMol,
-      arrhenius.activationEnergyKJPerMolStdErr,
-      arrhenius.activationEnergyKJPerMolCi95?.[0],
-      arrhenius.activationEnergyKJPerMolCi95?.[1],
-      'kJ/mol',
-      toCelsius(arrhenius.referenceK),
-      ...fit(arrhenius),
+      arrhenius,
+      [
+        [
+          'Ea',
+          arrhenius.activationEnergyKJPerMol,
+          arrhenius.activationEnergyKJPerMolStdErr,
+          arrhenius.activationEnergyKJPerMolCi95,
+          'kJ/mol',
+        ],
+      ],
     ]);
-  if (polynomial) {
-    rows.push([
+  if (polynomial)
+    models.push([
       'polynomial',
-      'a1',
-      polynomial.a1PerK,
-      polynomial.a1PerKStdErr,
-      null,
-      null,
-      '1/K',
-      toCelsius(polynomial.referenceK),
-      ...fit(polynomial),
+      polynomial,
+      [
+        ['a1', polynomial.a1PerK, polynomial.a1PerKStdErr, null, '1/K'],
+        ['a2', polynomial.a2PerK2, polynomial.a2PerK2StdErr, null, '1/K²'],
+      ],
     ]);
-    rows.push([
-      'polynomial',
-      'a2',
-      polynomial.a2PerK2,
-      polynomial.a2PerK2StdErr,
-      null,
-      null,
-      '1/K²',
-      toCelsius(polynomial.referenceK),
-      ...fit(polynomial),
-    ]);
-  }
+  const rows: Cell[][] = models.flatMap(([name, m, constants]) =>
+    constants.map(([constant, value, se, ci, unit]): Cell[] => [
+      name,
+      constant,
+      value,
+      se,
+      ci?.[0] ?? null,
+      ci?.[1] ?? null,
+      unit,
+      toCelsius(m.referenceK),
+      m.r2,
+      m.rmsResidualDecades,
+      `${toCelsius(m.fittedRangeK[0]).toFixed(1)} … ${toCelsius(m.fittedRangeK[1]).toFixed(1)}`,
+    ]),
+  );
   return {
     header: [
       'model',
