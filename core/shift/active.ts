@@ -1,6 +1,6 @@
 /** Which isotherms take part: not excluded, with two or more usable points for some driver. */
 import type { Dataset } from '../data/types';
-import { logOrdinate, quantityValues } from './drivers';
+import { usableValue, quantityValues } from './drivers';
 import type { ResolvedShiftOptions, ShiftWarning } from './types';
 import { describeIsotherm, warn } from './warnings';
 
@@ -21,7 +21,7 @@ export function activeIsotherms(
       let firstBad = -1;
       for (let i = 0; i < iso.x.length; i++) {
         if (!iso.mask[i]) continue;
-        if (iso.x[i] > 0 && Number.isFinite(logOrdinate(q, values[i]))) good++;
+        if (iso.x[i] > 0 && usableValue(q, values[i])) good++;
         else if (firstBad < 0) firstBad = i;
       }
       if (firstBad >= 0) {

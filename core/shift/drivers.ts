@@ -36,6 +36,12 @@ export function betaOf(q: QuantityId): number {
   return q === 'creepCompliance' ? -1 : 1;
 }
 
+/** True when logOrdinate(q, value) is finite, without computing the logarithm. */
+export function usableValue(q: QuantityId, value: number): boolean {
+  if (q === 'phaseAngle') return value > 0 && value < 90;
+  return value > 0 && value < Infinity;
+}
+
 /**
  * The ordinate a quantity is fitted in: log10 of the value; δ enters as log10 tan δ so that all
  * drivers are in decades. Non-positive values (and δ outside 0–90°) give NaN.
@@ -59,7 +65,8 @@ export function quantityValues(
   const gpp = quantities.lossModulus;
   if (!gp || !gpp) return undefined;
   if (q === 'tanDelta') return gp.map((v, i) => gpp[i] / v);
-  if (q === 'complexModulus') return gp.map((v, i) => Math.hypot(v, gpp[i]));
+  // √(G'² + G''²) directly: Math.hypot is several times slower and moduli never overflow here.
+  if (q === 'complexModulus') return gp.map((v, i) => Math.sqrt(v * v + gpp[i] * gpp[i]));
   if (q === 'phaseAngle') return gp.map((v, i) => (Math.atan2(gpp[i], v) * 180) / Math.PI);
   return undefined;
 }

@@ -13,7 +13,7 @@ export function buildSeries(
   maxPerDecade: number,
 ): FitSeries {
   const n = lx.length;
-  let order = new Int32Array(n);
+  let order: Int32Array = new Int32Array(n);
   let count = 0;
   let sorted = true;
   for (let i = 0; i < n; i++)
@@ -22,12 +22,25 @@ export function buildSeries(
       order[count++] = i;
     }
   order = order.subarray(0, count);
-  if (!sorted) order = Int32Array.from(order).sort((a, b) => lx[a] - lx[b]);
-  const span = count > 1 ? lx[order[count - 1]] - lx[order[0]] : 0;
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (let i = 0; i < count; i++) {
+    const v = lx[order[i]];
+    if (v < lo) lo = v;
+    if (v > hi) hi = v;
+  }
+  const span = count > 1 ? hi - lo : 0;
   // Bin only when the curve as a whole is denser than allowed; otherwise merge exact duplicates.
   const binWidth =
     maxPerDecade > 0 && span > 0 && count / span > maxPerDecade ? 1 / maxPerDecade : 0;
-  const x0 = count > 0 ? lx[order[0]] : 0;
+  const x0 = count > 0 ? lo : 0;
+  // Unsorted dense curves (e.g. noisy |G*| as abscissa) are grouped by bin in linear time; only the
+  // bins matter, not the order inside them. Others are sorted by abscissa.
+  if (!sorted)
+    order =
+      binWidth > 0
+        ? byBin(order, lx, x0, binWidth)
+        : Int32Array.from(order).sort((a, b) => lx[a] - lx[b]);
   const outX: number[] = [];
   const outY: number[] = [];
   const outW: number[] = [];
@@ -76,6 +89,23 @@ export function buildSeries(
     ySorted: Float64Array.from(yArr).sort(),
     slope: localSlopes(xArr, yArr),
   };
+}
+
+/** Indices grouped by bin ⌊(lx − x0)/width⌋ in ascending bin order (counting sort, stable). */
+function byBin(order: Int32Array, lx: ArrayLike<number>, x0: number, width: number): Int32Array {
+  const n = order.length;
+  const key = new Int32Array(n);
+  let bins = 0;
+  for (let i = 0; i < n; i++) {
+    key[i] = Math.floor((lx[order[i]] - x0) / width);
+    if (key[i] + 1 > bins) bins = key[i] + 1;
+  }
+  const start = new Int32Array(bins + 1);
+  for (let i = 0; i < n; i++) start[key[i] + 1]++;
+  for (let b = 0; b < bins; b++) start[b + 1] += start[b];
+  const out = new Int32Array(n);
+  for (let i = 0; i < n; i++) out[start[key[i]]++] = order[i];
+  return out;
 }
 
 /**
