@@ -3,7 +3,7 @@
  * models, no Prony series) with the dragged curve locked and the other shifts started from the
  * last result (warm start) — the request useWorkbench sends, run by runRequest, the very function
  * in the analysis worker. Measured on the invented demo melt (samples/melt-long, as the app opens
- * it) and on 20 synthetic isotherms; prints the median per step, warm and cold (scan included).
+ * it) and on 20 synthetic isotherms (the CLI tests' known Prony model and WLF law); prints the median per step, warm and cold (scan included).
  * One frame at 60 Hz is 16.7 ms; the worker keeps the window responsive either way.
  */
 import { readFileSync } from 'node:fs';
@@ -12,7 +12,8 @@ import { fileURLToPath } from 'node:url';
 import { importFiles } from '../core/io/index.ts';
 import type { Dataset } from '../core/data/types.ts';
 import type { Analysis } from '../core/pipeline/types.ts';
-import { smoothProny, syntheticIsotherms } from '../core/synthetic/index.ts';
+import { syntheticIsotherms } from '../core/synthetic/index.ts';
+import { syntheticWlfComponent } from '../tests/cli/cli-helpers.ts';
 import { runRequest } from '../app/renderer/src/engine/run-request.ts';
 import type { DocumentOptions } from '../app/renderer/src/document/analysis-document.ts';
 
@@ -47,18 +48,7 @@ function syntheticCase(): Case {
     deformation: 'shear',
     referenceK: 373.15,
     temperaturesK: Array.from({ length: 20 }, (_, i) => 333.15 + 5 * i),
-    components: [
-      {
-        prony: smoothProny({
-          tauMinS: 1e-6,
-          tauMaxS: 1e4,
-          modesPerDecade: 2,
-          glassyModulusPa: 1e9,
-          equilibriumModulusPa: 1e6,
-        }),
-        law: { kind: 'wlf', c1: 8.86, c2K: 101.6 },
-      },
-    ],
+    components: [syntheticWlfComponent()],
     xMin: 0.1,
     xMax: 100,
     pointsPerDecade: 5,
