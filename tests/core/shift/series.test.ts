@@ -28,6 +28,33 @@ describe('buildSeries()', () => {
     s.lx.forEach((x, e) => expectAbsClose(s.y[e], 2 * x, 1e-12, 'bin mean on a line'));
   });
 
+  it('buildSeries() bins a dense unsorted curve exactly like the same points sorted', () => {
+    const rng = seededRandom(3);
+    const n = 800; // 400 points per decade over two decades, shuffled (like noisy |G*|)
+    const lx = Array.from({ length: n }, () => 2 * rng.uniform());
+    const y = lx.map((x) => Math.sin(3 * x) + 0.01 * rng.normal());
+    const idx = lx.map((_, i) => i);
+    const order = [...idx].sort((a, b) => lx[a] - lx[b]);
+    const shuffled = buildSeries(lx, y, idx, 40);
+    const sorted = buildSeries(
+      order.map((i) => lx[i]),
+      order.map((i) => y[i]),
+      order,
+      40,
+    );
+    expect(Array.from(shuffled.w)).toEqual(Array.from(sorted.w));
+    // Same points per bin, summed in another order: equal up to rounding.
+    shuffled.lx.forEach((x, e) => {
+      expectAbsClose(x, sorted.lx[e], 1e-12, `bin ${e} abscissa`);
+      expectAbsClose(shuffled.y[e], sorted.y[e], 1e-12, `bin ${e} mean`);
+      const a = Array.from(
+        shuffled.pointIndex.subarray(shuffled.binStart[e], shuffled.binStart[e + 1]),
+      );
+      const b = Array.from(sorted.pointIndex.subarray(sorted.binStart[e], sorted.binStart[e + 1]));
+      expect(a.sort((u, v) => u - v)).toEqual(b.sort((u, v) => u - v));
+    });
+  });
+
   it('buildSeries() handles empty and one-point curves', () => {
     expect(buildSeries([], [], [], 40).lx.length).toBe(0);
     expect(buildSeries([1], [2], [0], 40).lx.length).toBe(1);
