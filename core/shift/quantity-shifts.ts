@@ -8,10 +8,11 @@
  * hundredths of a decade, inside the quadratic region, and have settled to the refinement's
  * tolerance by then. Only the largest difference is reported, so only the two standard errors
  * behind it are computed (covariance.ts, offsetStdErrors: the same sandwich as the main fit, for
- * one shift instead of the whole matrix).
+ * one shift instead of the whole matrix), and only when the difference is large enough to matter.
  */
 import type { Dataset, QuantityId } from '../data/types';
 import { buildProblem } from './build-problem';
+import { DISAGREE_DECADES } from './checks';
 import type { OffsetFit } from './fit-offsets';
 import { candidatePairs } from './pairs';
 import type { FitProblem } from './problem';
@@ -21,13 +22,22 @@ import { solveOffsets } from './solve';
 import type { ResolvedShiftOptions } from './types';
 import type { VerticalOutcome } from './vertical';
 
+/**
+ * Differences up to this many decades never affect the grade (checks.ts: fair needs more than
+ * DISAGREE_DECADES / 2), so their standard errors are not computed.
+ */
+export const MATERIAL_DECADES = DISAGREE_DECADES / 2;
+
 /** Iterations from the joint optimum: the shifts have settled to within 0.001 decades or so. */
 const ITERATIONS = 2;
 
 export interface Disagreement {
   /** Largest |log10 aT(a) − log10 aT(b)| over included, unlocked isotherms, decades. */
   decades: number;
-  /** That difference in standard errors of the difference (Infinity when the error is 0). */
+  /**
+   * That difference in standard errors of the difference (Infinity when the error is 0; NaN when
+   * not computed because the difference is at most MATERIAL_DECADES).
+   */
   z: number;
 }
 
@@ -131,6 +141,8 @@ export function quantityDisagreement(
         if (Number.isFinite(d) && (!best || d > best.decades)) best = { decades: d, a, b, c };
       }
   if (!best) return null;
+  // A difference this small cannot change the grade whatever its standard error: skip them.
+  if (best.decades <= MATERIAL_DECADES) return { decades: best.decades, z: NaN };
   // Only the largest difference is reported, so only its two standard errors are needed.
   const se = Math.hypot(stdErrOf(fits[best.a], best.c), stdErrOf(fits[best.b], best.c));
   return { decades: best.decades, z: se > 0 ? best.decades / se : Infinity };

@@ -163,7 +163,10 @@ export interface ShiftChecks {
   vanGurpPalmenRatio: number | null;
   /** Largest |log10 aT from one quantity − from another| over included isotherms, decades. */
   quantityDisagreementDecades: number | null;
-  /** The same divided by the combined standard error of the two estimates. */
+  /**
+   * The same divided by the combined standard error of the two estimates; null when the
+   * difference is at most 0.05 decades (it cannot affect the grade then, so it is not computed).
+   */
   quantityDisagreementZ: number | null;
   /** Quantities compared, e.g. ['storageModulus', 'lossModulus']. */
   quantitiesCompared: QuantityId[];
