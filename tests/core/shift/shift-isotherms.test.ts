@@ -146,6 +146,9 @@ describe('shiftIsotherms()', () => {
       const r = shiftIsotherms(dataset, { referenceK: BLEND.options.referenceK });
       expect(codes(r), `seed ${seed}`).toContain('poor-superposition');
       expect(r.checks.superpositionOk).toBe(false);
+      // G′ alone and G″ alone disagree by more than 0.05 decades, so the z-score is worked out.
+      expect(r.checks.quantityDisagreementDecades!).toBeGreaterThan(0.05);
+      expect(r.checks.quantityDisagreementZ!).toBeGreaterThan(2.5);
     }
   });
 
@@ -172,6 +175,8 @@ describe('shiftIsotherms()', () => {
     expect(r.checks.vanGurpPalmenRatio).toBeLessThan(1.8);
     expect(r.checks.quantitiesCompared).toEqual(['storageModulus', 'lossModulus']);
     expect(r.checks.quantityDisagreementDecades).toBeLessThan(0.05);
+    // Below 0.05 decades the difference cannot affect the grade: its z-score is not worked out.
+    expect(r.checks.quantityDisagreementZ).toBeNull();
     expect(r.checks.noiseDecades).toBeGreaterThan(0.004); // 2 % noise = 0.0087 decades
     expect(r.checks.noiseDecades).toBeLessThan(0.015);
     expect(r.checks.grade).toBe('good');
