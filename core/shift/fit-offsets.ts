@@ -81,6 +81,13 @@ function robustScale(loss: RobustLoss, residuals: ArrayLike<number>): number {
   return Math.max(MIN_SCALE_DECADES, Number.isFinite(sigma) ? k * sigma : MIN_SCALE_DECADES);
 }
 
+/** Standardised residuals z = r·√w (the noise of one point) of a filled buffer. */
+function standardised(buf: ResidualBuffer): Float64Array {
+  const z = new Float64Array(buf.size);
+  for (let m = 0; m < buf.size; m++) z[m] = buf.r[m] * Math.sqrt(buf.w[m]);
+  return z;
+}
+
 function chooseMainGroup(
   groups: Int32Array,
   temps: number[],
@@ -199,6 +206,7 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
 
   const buffer = new ResidualBuffer();
   let finalStats: StatsSink | null = null;
+  let finalSigma = NaN;
   const outliers: Set<number>[] = Array.from({ length: n }, () => new Set<number>());
   // A joint fit gets a weak prior on log10 bT: bT stays within a few per cent of 1 for a simple
   // material (Ferry 1980), and without it a featureless (power-law) curve could trade bT against
@@ -209,8 +217,8 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
       prior[n + k] = 1 / (JOINT_BT_PRIOR_DECADES * JOINT_BT_PRIOR_DECADES);
   let settings: SolveSettings | null = null;
   const runPass = (t: Float64Array, covariance: boolean) => {
-    const pre = new StatsSink(problem).consume(residualsAt(problem, t, buffer));
-    const scale = input.scale ?? robustScale(input.loss, pre.residuals);
+    const scale =
+      input.scale ?? robustScale(input.loss, standardised(residualsAt(problem, t, buffer)));
     settings = {
       prior,
       loss: input.loss,
@@ -250,6 +258,7 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
     );
     if (flagged === 0) {
       finalStats = stats;
+      finalSigma = sigma;
       outcome.covariance = offsetCovariance(
         problem,
         outcome.theta,
@@ -266,6 +275,7 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
   theta = outcome.theta;
   // Reuse the outlier pass's statistics when nothing was flagged (same θ, same problem).
   const stats = finalStats ?? new StatsSink(problem).consume(residualsAt(problem, theta, buffer));
+  const robustSigma = finalStats ? finalSigma : MAD_TO_SIGMA * medianAbs(stats.residuals);
   const curveRms = new Float64Array(n);
   for (let k = 0; k < n; k++) curveRms[k] = stats.curveRms(k);
   for (const k of incFinal)
@@ -288,7 +298,7 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
     lockConflict,
     curveRms,
     rms: stats.rms(),
-    robustSigma: MAD_TO_SIGMA * medianAbs(stats.residuals),
+    robustSigma,
     residualVariance: outcome.residualVariance,
     outliers,
     buffer,
