@@ -10,6 +10,7 @@ import { quantityValues } from './drivers';
 import { buildProblem } from './build-problem';
 import type { FitProblem } from './problem';
 import { residualsAt } from './residuals';
+import { ResidualBuffer } from './residual-buffer';
 import { noiseLevel } from './noise';
 import { StatsSink } from './stats-sink';
 import { MAD_TO_SIGMA, medianAbs } from './robust';
@@ -48,7 +49,7 @@ export interface VgpDispersion {
 
 /**
  * δ (degrees) against log10(bT·|G*|) across the included isotherms, compared pairwise where their
- * |G*| ranges overlap; no horizontal shift is involved.
+ * |G*| ranges overlap; no horizontal shift is involved. `buffer`: residual storage to reuse.
  */
 export function vanGurpPalmenDispersion(
   dataset: Dataset,
@@ -56,6 +57,7 @@ export function vanGurpPalmenDispersion(
   included: Uint8Array,
   log10bT: (k: number) => number,
   minOverlapPoints: number,
+  buffer: ResidualBuffer = new ResidualBuffer(),
 ): VgpDispersion | null {
   const use = active.filter((_, c) => included[c]);
   const q0 = dataset.isotherms[0]?.quantities ?? {};
@@ -73,7 +75,7 @@ export function vanGurpPalmenDispersion(
     sigma: 1,
   });
   const theta = Float64Array.from(use, (k) => log10bT(k));
-  const stats = new StatsSink(p).consume(residualsAt(p, theta));
+  const stats = new StatsSink(p).consume(residualsAt(p, theta, buffer));
   if (stats.residuals.length === 0) return null;
   const rmsDeg = stats.rms();
   const robust = MAD_TO_SIGMA * medianAbs(stats.residuals);

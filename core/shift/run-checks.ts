@@ -43,6 +43,7 @@ export function runChecks(
             return Number.isFinite(v) ? v : 0;
           },
           s.minOverlapPoints,
+          fit.buffer,
         )
       : null;
   const dis =
