@@ -116,6 +116,8 @@ describe('the Thermoshift app in Chromium', () => {
 
   it('lists the imported files under Recent and takes dropped files into the import preview', async () => {
     await page.click('[data-role="recent"]');
+    // The menu opens at once and fills when the stored list has been read (IndexedDB, async).
+    await page.locator('.menu', { hasText: /\+ 10 more/ }).waitFor({ timeout: 10_000 });
     expect(await page.innerText('.menu')).toMatch(/\+ 10 more/);
     await page.click('[data-role="recent"]');
     const name = 'tf9-relaxation.tsv';
