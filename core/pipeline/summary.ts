@@ -6,7 +6,7 @@
 import type { Analysis, AnalysisCurve, AnalysisWarning, ModelFitStats } from './types';
 import type { ResolvedAnalysisOptions } from './options';
 import { CONVENTIONS } from './conventions';
-import { toCelsius } from './temperature';
+import { roundKelvin, toCelsius } from './temperature';
 
 export const SUMMARY_SCHEMA = 'thermoshift-summary/1';
 
@@ -151,13 +151,13 @@ export function analysisSummary(analysis: Analysis): AnalysisSummary {
       files: [...analysis.sample.files],
     },
     referenceTemperature: toCelsius(analysis.referenceTemperatureK),
-    referenceTemperatureK: analysis.referenceTemperatureK,
+    referenceTemperatureK: roundKelvin(analysis.referenceTemperatureK),
     conventions: CONVENTIONS,
     shiftQuantities: [...analysis.shiftQuantities],
     curves: analysis.curves.map((c) => ({
       isothermId: c.isothermId,
       temperature: toCelsius(c.temperatureK),
-      temperatureK: c.temperatureK,
+      temperatureK: roundKelvin(c.temperatureK),
       log10aT: noNegativeZero(c.log10aT),
       log10aTStdErr: c.log10aTStdErr,
       log10bT: noNegativeZero(c.log10bT),

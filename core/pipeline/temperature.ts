@@ -9,3 +9,8 @@ export function toCelsius(temperatureK: number): number {
 export function toKelvinText(temperatureK: number): string {
   return String(Number(temperatureK.toPrecision(10)));
 }
+
+/** Kelvin rounded to 1e-6 K for JSON output (233.15000000000006 → 233.15). */
+export function roundKelvin(temperatureK: number): number {
+  return Math.round(temperatureK * 1e6) / 1e6;
+}
