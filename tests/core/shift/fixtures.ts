@@ -9,35 +9,31 @@ import { smoothProny, syntheticCreep, syntheticIsotherms } from '../../../core/s
 import type { ShiftLaw, SyntheticCreepOptions, SyntheticOptions } from '../../../core/synthetic';
 import type { PronySeries } from '../../../core/spectrum/prony-model';
 
+/** Invented Prony spectrum, two modes per decade (all fixtures use this density). */
+const spectrum = (
+  tauMinS: number,
+  tauMaxS: number,
+  glassyModulusPa: number,
+  equilibriumModulusPa: number,
+  slope: number,
+): PronySeries =>
+  smoothProny({
+    tauMinS,
+    tauMaxS,
+    modesPerDecade: 2,
+    glassyModulusPa,
+    equilibriumModulusPa,
+    slope,
+  });
+
 /** Melt: power-law modes up to 1 s, no equilibrium modulus → terminal zone below ~1 rad/s. */
-export const MELT: PronySeries = smoothProny({
-  tauMinS: 1e-5,
-  tauMaxS: 1,
-  modesPerDecade: 2,
-  glassyModulusPa: 1e6,
-  equilibriumModulusPa: 0,
-  slope: 0.3,
-});
+export const MELT: PronySeries = spectrum(1e-5, 1, 1e6, 0, 0.3);
 
 /** Rubber across its transition: 1 GPa glassy to 1 MPa rubbery. */
-export const RUBBER: PronySeries = smoothProny({
-  tauMinS: 1e-8,
-  tauMaxS: 1e3,
-  modesPerDecade: 2,
-  glassyModulusPa: 1e9,
-  equilibriumModulusPa: 1e6,
-  slope: 0.6,
-});
+export const RUBBER: PronySeries = spectrum(1e-8, 1e3, 1e9, 1e6, 0.6);
 
 /** Relaxation: G(t) ∝ t^−0.9 through the window (steep, so one quantity suffices). */
-export const RELAXING: PronySeries = smoothProny({
-  tauMinS: 1e-4,
-  tauMaxS: 1e7,
-  modesPerDecade: 2,
-  glassyModulusPa: 1e12,
-  equilibriumModulusPa: 1e3,
-  slope: 0.9,
-});
+export const RELAXING: PronySeries = spectrum(1e-4, 1e7, 1e12, 1e3, 0.9);
 
 /**
  * 'Universal' WLF constants at about Tg + 50 K: C1 = 8.86, C2 = 101.6 K (Williams, Landel & Ferry,
@@ -81,60 +77,68 @@ const rel = {
   pointsPerDecade: 5,
 } as const;
 
-export const MELT_ARRHENIUS: Case = {
-  name: 'melt, Arrhenius 60 kJ/mol, 10 isotherms 150–240 °C',
+/** Temperature plan of a case: reference, number of isotherms, how many below it, step. */
+type Plan = [referenceK: number, count: number, below: number, stepK: number];
+
+/** One-component case on the window `base`, with temperatures from `plan`. */
+const oneComponent = (
+  name: string,
+  base: typeof osc | typeof rel,
+  [referenceK, count, below, stepK]: Plan,
+  prony: PronySeries,
+  law: ShiftLaw,
+): Case => ({
+  name,
   options: {
-    ...osc,
-    referenceK: 463.15,
-    temperaturesK: temperatures(463.15, 10, 4, 10),
-    components: [{ prony: MELT, law: ARRHENIUS_MELT }],
+    ...base,
+    referenceK,
+    temperaturesK: temperatures(referenceK, count, below, stepK),
+    components: [{ prony, law }],
   },
-};
-export const MELT_WLF_PB: Case = {
-  name: 'melt, WLF polybutadiene constants, 11 isotherms 0–50 °C',
-  options: {
-    ...osc,
-    referenceK: 298,
-    temperaturesK: temperatures(298, 11, 5, 5),
-    components: [{ prony: MELT, law: WLF_POLYBUTADIENE }],
-  },
-};
-export const MELT_WLF_UNIVERSAL: Case = {
-  name: 'melt, WLF universal constants, 11 isotherms 3 K apart',
-  options: {
-    ...osc,
-    referenceK: 400,
-    temperaturesK: temperatures(400, 11, 3, 3),
-    components: [{ prony: MELT, law: WLF_UNIVERSAL }],
-  },
-};
-export const RUBBER_WLF: Case = {
-  name: 'rubber transition, WLF universal constants, 10 isotherms 4 K apart',
-  options: {
-    ...osc,
-    referenceK: 300,
-    temperaturesK: temperatures(300, 10, 4, 4),
-    components: [{ prony: RUBBER, law: WLF_UNIVERSAL }],
-  },
-};
-export const RELAX_WLF: Case = {
-  name: 'relaxation, WLF universal constants, 10 isotherms 4 K apart',
-  options: {
-    ...rel,
-    referenceK: 300,
-    temperaturesK: temperatures(300, 10, 4, 4),
-    components: [{ prony: RELAXING, law: WLF_UNIVERSAL }],
-  },
-};
-export const RELAX_ARRHENIUS: Case = {
-  name: 'relaxation, Arrhenius 200 kJ/mol, 10 isotherms 4 K apart',
-  options: {
-    ...rel,
-    referenceK: 350,
-    temperaturesK: temperatures(350, 10, 4, 4),
-    components: [{ prony: RELAXING, law: ARRHENIUS_STEEP }],
-  },
-};
+});
+
+export const MELT_ARRHENIUS: Case = oneComponent(
+  'melt, Arrhenius 60 kJ/mol, 10 isotherms 150–240 °C',
+  osc,
+  [463.15, 10, 4, 10],
+  MELT,
+  ARRHENIUS_MELT,
+);
+export const MELT_WLF_PB: Case = oneComponent(
+  'melt, WLF polybutadiene constants, 11 isotherms 0–50 °C',
+  osc,
+  [298, 11, 5, 5],
+  MELT,
+  WLF_POLYBUTADIENE,
+);
+export const MELT_WLF_UNIVERSAL: Case = oneComponent(
+  'melt, WLF universal constants, 11 isotherms 3 K apart',
+  osc,
+  [400, 11, 3, 3],
+  MELT,
+  WLF_UNIVERSAL,
+);
+export const RUBBER_WLF: Case = oneComponent(
+  'rubber transition, WLF universal constants, 10 isotherms 4 K apart',
+  osc,
+  [300, 10, 4, 4],
+  RUBBER,
+  WLF_UNIVERSAL,
+);
+export const RELAX_WLF: Case = oneComponent(
+  'relaxation, WLF universal constants, 10 isotherms 4 K apart',
+  rel,
+  [300, 10, 4, 4],
+  RELAXING,
+  WLF_UNIVERSAL,
+);
+export const RELAX_ARRHENIUS: Case = oneComponent(
+  'relaxation, Arrhenius 200 kJ/mol, 10 isotherms 4 K apart',
+  rel,
+  [350, 10, 4, 4],
+  RELAXING,
+  ARRHENIUS_STEEP,
+);
 
 /** Two components with different shift laws: a thermorheologically complex (invented) blend. */
 export const BLEND: Case = {
@@ -145,25 +149,11 @@ export const BLEND: Case = {
     temperaturesK: temperatures(463.15, 10, 4, 10),
     components: [
       {
-        prony: smoothProny({
-          tauMinS: 1e-5,
-          tauMaxS: 1,
-          modesPerDecade: 2,
-          glassyModulusPa: 1e6,
-          equilibriumModulusPa: 0,
-          slope: 0.3,
-        }),
+        prony: spectrum(1e-5, 1, 1e6, 0, 0.3),
         law: { kind: 'arrhenius', activationEnergyJPerMol: 3e4 },
       },
       {
-        prony: smoothProny({
-          tauMinS: 1e-2,
-          tauMaxS: 1e2,
-          modesPerDecade: 2,
-          glassyModulusPa: 1e5,
-          equilibriumModulusPa: 0,
-          slope: 0.3,
-        }),
+        prony: spectrum(1e-2, 1e2, 1e5, 0, 0.3),
         law: { kind: 'arrhenius', activationEnergyJPerMol: 1.2e5 },
       },
     ],
@@ -173,14 +163,18 @@ export const BLEND: Case = {
 /** 8 % noise plus 30 % noise on the three lowest-x points of isotherms 8 and 9 (low torque). */
 export const LOW_TORQUE = { isothermIndices: [7, 8], count: 3, relativeNoise: 0.3 };
 
-export function make(c: Case, relativeNoise: number, seed: number, lowTorque = false) {
-  return syntheticIsotherms({
-    ...c.options,
+/** The noise, seed, optional low-torque outliers and invented name every fixture set shares. */
+function run(name: string, relativeNoise: number, seed: number, lowTorque: boolean) {
+  return {
     relativeNoise,
     seed,
     ...(lowTorque ? { outliers: LOW_TORQUE } : {}),
-    name: `invented ${c.name}`,
-  });
+    name: `invented ${name}`,
+  };
+}
+
+export function make(c: Case, relativeNoise: number, seed: number, lowTorque = false) {
+  return syntheticIsotherms({ ...c.options, ...run(c.name, relativeNoise, seed, lowTorque) });
 }
 
 /** Largest |estimated − true log10 aT| over the isotherms, decades. */
@@ -197,34 +191,32 @@ export interface CreepCase {
   options: Omit<SyntheticCreepOptions, 'relativeNoise' | 'seed'>;
 }
 const creep = { deformation: 'shear', tMinS: 1, tMaxS: 1000, pointsPerDecade: 5 } as const;
-export const CREEP_WLF: CreepCase = {
-  name: 'creep, WLF universal constants, 10 isotherms 4 K apart',
+const creepCase = (
+  name: string,
+  [referenceK, count, below, stepK]: Plan,
+  law: ShiftLaw,
+): CreepCase => ({
+  name,
   options: {
     ...creep,
-    referenceK: 300,
-    temperaturesK: temperatures(300, 10, 4, 4),
+    referenceK,
+    temperaturesK: temperatures(referenceK, count, below, stepK),
     prony: RELAXING,
-    law: WLF_UNIVERSAL,
+    law,
   },
-};
-export const CREEP_ARRHENIUS: CreepCase = {
-  name: 'creep, Arrhenius 200 kJ/mol, 10 isotherms 4 K apart',
-  options: {
-    ...creep,
-    referenceK: 350,
-    temperaturesK: temperatures(350, 10, 4, 4),
-    prony: RELAXING,
-    law: ARRHENIUS_STEEP,
-  },
-};
+});
+export const CREEP_WLF: CreepCase = creepCase(
+  'creep, WLF universal constants, 10 isotherms 4 K apart',
+  [300, 10, 4, 4],
+  WLF_UNIVERSAL,
+);
+export const CREEP_ARRHENIUS: CreepCase = creepCase(
+  'creep, Arrhenius 200 kJ/mol, 10 isotherms 4 K apart',
+  [350, 10, 4, 4],
+  ARRHENIUS_STEEP,
+);
 
 /** Creep set; `disturbed` gives the first three points of isotherms 8 and 9 30 % noise. */
 export function makeCreep(c: CreepCase, relativeNoise: number, seed: number, disturbed = false) {
-  return syntheticCreep({
-    ...c.options,
-    relativeNoise,
-    seed,
-    ...(disturbed ? { outliers: LOW_TORQUE } : {}),
-    name: `invented ${c.name}`,
-  });
+  return syntheticCreep({ ...c.options, ...run(c.name, relativeNoise, seed, disturbed) });
 }
