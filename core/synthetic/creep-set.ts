@@ -12,10 +12,11 @@ import type { Dataset, DeformationMode, Isotherm } from '../data/types';
 import type { PronySeries } from '../spectrum/prony-model';
 import type { RetardationSeries } from '../spectrum/creep-from-prony';
 import { creepCompliance, creepFromProny } from '../spectrum/creep-from-prony';
-import { densityFromExpansion, entropicBT } from '../models/shift-laws';
 import type { ShiftLaw } from './isotherm-set';
 import { shiftLawLog10aT } from './isotherm-set';
 import { seededRandom } from './random';
+import { pointNoise, syntheticBT, syntheticIsotherm } from './isotherm-frame';
+import type { SyntheticDensity, SyntheticOutliers } from './isotherm-frame';
 
 export interface SyntheticCreepOptions {
   /** 'shear' gives J(t) in 1/Pa; tension or bending give D(t), stored the same way. */
@@ -33,9 +34,9 @@ export interface SyntheticCreepOptions {
   /** Multiplicative noise, relative standard deviation (0.02 = 2 %). */
   relativeNoise: number;
   /** Optional disturbed early points: the first `count` points of each listed isotherm get `relativeNoise`. */
-  outliers?: { isothermIndices: number[]; count: number; relativeNoise: number };
+  outliers?: SyntheticOutliers;
   /** Optional density model for an entropic vertical shift. */
-  density?: { referenceDensity: number; volumetricExpansionPerK: number };
+  density?: SyntheticDensity;
   seed: number;
   name?: string;
 }
@@ -79,39 +80,17 @@ export function syntheticCreep(o: SyntheticCreepOptions): {
   const ts = timeGrid(o.tMinS, o.tMaxS, o.pointsPerDecade);
   const file = `${o.name ?? 'synthetic creep'}.csv`;
   const truth: SyntheticCreepTruth = { log10aT: [], log10bT: [], retardation };
-  let row = 1;
   const isotherms: Isotherm[] = o.temperaturesK.map((T, k) => {
-    const bT = o.density
-      ? entropicBT(
-          T,
-          o.referenceK,
-          densityFromExpansion(
-            T,
-            o.referenceK,
-            o.density.referenceDensity,
-            o.density.volumetricExpansionPerK,
-          ),
-          o.density.referenceDensity,
-        )
-      : 1;
+    const bT = syntheticBT(T, o.referenceK, o.density);
     const log10aT = shiftLawLog10aT(o.law, T, o.referenceK);
     truth.log10aT.push(log10aT);
     truth.log10bT.push(Math.log10(bT));
     const aT = 10 ** log10aT;
-    const disturbed = o.outliers?.isothermIndices.includes(k) ?? false;
     const compliance = ts.map((t, i) => {
-      const sd = disturbed && i < o.outliers!.count ? o.outliers!.relativeNoise : o.relativeNoise;
+      const sd = pointNoise(o.relativeNoise, o.outliers, k, i);
       return bT * creepCompliance(retardation, t / aT) * Math.exp(sd * rng.normal());
     });
-    return {
-      id: `T${String(k + 1).padStart(2, '0')}`,
-      temperatureK: T,
-      temperatureSpreadK: 0,
-      x: [...ts],
-      quantities: { creepCompliance: compliance },
-      mask: ts.map(() => true),
-      source: ts.map(() => ({ file, row: ++row })),
-    };
+    return syntheticIsotherm(k, T, ts, { creepCompliance: compliance }, file);
   });
   const dataset: Dataset = {
     name: o.name ?? 'synthetic creep',

@@ -6,13 +6,10 @@
 import type { Dataset, DeformationMode, Isotherm, QuantityId, TestKind } from '../data/types';
 import type { PronySeries } from '../spectrum/prony-model';
 import { pronyLoss, pronyRelaxation, pronyStorage } from '../spectrum/prony-model';
-import {
-  arrheniusLog10aT,
-  densityFromExpansion,
-  entropicBT,
-  wlfLog10aT,
-} from '../models/shift-laws';
+import { arrheniusLog10aT, wlfLog10aT } from '../models/shift-laws';
 import { seededRandom } from './random';
+import { pointNoise, syntheticBT, syntheticIsotherm } from './isotherm-frame';
+import type { SyntheticDensity, SyntheticOutliers } from './isotherm-frame';
 
 export type ShiftLaw =
   { kind: 'wlf'; c1: number; c2K: number } | { kind: 'arrhenius'; activationEnergyJPerMol: number };
@@ -37,9 +34,9 @@ export interface SyntheticOptions {
   /** Multiplicative noise, relative standard deviation (0.02 = 2 %). */
   relativeNoise: number;
   /** Optional low-torque outliers: the lowest `count` points of each listed isotherm get `relativeNoise`. */
-  outliers?: { isothermIndices: number[]; count: number; relativeNoise: number };
+  outliers?: SyntheticOutliers;
   /** Optional density model for an entropic vertical shift. */
-  density?: { referenceDensity: number; volumetricExpansionPerK: number };
+  density?: SyntheticDensity;
   seed: number;
   name?: string;
 }
@@ -69,28 +66,13 @@ export function syntheticIsotherms(o: SyntheticOptions): {
   const xs = logGrid(o.xMin, o.xMax, o.pointsPerDecade);
   const file = `${o.name ?? 'synthetic'}.csv`;
   const truth: SyntheticTruth = { log10aT: [], log10bT: [] };
-  let row = 1;
   const isotherms: Isotherm[] = o.temperaturesK.map((T, k) => {
-    const bT = o.density
-      ? entropicBT(
-          T,
-          o.referenceK,
-          densityFromExpansion(
-            T,
-            o.referenceK,
-            o.density.referenceDensity,
-            o.density.volumetricExpansionPerK,
-          ),
-          o.density.referenceDensity,
-        )
-      : 1;
+    const bT = syntheticBT(T, o.referenceK, o.density);
     truth.log10aT.push(shiftLawLog10aT(o.components[0].law, T, o.referenceK));
     truth.log10bT.push(Math.log10(bT));
     const shifts = o.components.map((c) => 10 ** shiftLawLog10aT(c.law, T, o.referenceK));
     const noisy = (v: number, i: number): number => {
-      const outlier = o.outliers && o.outliers.isothermIndices.includes(k) && i < o.outliers.count;
-      const sd = outlier ? o.outliers!.relativeNoise : o.relativeNoise;
-      return v * Math.exp(sd * rng.normal());
+      return v * Math.exp(pointNoise(o.relativeNoise, o.outliers, k, i) * rng.normal());
     };
     const quantities: Partial<Record<QuantityId, number[]>> = {};
     if (o.testKind === 'oscillatory') {
@@ -116,16 +98,7 @@ export function syntheticIsotherms(o: SyntheticOptions): {
         return noisy(s / bT, i);
       });
     }
-    const source = xs.map(() => ({ file, row: ++row }));
-    return {
-      id: `T${String(k + 1).padStart(2, '0')}`,
-      temperatureK: T,
-      temperatureSpreadK: 0,
-      x: [...xs],
-      quantities,
-      mask: xs.map(() => true),
-      source,
-    };
+    return syntheticIsotherm(k, T, xs, quantities, file);
   });
   const dataset: Dataset = {
     name: o.name ?? 'synthetic',
