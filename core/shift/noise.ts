@@ -7,10 +7,12 @@
  * A robust spread (1.4826·MAD) of the pooled standardised residuals is returned, in decades.
  */
 import { MAD_TO_SIGMA, medianAbs } from './robust';
+import { centredQuadraticSums, quadraticSums, S1, S2, S3, S4, T0, T1, T2 } from './local-quadratic';
 
 /**
  * Standardised residual at entry c of a least-squares quadratic through entries lo..hi (inclusive),
- * or NaN when the window cannot give one. Leverage from (M⁻¹)₀₀ with abscissae centred on c.
+ * or NaN when the window cannot give one. Leverage from (M⁻¹)₀₀ with abscissae centred on c;
+ * `m` is scratch space for the window sums.
  */
 function windowResidual(
   lx: ArrayLike<number>,
@@ -18,35 +20,16 @@ function windowResidual(
   lo: number,
   hi: number,
   c: number,
+  m: Float64Array,
 ): number {
-  let s0 = 0;
-  let s1 = 0;
-  let s2 = 0;
-  let s3 = 0;
-  let s4 = 0;
-  let t0 = 0;
-  let t1 = 0;
-  let t2 = 0;
-  for (let i = lo; i <= hi; i++) {
-    const x = lx[i] - lx[c];
-    const x2 = x * x;
-    s0 += 1;
-    s1 += x;
-    s2 += x2;
-    s3 += x2 * x;
-    s4 += x2 * x2;
-    t0 += y[i];
-    t1 += x * y[i];
-    t2 += x2 * y[i];
-  }
-  // Normal matrix M = [[s0 s1 s2][s1 s2 s3][s2 s3 s4]]; the fitted value at x = 0 is b0, and the
-  // leverage of entry c is (M⁻¹)₀₀ since its design row is (1, 0, 0).
-  const det = s0 * (s2 * s4 - s3 * s3) - s1 * (s1 * s4 - s3 * s2) + s2 * (s1 * s3 - s2 * s2);
+  const det = centredQuadraticSums(lx, y, lo, hi, c, m);
+  // The fitted value at x = 0 is b0, and the leverage of entry c is (M⁻¹)₀₀ since its design row
+  // is (1, 0, 0).
   if (!(Math.abs(det) > 1e-300)) return NaN;
-  const i00 = (s2 * s4 - s3 * s3) / det;
-  const i01 = -(s1 * s4 - s2 * s3) / det;
-  const i02 = (s1 * s3 - s2 * s2) / det;
-  const b0 = i00 * t0 + i01 * t1 + i02 * t2;
+  const i00 = (m[S2] * m[S4] - m[S3] * m[S3]) / det;
+  const i01 = -(m[S1] * m[S4] - m[S2] * m[S3]) / det;
+  const i02 = (m[S1] * m[S3] - m[S2] * m[S2]) / det;
+  const b0 = i00 * m[T0] + i01 * m[T1] + i02 * m[T2];
   if (!(i00 < 1 - 1e-9)) return NaN;
   return (y[c] - b0) / Math.sqrt(1 - i00);
 }
@@ -62,15 +45,16 @@ export function standardisedLocalResiduals(
   out: number[],
 ): void {
   const n = lx.length;
+  const sums = quadraticSums();
   if (n === 4) {
     for (const c of [1, 2]) {
-      const r = windowResidual(lx, y, 0, 3, c);
+      const r = windowResidual(lx, y, 0, 3, c, sums);
       if (Number.isFinite(r)) out.push(r);
     }
     return;
   }
   for (let c = 2; c < n - 2; c++) {
-    const r = windowResidual(lx, y, c - 2, c + 2, c);
+    const r = windowResidual(lx, y, c - 2, c + 2, c, sums);
     if (Number.isFinite(r)) out.push(r);
   }
 }

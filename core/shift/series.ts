@@ -5,6 +5,18 @@
  * weighted by its point count so the fit still counts every measured point once.
  */
 import type { FitSeries } from './problem';
+import {
+  centredQuadraticSums,
+  quadraticSums,
+  S0,
+  S1,
+  S2,
+  S3,
+  S4,
+  T0,
+  T1,
+  T2,
+} from './local-quadratic';
 
 export function buildSeries(
   lx: ArrayLike<number>,
@@ -125,31 +137,15 @@ export function localSlopes(lx: Float64Array, y: Float64Array): Float64Array {
     }
     return out;
   }
+  const m = quadraticSums();
   for (let c = 0; c < n; c++) {
     const lo = Math.max(0, Math.min(n - 5, c - 2));
-    let s0 = 0;
-    let s1 = 0;
-    let s2 = 0;
-    let s3 = 0;
-    let s4 = 0;
-    let t0 = 0;
-    let t1 = 0;
-    let t2 = 0;
-    for (let i = lo; i < lo + 5; i++) {
-      const x = lx[i] - lx[c];
-      const x2 = x * x;
-      s0 += 1;
-      s1 += x;
-      s2 += x2;
-      s3 += x2 * x;
-      s4 += x2 * x2;
-      t0 += y[i];
-      t1 += x * y[i];
-      t2 += x2 * y[i];
-    }
-    const det = s0 * (s2 * s4 - s3 * s3) - s1 * (s1 * s4 - s3 * s2) + s2 * (s1 * s3 - s2 * s2);
+    const det = centredQuadraticSums(lx, y, lo, lo + 4, c, m);
     // Coefficient b1 of the quadratic b0 + b1 x + b2 x² (Cramer's rule), the slope at x = 0.
-    const d1 = s0 * (t1 * s4 - s3 * t2) - t0 * (s1 * s4 - s3 * s2) + s2 * (s1 * t2 - t1 * s2);
+    const d1 =
+      m[S0] * (m[T1] * m[S4] - m[S3] * m[T2]) -
+      m[T0] * (m[S1] * m[S4] - m[S3] * m[S2]) +
+      m[S2] * (m[S1] * m[T2] - m[T1] * m[S2]);
     out[c] = det !== 0 ? d1 / det : 0;
   }
   return out;
