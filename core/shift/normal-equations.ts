@@ -13,12 +13,15 @@ import {
   robustCurvature as curvatureImport,
 } from './robust';
 import type { RobustLoss } from './types';
+import { addPairCross as crossImport, addPairOuter as outerImport } from './pair-scatter';
 
 // Local bindings (see residuals.ts): no getter per call under CommonJS transpilers.
 const LOSS_HUBER = HUBER_CODE;
 const robustRho = rhoImport;
 const robustWeight = weightImport;
 const robustCurvature = curvatureImport;
+const addPairOuter = outerImport;
+const addPairCross = crossImport;
 
 export class NormalSink {
   readonly size: number;
@@ -87,10 +90,7 @@ export class NormalSink {
       const wgg = wc * gi * gi;
       grad[i] += wg * r;
       grad[j] -= wg * r;
-      a[i * s + i] += wgg;
-      a[j * s + j] += wgg;
-      a[i * s + j] -= wgg;
-      a[j * s + i] -= wgg;
+      addPairOuter(a, s, i, j, wgg);
       const beta = betas[DR[m]];
       if (joint && beta !== 0) {
         const vi = n + i;
@@ -100,19 +100,9 @@ export class NormalSink {
         const wgb = wc * gi * beta;
         grad[vi] += wb * r;
         grad[vj] -= wb * r;
-        a[vi * s + vi] += wbb;
-        a[vj * s + vj] += wbb;
-        a[vi * s + vj] -= wbb;
-        a[vj * s + vi] -= wbb;
+        addPairOuter(a, s, vi, vj, wbb);
         // Cross terms h–v: (g, −g) ⊗ (β, −β).
-        a[i * s + vi] += wgb;
-        a[vi * s + i] += wgb;
-        a[j * s + vj] += wgb;
-        a[vj * s + j] += wgb;
-        a[i * s + vj] -= wgb;
-        a[vj * s + i] -= wgb;
-        a[j * s + vi] -= wgb;
-        a[vi * s + j] -= wgb;
+        addPairCross(a, s, i, j, vi, vj, wgb);
       }
     }
     return this;

@@ -4,15 +4,19 @@
  * (see there for the formulas); kept separate because this loop dominates the run time.
  */
 import type { FitProblem } from './problem';
-import { pairOverlap as pairOverlapImport } from './residuals';
+import { pairOffset as pairOffsetImport, pairOverlap as pairOverlapImport } from './residuals';
 import { NormalSink } from './normal-equations';
 import { lowerBound as lowerBoundImport, upperBound as upperBoundImport } from './series';
 import type { RobustLoss } from './types';
+import { addPairCross as crossImport, addPairOuter as outerImport } from './pair-scatter';
 
 // Local bindings (see residuals.ts).
 const lowerBound = lowerBoundImport;
 const upperBound = upperBoundImport;
 const pairOverlap = pairOverlapImport;
+const pairOffset = pairOffsetImport;
+const addPairOuter = outerImport;
+const addPairCross = crossImport;
 
 function walkInto(
   p: FitProblem,
@@ -25,12 +29,11 @@ function walkInto(
   const a = p.curves[owner][d];
   const b = p.curves[other][d];
   const n = p.curves.length;
-  const dh = theta[owner] - theta[other];
-  const shift = p.sigma * dh;
+  const shift = p.sigma * (theta[owner] - theta[other]);
   const alpha = p.alpha[d];
   const beta = p.beta[d];
   const joint = p.joint && beta !== 0;
-  const yOff = alpha * dh + (p.joint ? beta * (theta[n + owner] - theta[n + other]) : 0);
+  const yOff = pairOffset(p, owner, other, d, theta);
   const bx = b.lx;
   const by = b.y;
   const bInvW = b.invW;
@@ -107,27 +110,14 @@ function walkInto(
   const j = other;
   G[i] += gr;
   G[j] -= gr;
-  A[i * s + i] += aa;
-  A[j * s + j] += aa;
-  A[i * s + j] -= aa;
-  A[j * s + i] -= aa;
+  addPairOuter(A, s, i, j, aa);
   if (joint) {
     const vi = n + i;
     const vj = n + j;
     G[vi] += gv;
     G[vj] -= gv;
-    A[vi * s + vi] += av;
-    A[vj * s + vj] += av;
-    A[vi * s + vj] -= av;
-    A[vj * s + vi] -= av;
-    A[i * s + vi] += ahv;
-    A[vi * s + i] += ahv;
-    A[j * s + vj] += ahv;
-    A[vj * s + j] += ahv;
-    A[i * s + vj] -= ahv;
-    A[vj * s + i] -= ahv;
-    A[j * s + vi] -= ahv;
-    A[vi * s + j] -= ahv;
+    addPairOuter(A, s, vi, vj, av);
+    addPairCross(A, s, i, j, vi, vj, ahv);
   }
 }
 

@@ -46,6 +46,22 @@ export function pairOverlap(
   return overlapCount(a, b, shift) + overlapCount(b, a, -shift);
 }
 
+/**
+ * The constant part of the pair's residual, α(h_owner − h_other) + β(v_owner − v_other) in
+ * decades (β terms only in a joint fit); shared with the streaming walk (normal-walk.ts).
+ */
+export function pairOffset(
+  p: FitProblem,
+  owner: number,
+  other: number,
+  d: number,
+  theta: ArrayLike<number>,
+): number {
+  const n = p.curves.length;
+  const dh = theta[owner] - theta[other];
+  return p.alpha[d] * dh + (p.joint ? p.beta[d] * (theta[n + owner] - theta[n + other]) : 0);
+}
+
 function walk(
   p: FitProblem,
   owner: number,
@@ -56,12 +72,9 @@ function walk(
 ): void {
   const a = p.curves[owner][d];
   const b = p.curves[other][d];
-  const n = p.curves.length;
-  const dh = theta[owner] - theta[other];
-  const shift = p.sigma * dh;
+  const shift = p.sigma * (theta[owner] - theta[other]);
   const alpha = p.alpha[d];
-  const beta = p.beta[d];
-  const yOff = alpha * dh + (p.joint ? beta * (theta[n + owner] - theta[n + other]) : 0);
+  const yOff = pairOffset(p, owner, other, d, theta);
   const bx = b.lx;
   const by = b.y;
   const bw = b.w;
