@@ -1,25 +1,11 @@
 import { describe, it, expect } from 'vitest';
-import { draftColumns } from '../../../core/io/column-draft';
-import { planColumns } from '../../../core/io/column-plan';
 import { ImportError } from '../../../core/io/import-error';
-import { WarningSink } from '../../../core/io/warning-sink';
+import { planHeader } from './helpers/plan-header';
 import type { TestKind } from '../../../core/data/types';
 
 function plan(header: string[], testKind: TestKind | 'auto' = 'auto') {
-  const warnings = new WarningSink('a.csv', 100);
-  const drafts = draftColumns({
-    file: 'a.csv',
-    header,
-    headerRow: 1,
-    units: [],
-    unitsRow: 0,
-    ncols: header.length,
-    mappings: [],
-  });
-  return {
-    plan: planColumns(drafts, { file: 'a.csv', headerRow: 1, testKind, warnings }),
-    warnings: warnings.list,
-  };
+  const { plan: p, warnings } = planHeader(header, testKind);
+  return { plan: p, warnings: warnings.list };
 }
 
 describe('planColumns()', () => {

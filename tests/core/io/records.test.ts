@@ -1,27 +1,10 @@
 import { describe, it, expect } from 'vitest';
 import { buildRecords } from '../../../core/io/records';
 import { scanTable } from '../../../core/io/scan-table';
-import { draftColumns } from '../../../core/io/column-draft';
-import { planColumns } from '../../../core/io/column-plan';
-import { WarningSink } from '../../../core/io/warning-sink';
+import { planHeader } from './helpers/plan-header';
 
 function run(header: string[], body: string, fileT?: number) {
-  const sink = new WarningSink('a.csv', 100);
-  const drafts = draftColumns({
-    file: 'a.csv',
-    header,
-    headerRow: 1,
-    units: [],
-    unitsRow: 0,
-    ncols: header.length,
-    mappings: [],
-  });
-  const plan = planColumns(drafts, {
-    file: 'a.csv',
-    headerRow: 1,
-    testKind: 'auto',
-    warnings: sink,
-  });
+  const { plan, warnings: sink } = planHeader(header);
   const table = scanTable(body, 0, 2, {
     delimiter: 'comma',
     decimalComma: false,
