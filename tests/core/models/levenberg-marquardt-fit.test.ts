@@ -17,22 +17,32 @@ function closedFormLine(x: number[], y: number[], w: number[]): [number, number]
   return [(sxx * sy - sx * sxy) / d, (s * sxy - sx * sy) / d];
 }
 
+/** Six points on a rough line whose last point weighs ten times the others (invented). */
+const HEAVY_LAST = {
+  x: [0, 1, 2, 3, 4, 5],
+  y: [0.1, 1.2, 1.9, 3.2, 3.9, 6.0],
+  w: [1, 1, 1, 1, 1, 10],
+};
+
+/** Straight line p + q·t fitted by levenbergMarquardtFit from (0, 0). */
+function fitLine({ x, y, w }: { x: number[]; y: number[]; w: number[] }) {
+  return levenbergMarquardtFit({
+    x,
+    y,
+    weights: w,
+    model:
+      ([p, q]) =>
+      (t) =>
+        p + q * t,
+    initial: [0, 0],
+  });
+}
+
 describe('levenbergMarquardtFit()', () => {
   it('levenbergMarquardtFit() matches the closed-form weighted line with weights [1,1,1,1,1,10] (guards the ml-levenberg-marquardt 5.0.1 pin)', () => {
-    const x = [0, 1, 2, 3, 4, 5];
-    const y = [0.1, 1.2, 1.9, 3.2, 3.9, 6.0];
-    const w = [1, 1, 1, 1, 1, 10];
+    const { x, y, w } = HEAVY_LAST;
     const [a, b] = closedFormLine(x, y, w);
-    const fit = levenbergMarquardtFit({
-      x,
-      y,
-      weights: w,
-      model:
-        ([p, q]) =>
-        (t) =>
-          p + q * t,
-      initial: [0, 0],
-    });
+    const fit = fitLine(HEAVY_LAST);
     expect(fit.converged).toBe(true);
     // the heavy last point must pull the line: unweighted and weighted answers differ by > 0.05
     const [a1, b1] = closedFormLine(x, y, [1, 1, 1, 1, 1, 1]);
@@ -43,19 +53,8 @@ describe('levenbergMarquardtFit()', () => {
   });
 
   it('levenbergMarquardtFit() covariance equals the closed-form (XᵀWX)⁻¹·s² of a weighted line', () => {
-    const x = [0, 1, 2, 3, 4, 5];
-    const y = [0.1, 1.2, 1.9, 3.2, 3.9, 6.0];
-    const w = [1, 1, 1, 1, 1, 10];
-    const fit = levenbergMarquardtFit({
-      x,
-      y,
-      weights: w,
-      model:
-        ([p, q]) =>
-        (t) =>
-          p + q * t,
-      initial: [0, 0],
-    });
+    const { x, y, w } = HEAVY_LAST;
+    const fit = fitLine(HEAVY_LAST);
     const lin = weightedLinearFit(
       x.map((t) => [1, t]),
       y,
