@@ -2,8 +2,12 @@ import { describe, expect, it } from 'vitest';
 import { fitModelToOverlap } from '../../../core/models/overlap-constrained-fit';
 import { arrheniusLog10aT, wlfLog10aT } from '../../../core/models/shift-laws';
 import { overlapMismatch, prepareOverlap } from '../../../core/shift';
-import { smoothProny, syntheticIsotherms } from '../../../core/synthetic';
 import { expectAbsClose, expectRelClose } from '../../helpers/assert-close';
+import {
+  INVENTED_REFERENCE_K,
+  inventedWlfIsotherms,
+  inventedWlfProny,
+} from '../../helpers/invented-wlf-material';
 
 describe('fitModelToOverlap()', () => {
   it('fitModelToOverlap() recovers WLF constants from a quadratic objective around known shifts', () => {
@@ -41,26 +45,14 @@ describe('fitModelToOverlap()', () => {
   // C1 = 9, C2 = 100 K at 30 °C): the law's shifts land within 0.03 decades of the truth and the
   // mismatch at the fit is no worse than at the true constants (measured max deviation 0.002 decades).
   it('fitModelToOverlap() with the shift engine objective follows the true WLF shifts', () => {
-    const prony = smoothProny({
-      tauMinS: 1e-7,
-      tauMaxS: 1e3,
-      modesPerDecade: 3,
-      glassyModulusPa: 2e9,
-      equilibriumModulusPa: 2e6,
-    });
-    const refK = 303.15;
-    const { dataset } = syntheticIsotherms({
-      testKind: 'oscillatory',
-      deformation: 'shear',
-      referenceK: refK,
-      temperaturesK: [273.15, 283.15, 293.15, 303.15, 313.15, 323.15, 333.15],
-      components: [{ prony, law: { kind: 'wlf', c1: 9, c2K: 100 } }],
-      xMin: 0.1,
-      xMax: 100,
-      pointsPerDecade: 8,
-      relativeNoise: 0.01,
-      seed: 3,
-    });
+    const refK = INVENTED_REFERENCE_K;
+    const { dataset } = inventedWlfIsotherms(
+      inventedWlfProny(),
+      [273.15, 283.15, 293.15, 303.15, 313.15, 323.15, 333.15],
+      8,
+      0.01,
+      3,
+    );
     const prepared = prepareOverlap(dataset, { referenceK: refK, vertical: 'none' });
     const objective = {
       temperaturesK: prepared.temperaturesK,

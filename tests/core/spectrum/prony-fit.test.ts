@@ -1,30 +1,20 @@
 import { describe, expect, it } from 'vitest';
 import { fitProny, resolvePronyFitOptions } from '../../../core/spectrum/prony-fit';
 import { pronyLoss, pronyRelaxation, pronyStorage } from '../../../core/spectrum/prony-model';
-import { seededRandom, smoothProny, syntheticIsotherms } from '../../../core/synthetic';
+import { seededRandom, smoothProny } from '../../../core/synthetic';
 import { expectAbsClose, expectRelClose } from '../../helpers/assert-close';
+import { inventedWlfIsotherms, inventedWlfProny } from '../../helpers/invented-wlf-material';
 
 /** Reduced master-curve points from synthetic isotherms shifted by their true aT. */
 function syntheticMaster(noise: number, seed: number) {
-  const prony = smoothProny({
-    tauMinS: 1e-7,
-    tauMaxS: 1e3,
-    modesPerDecade: 3,
-    glassyModulusPa: 2e9,
-    equilibriumModulusPa: 2e6,
-  });
-  const { dataset, truth } = syntheticIsotherms({
-    testKind: 'oscillatory',
-    deformation: 'shear',
-    referenceK: 303.15,
-    temperaturesK: [263.15, 273.15, 283.15, 293.15, 303.15, 313.15, 323.15, 333.15],
-    components: [{ prony, law: { kind: 'wlf', c1: 9, c2K: 100 } }],
-    xMin: 0.1,
-    xMax: 100,
-    pointsPerDecade: 10,
-    relativeNoise: noise,
+  const prony = inventedWlfProny();
+  const { dataset, truth } = inventedWlfIsotherms(
+    prony,
+    [263.15, 273.15, 283.15, 293.15, 303.15, 313.15, 323.15, 333.15],
+    10,
+    noise,
     seed,
-  });
+  );
   const x: number[] = [];
   const storage: number[] = [];
   const loss: number[] = [];
