@@ -1,23 +1,15 @@
 import { describe, expect, it } from 'vitest';
-import { buildProblem } from '../../../core/shift/build-problem';
 import { offsetCovariance, offsetStdErrors } from '../../../core/shift/covariance';
 import { referenceWeights } from '../../../core/shift/reference';
 import type { SolveSettings } from '../../../core/shift/solve';
 import { solveOffsets } from '../../../core/shift/solve';
 import { expectRelClose } from '../../helpers/assert-close';
-import { make, MELT_ARRHENIUS } from './fixtures';
+import { horizontalProblem, make, MELT_ARRHENIUS } from './fixtures';
 
 describe('offsetStdErrors()', () => {
   const { dataset, truth } = make(MELT_ARRHENIUS, 0.02, 3);
   const n = dataset.isotherms.length;
-  const p = buildProblem(dataset, {
-    active: dataset.isotherms.map((_, k) => k),
-    drivers: ['storageModulus', 'lossModulus'],
-    fixedLog10bT: null,
-    joint: false,
-    minOverlapPoints: 4,
-    maxPointsPerDecade: 40,
-  });
+  const p = horizontalProblem(dataset);
   const temps = dataset.isotherms.map((i) => i.temperatureK);
   const ref = referenceWeights([...Array(n).keys()], temps, MELT_ARRHENIUS.options.referenceK);
   const coef = new Float64Array(n);

@@ -8,6 +8,8 @@
 import { smoothProny, syntheticCreep, syntheticIsotherms } from '../../../core/synthetic';
 import type { ShiftLaw, SyntheticCreepOptions, SyntheticOptions } from '../../../core/synthetic';
 import type { PronySeries } from '../../../core/spectrum/prony-model';
+import type { Dataset } from '../../../core/data/types';
+import { buildProblem } from '../../../core/shift/build-problem';
 
 /** Invented Prony spectrum, two modes per decade (all fixtures use this density). */
 const spectrum = (
@@ -175,6 +177,18 @@ function run(name: string, relativeNoise: number, seed: number, lowTorque: boole
 
 export function make(c: Case, relativeNoise: number, seed: number, lowTorque = false) {
   return syntheticIsotherms({ ...c.options, ...run(c.name, relativeNoise, seed, lowTorque) });
+}
+
+/** Fit problem over every isotherm of `dataset`, G′ and G″ as drivers, horizontal shifts only. */
+export function horizontalProblem(dataset: Dataset) {
+  return buildProblem(dataset, {
+    active: dataset.isotherms.map((_, k) => k),
+    drivers: ['storageModulus', 'lossModulus'],
+    fixedLog10bT: null,
+    joint: false,
+    minOverlapPoints: 4,
+    maxPointsPerDecade: 40,
+  });
 }
 
 /** Largest |estimated − true log10 aT| over the isotherms, decades. */

@@ -1,9 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { buildProblem } from '../../../core/shift/build-problem';
 import { scanPair } from '../../../core/shift/scan';
 import { syntheticIsotherms } from '../../../core/synthetic';
 import { expectAbsClose } from '../../helpers/assert-close';
-import { MELT_WLF_PB } from './fixtures';
+import { horizontalProblem, MELT_WLF_PB } from './fixtures';
 
 describe('scanPair()', () => {
   const { dataset, truth } = syntheticIsotherms({
@@ -11,14 +10,7 @@ describe('scanPair()', () => {
     relativeNoise: 0,
     seed: 1,
   });
-  const p = buildProblem(dataset, {
-    active: dataset.isotherms.map((_, k) => k),
-    drivers: ['storageModulus', 'lossModulus'],
-    fixedLog10bT: null,
-    joint: false,
-    minOverlapPoints: 4,
-    maxPointsPerDecade: 40,
-  });
+  const p = horizontalProblem(dataset);
   const settings = { step: 0.05, directionAllowance: 0.5, maxOffset: Infinity };
 
   it('scanPair() finds the offset of neighbouring noise-free isotherms within the fine step', () => {
