@@ -98,6 +98,13 @@ function fitStats(m: ModelFitStats): SummaryFit {
   };
 }
 
+/** A model's reference temperature (°C) followed by its fit statistics, in that key order. */
+function referencedFitStats(
+  m: ModelFitStats & { referenceK: number },
+): SummaryFit & { referenceTemperature: number } {
+  return { referenceTemperature: toCelsius(m.referenceK), ...fitStats(m) };
+}
+
 /** The stable summary of an analysis; plain JSON (no NaN, no functions). */
 export function analysisSummary(analysis: Analysis): AnalysisSummary {
   const { models: m, prony: p } = analysis;
@@ -127,8 +134,7 @@ export function analysisSummary(analysis: Analysis): AnalysisSummary {
       activationEnergy: m.arrhenius.activationEnergyKJPerMol,
       activationEnergyStdErr: m.arrhenius.activationEnergyKJPerMolStdErr,
       activationEnergyCi95: m.arrhenius.activationEnergyKJPerMolCi95,
-      referenceTemperature: toCelsius(m.arrhenius.referenceK),
-      ...fitStats(m.arrhenius),
+      ...referencedFitStats(m.arrhenius),
     };
   if (m.polynomial)
     models.polynomial = {
@@ -136,8 +142,7 @@ export function analysisSummary(analysis: Analysis): AnalysisSummary {
       a1StdErr: m.polynomial.a1PerKStdErr,
       a2: m.polynomial.a2PerK2,
       a2StdErr: m.polynomial.a2PerK2StdErr,
-      referenceTemperature: toCelsius(m.polynomial.referenceK),
-      ...fitStats(m.polynomial),
+      ...referencedFitStats(m.polynomial),
     };
   if (m.hint) models.hint = { ...m.hint };
   return {
