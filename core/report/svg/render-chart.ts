@@ -23,6 +23,20 @@ function ticksFor(s: Scale): Tick[] {
   return s.kind === 'log' ? logTicks(s.domain) : linearTicks(s.domain);
 }
 
+/** A coordinate as written into the SVG: a number, or one already rounded to text. */
+type Coord = number | string;
+
+/** Tick marks stand 5 px out at major ticks, 3 px at minor ones. */
+const tickLength = (major: boolean): number => (major ? 5 : 3);
+
+/** A grid line across the plot, solid at major ticks and faint at minor ones (CSS classes). */
+const gridLine = (x1: Coord, x2: Coord, y1: Coord, y2: Coord, major: boolean): string =>
+  `<line x1="${x1}" x2="${x2}" y1="${y1}" y2="${y2}" class="${major ? 'grid' : 'grid-minor'}"/>`;
+
+/** A tick mark outside the plot. */
+const tickLine = (x1: Coord, x2: Coord, y1: Coord, y2: Coord): string =>
+  `<line x1="${x1}" x2="${x2}" y1="${y1}" y2="${y2}" class="tick"/>`;
+
 export function renderChart(spec: ChartSpec): string {
   const right = MARGIN.right + (spec.colourBar ? COLOUR_BAR_WIDTH : 0);
   const x0 = MARGIN.left;
@@ -59,19 +73,13 @@ export function renderChart(spec: ChartSpec): string {
   const g: string[] = [];
   for (const t of ticksFor(sx)) {
     const x = round2(px(t.value));
-    g.push(
-      `<line x1="${x}" x2="${x}" y1="${y0}" y2="${y1}" class="${t.major ? 'grid' : 'grid-minor'}"/>`,
-    );
-    g.push(`<line x1="${x}" x2="${x}" y1="${y1}" y2="${y1 + (t.major ? 5 : 3)}" class="tick"/>`);
+    g.push(gridLine(x, x, y0, y1, t.major), tickLine(x, x, y1, y1 + tickLength(t.major)));
     if (t.label)
       g.push(`<text x="${x}" y="${y1 + 17}" text-anchor="middle">${escapeHtml(t.label)}</text>`);
   }
   for (const t of ticksFor(sy)) {
     const y = round2(py(t.value));
-    g.push(
-      `<line x1="${x0}" x2="${x1}" y1="${y}" y2="${y}" class="${t.major ? 'grid' : 'grid-minor'}"/>`,
-    );
-    g.push(`<line x1="${x0 - (t.major ? 5 : 3)}" x2="${x0}" y1="${y}" y2="${y}" class="tick"/>`);
+    g.push(gridLine(x0, x1, y, y, t.major), tickLine(x0 - tickLength(t.major), x0, y, y));
     if (t.label)
       g.push(
         `<text x="${x0 - 8}" y="${y}" dy="0.35em" text-anchor="end">${escapeHtml(t.label)}</text>`,
