@@ -10,6 +10,8 @@ import { join, relative } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { generateSamples } from '../../scripts/generate-samples';
 import { expectAbsClose, expectRelClose } from '../helpers/assert-close';
+import { readSampleTruth } from '../helpers/sample-truth';
+import type { SampleTruth } from '../helpers/sample-truth';
 
 const SAMPLES = fileURLToPath(new URL('../../samples', import.meta.url));
 
@@ -20,34 +22,6 @@ function listFiles(dir: string): string[] {
   });
 }
 
-interface Truth {
-  scenario: string;
-  layout: 'long' | 'per-isotherm' | 'wide' | 'ramp';
-  testKind: 'oscillatory' | 'relaxation';
-  files: string[];
-  fileUnits: { temperature: string; x: string; modulus: string };
-  referenceTemperatureK: number;
-  shiftLaw:
-    | { kind: 'wlf'; C1: number; C2K: number }
-    | { kind: 'arrhenius'; activationEnergyKJPerMol: number; gasConstantJPerMolK: number };
-  verticalShift:
-    | { kind: 'none' }
-    | { kind: 'density'; referenceDensityKgPerM3: number; volumetricExpansionPerK: number };
-  prony: { equilibriumModulusPa: number; modes: { tauS: number; modulusPa: number }[] };
-  noise: { relativeStdDev: number; lowTorque: { floorPa: number } | null };
-  xValuesInFileUnit: number[];
-  isotherms: {
-    setPointC: number;
-    meanTemperatureC: number;
-    spreadK: number;
-    points: number;
-    files: string[];
-    log10aT: number;
-    log10bT: number;
-    lowTorquePointIndices: number[];
-  }[];
-}
-
 /** One written point, parsed by this test's own reader (not the app's importer). */
 interface FilePoint {
   temperatureC: number;
@@ -56,8 +30,7 @@ interface FilePoint {
   loss: number;
 }
 
-const readTruth = (id: string): Truth =>
-  JSON.parse(readFileSync(join(SAMPLES, id, 'truth.json'), 'utf8')) as Truth;
+const readTruth = (id: string): SampleTruth => readSampleTruth(join(SAMPLES, id));
 
 const dataLines = (text: string): string[] =>
   text.split(/\r?\n/).filter((l) => l !== '' && !l.startsWith('#'));
@@ -65,7 +38,7 @@ const dataLines = (text: string): string[] =>
 const num = (cell: string): number => Number(cell.replace(',', '.'));
 
 /** Reads the points of one scenario, isotherm by isotherm in set-point order. */
-function readPoints(t: Truth): FilePoint[][] {
+function readPoints(t: SampleTruth): FilePoint[][] {
   const text = (f: string): string => readFileSync(join(SAMPLES, t.scenario, f), 'utf8');
   if (t.layout === 'long' || t.layout === 'ramp') {
     const split = (l: string): string[] => (t.layout === 'long' ? l.split(',') : l.split(/ +/));
@@ -101,7 +74,7 @@ function readPoints(t: Truth): FilePoint[][] {
 }
 
 /** Shift laws written out from their papers, independent of core/models. */
-function log10aT(t: Truth, temperatureK: number): number {
+function log10aT(t: SampleTruth, temperatureK: number): number {
   const dT = temperatureK - t.referenceTemperatureK;
   const law = t.shiftLaw;
   // WLF: Williams, Landel & Ferry, J. Am. Chem. Soc. 77, 3701 (1955), eq. for log aT.
@@ -114,7 +87,7 @@ function log10aT(t: Truth, temperatureK: number): number {
 }
 
 /** Entropic vertical shift bT = Tref·ρref/(T·ρ) (Ferry 1980), ρ = ρref/(1 + αV (T − Tref)). */
-function log10bT(t: Truth, temperatureK: number): number {
+function log10bT(t: SampleTruth, temperatureK: number): number {
   const v = t.verticalShift;
   if (v.kind === 'none') return 0;
   const rhoRatio = 1 / (1 + v.volumetricExpansionPerK * (temperatureK - t.referenceTemperatureK));
@@ -122,7 +95,11 @@ function log10bT(t: Truth, temperatureK: number): number {
 }
 
 /** Generalised Maxwell model (Ferry 1980, ch. 3) from truth.json's modes. */
-function model(t: Truth, temperatureC: number, xFile: number): { primary: number; loss: number } {
+function model(
+  t: SampleTruth,
+  temperatureC: number,
+  xFile: number,
+): { primary: number; loss: number } {
   const T = temperatureC + 273.15;
   const aT = 10 ** log10aT(t, T);
   const bT = 10 ** log10bT(t, T);

@@ -7,37 +7,20 @@ import type { ImportResult } from '../../../core/io';
 import { pronyLoss, pronyRelaxation, pronyStorage } from '../../../core/spectrum/prony-model';
 import type { PronySeries } from '../../../core/spectrum/prony-model';
 import { expectAbsClose, expectRelClose } from '../../helpers/assert-close';
+import { readSampleTruth } from '../../helpers/sample-truth';
+import type { SampleTruth } from '../../helpers/sample-truth';
 
 // The invented demo samples (samples/, written by scripts/generate-samples.ts) carry their true
 // model in truth.json: the importer must read each one back exactly as generated.
 const root = fileURLToPath(new URL('../../../samples/', import.meta.url));
-
-interface Truth {
-  testKind: string;
-  deformation: string;
-  files: string[];
-  fileUnits: { x: string };
-  xValuesInFileUnit: number[];
-  noise: { relativeStdDev: number };
-  temperature: { kind: string };
-  prony: { equilibriumModulusPa: number; modes: { tauS: number; modulusPa: number }[] };
-  isotherms: {
-    meanTemperatureC: number;
-    spreadK: number;
-    points: number;
-    files: string[];
-    log10aT: number;
-    log10bT: number;
-  }[];
-}
 
 const scenarios = readdirSync(root, { withFileTypes: true })
   .filter((d) => d.isDirectory())
   .map((d) => d.name)
   .sort();
 
-function load(dir: string): { truth: Truth; result: ImportResult } {
-  const truth = JSON.parse(readFileSync(join(root, dir, 'truth.json'), 'utf8')) as Truth;
+function load(dir: string): { truth: SampleTruth; result: ImportResult } {
+  const truth = readSampleTruth(join(root, dir));
   const files = truth.files.map((f) => ({
     name: f,
     text: readFileSync(join(root, dir, f), 'utf8'),
