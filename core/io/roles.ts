@@ -3,22 +3,38 @@ import { QUANTITY_IDS } from '../data/types';
 import type { UnitDimension } from '../units';
 import type { ColumnRole } from './types';
 
-/** What each column role measures, and the unit assumed when a file gives none. */
-export const ROLE_UNITS: Record<ColumnRole, { dimension: UnitDimension; defaultUnit: string }> = {
-  temperature: { dimension: 'temperature', defaultUnit: '°C' },
-  frequency: { dimension: 'frequency', defaultUnit: 'Hz' },
-  angularFrequency: { dimension: 'frequency', defaultUnit: 'rad/s' },
-  time: { dimension: 'time', defaultUnit: 's' },
-  storageModulus: { dimension: 'modulus', defaultUnit: 'Pa' },
-  lossModulus: { dimension: 'modulus', defaultUnit: 'Pa' },
-  complexModulus: { dimension: 'modulus', defaultUnit: 'Pa' },
-  relaxationModulus: { dimension: 'modulus', defaultUnit: 'Pa' },
-  complexViscosity: { dimension: 'viscosity', defaultUnit: 'Pa·s' },
-  creepCompliance: { dimension: 'compliance', defaultUnit: '1/Pa' },
-  phaseAngle: { dimension: 'angle', defaultUnit: '°' },
-  tanDelta: { dimension: 'dimensionless', defaultUnit: '' },
-  ignore: { dimension: 'dimensionless', defaultUnit: '' },
+/**
+ * Each column role once: what it measures, the unit assumed when a file gives none, and the words
+ * used for it in messages ("storage modulus", "tan δ" …).
+ */
+type RoleRow = [dimension: UnitDimension, defaultUnit: string, words: string];
+
+const ROLE_TABLE: Record<ColumnRole, RoleRow> = {
+  temperature: ['temperature', '°C', 'temperature'],
+  frequency: ['frequency', 'Hz', 'frequency'],
+  angularFrequency: ['frequency', 'rad/s', 'angular frequency'],
+  time: ['time', 's', 'time'],
+  storageModulus: ['modulus', 'Pa', 'storage modulus'],
+  lossModulus: ['modulus', 'Pa', 'loss modulus'],
+  complexModulus: ['modulus', 'Pa', 'complex modulus magnitude'],
+  relaxationModulus: ['modulus', 'Pa', 'relaxation modulus'],
+  complexViscosity: ['viscosity', 'Pa·s', 'complex viscosity magnitude'],
+  creepCompliance: ['compliance', '1/Pa', 'creep compliance'],
+  phaseAngle: ['angle', '°', 'phase angle'],
+  tanDelta: ['dimensionless', '', 'tan δ'],
+  ignore: ['dimensionless', '', 'ignored'],
 };
+
+/** One column of ROLE_TABLE, keyed by role (in the table's order). */
+const byRole = <T>(pick: (row: RoleRow) => T): Record<ColumnRole, T> =>
+  Object.fromEntries(Object.entries(ROLE_TABLE).map(([role, row]) => [role, pick(row)])) as Record<
+    ColumnRole,
+    T
+  >;
+
+/** What each column role measures, and the unit assumed when a file gives none. */
+export const ROLE_UNITS: Record<ColumnRole, { dimension: UnitDimension; defaultUnit: string }> =
+  byRole(([dimension, defaultUnit]) => ({ dimension, defaultUnit }));
 
 export const COLUMN_ROLES = Object.keys(ROLE_UNITS) as ColumnRole[];
 
@@ -40,18 +56,4 @@ export function testKindOf(q: QuantityId): TestKind {
 }
 
 /** Words for messages: "storage modulus", "tan δ" … */
-export const ROLE_WORDS: Record<ColumnRole, string> = {
-  temperature: 'temperature',
-  frequency: 'frequency',
-  angularFrequency: 'angular frequency',
-  time: 'time',
-  storageModulus: 'storage modulus',
-  lossModulus: 'loss modulus',
-  complexModulus: 'complex modulus magnitude',
-  relaxationModulus: 'relaxation modulus',
-  complexViscosity: 'complex viscosity magnitude',
-  creepCompliance: 'creep compliance',
-  phaseAngle: 'phase angle',
-  tanDelta: 'tan δ',
-  ignore: 'ignored',
-};
+export const ROLE_WORDS: Record<ColumnRole, string> = byRole(([, , words]) => words);
