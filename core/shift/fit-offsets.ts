@@ -16,7 +16,7 @@ import { offsetCovariance } from './covariance';
 import { solveOffsets } from './solve';
 import { startingOffsets } from './start';
 import { StatsSink } from './stats-sink';
-import type { FitInfo, RobustLoss } from './types';
+import type { FitInfo, ResolvedShiftOptions, RobustLoss } from './types';
 
 /** Cauchy tuning constant for 95 % efficiency under normal errors (Holland & Welsch 1977). */
 const CAUCHY_K = 2.385;
@@ -44,6 +44,26 @@ export interface OffsetFitInput {
   scanStep: number;
   directionAllowance: number | null;
   maxOffset: number;
+}
+
+/**
+ * The robust-loss, outlier and stopping fields of an OffsetFitInput, as the user's resolved shift
+ * options set them (the same for the horizontal fit and the van Gurp–Palmen vertical fit).
+ */
+export function robustFitSettings(
+  s: ResolvedShiftOptions,
+): Pick<
+  OffsetFitInput,
+  'loss' | 'scale' | 'flagOutliers' | 'outlierThreshold' | 'maxIterations' | 'toleranceDecades'
+> {
+  return {
+    loss: s.robustLoss,
+    scale: s.robustScaleDecades,
+    flagOutliers: s.flagOutliers,
+    outlierThreshold: s.outlierThreshold,
+    maxIterations: s.maxIterations,
+    toleranceDecades: s.toleranceDecades,
+  };
 }
 
 export interface OffsetFit {

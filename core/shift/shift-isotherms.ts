@@ -7,7 +7,7 @@ import type { Dataset } from '../data/types';
 import { buildProblem } from './build-problem';
 import { activeIsotherms } from './active';
 import type { OffsetFit } from './fit-offsets';
-import { fitOffsets } from './fit-offsets';
+import { fitOffsets, robustFitSettings } from './fit-offsets';
 import { resolveShiftOptions, ShiftOptionsError } from './options';
 import { runChecks } from './run-checks';
 import type {
@@ -75,12 +75,7 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
     referenceK: s.referenceK,
     locked: lockedByIndex,
     initial,
-    loss: s.robustLoss,
-    scale: s.robustScaleDecades,
-    flagOutliers: s.flagOutliers,
-    outlierThreshold: s.outlierThreshold,
-    maxIterations: s.maxIterations,
-    toleranceDecades: s.toleranceDecades,
+    ...robustFitSettings(s),
     scanStep: s.scanStepDecades,
     directionAllowance: s.reverseAllowanceDecades,
     maxOffset: Infinity,

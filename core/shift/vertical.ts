@@ -11,7 +11,7 @@ import type { Dataset } from '../data/types';
 import { buildProblem } from './build-problem';
 import { densityLog10bT } from './density-shift';
 import { quantityValues } from './drivers';
-import { fitOffsets } from './fit-offsets';
+import { fitOffsets, robustFitSettings } from './fit-offsets';
 import type { OffsetFit } from './fit-offsets';
 import type { ResolvedShiftOptions } from './types';
 import { ShiftOptionsError } from './options';
@@ -79,12 +79,7 @@ export function verticalShift(
     referenceK: s.referenceK,
     locked: new Map(),
     initial: null,
-    loss: s.robustLoss,
-    scale: s.robustScaleDecades,
-    flagOutliers: s.flagOutliers,
-    outlierThreshold: s.outlierThreshold,
-    maxIterations: s.maxIterations,
-    toleranceDecades: s.toleranceDecades,
+    ...robustFitSettings(s),
     scanStep: s.scanStepDecades / 5,
     directionAllowance: null,
     maxOffset: VGP_MAX_OFFSET,
