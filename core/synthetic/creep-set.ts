@@ -16,14 +16,11 @@ import type { ShiftLaw } from './isotherm-set';
 import { shiftLawLog10aT } from './isotherm-set';
 import { seededRandom } from './random';
 import { pointNoise, syntheticBT, syntheticIsotherm } from './isotherm-frame';
-import type { SyntheticDensity, SyntheticOutliers } from './isotherm-frame';
+import type { SyntheticSetOptions } from './isotherm-frame';
 
-export interface SyntheticCreepOptions {
+export interface SyntheticCreepOptions extends SyntheticSetOptions {
   /** 'shear' gives J(t) in 1/Pa; tension or bending give D(t), stored the same way. */
   deformation: DeformationMode;
-  /** Reference temperature of the true model, K. */
-  referenceK: number;
-  temperaturesK: number[];
   /** Relaxation Prony series of the material at Tref; its creep compliance is derived exactly. */
   prony: PronySeries;
   law: ShiftLaw;
@@ -31,14 +28,6 @@ export interface SyntheticCreepOptions {
   tMinS: number;
   tMaxS: number;
   pointsPerDecade: number;
-  /** Multiplicative noise, relative standard deviation (0.02 = 2 %). */
-  relativeNoise: number;
-  /** Optional disturbed early points: the first `count` points of each listed isotherm get `relativeNoise`. */
-  outliers?: SyntheticOutliers;
-  /** Optional density model for an entropic vertical shift. */
-  density?: SyntheticDensity;
-  seed: number;
-  name?: string;
 }
 
 export interface SyntheticCreepTruth {

@@ -20,6 +20,24 @@ export interface SyntheticOutliers {
   relativeNoise: number;
 }
 
+/** Options every synthetic set takes, whatever it measures. */
+export interface SyntheticSetOptions {
+  /** Reference temperature of the true model, K. */
+  referenceK: number;
+  temperaturesK: number[];
+  /** Multiplicative noise, relative standard deviation (0.02 = 2 %). */
+  relativeNoise: number;
+  /**
+   * Optional disturbed points: the first `count` points of each listed isotherm (the lowest ω, as
+   * at low torque, or the earliest t) get `relativeNoise`.
+   */
+  outliers?: SyntheticOutliers;
+  /** Optional density model for an entropic vertical shift. */
+  density?: SyntheticDensity;
+  seed: number;
+  name?: string;
+}
+
 /** bT at `temperatureK` (DOMAIN.md §2, entropic: Tref·ρref/(T·ρ)); 1 without a density model. */
 export function syntheticBT(
   temperatureK: number,

@@ -9,7 +9,7 @@ import { pronyLoss, pronyRelaxation, pronyStorage } from '../spectrum/prony-mode
 import { arrheniusLog10aT, wlfLog10aT } from '../models/shift-laws';
 import { seededRandom } from './random';
 import { pointNoise, syntheticBT, syntheticIsotherm } from './isotherm-frame';
-import type { SyntheticDensity, SyntheticOutliers } from './isotherm-frame';
+import type { SyntheticSetOptions } from './isotherm-frame';
 
 export type ShiftLaw =
   { kind: 'wlf'; c1: number; c2K: number } | { kind: 'arrhenius'; activationEnergyJPerMol: number };
@@ -19,26 +19,15 @@ export interface SyntheticComponent {
   law: ShiftLaw;
 }
 
-export interface SyntheticOptions {
+export interface SyntheticOptions extends SyntheticSetOptions {
   testKind: Exclude<TestKind, 'creep'>;
   deformation: DeformationMode;
-  /** Reference temperature of the true model, K. */
-  referenceK: number;
-  temperaturesK: number[];
   /** One component for a thermorheologically simple material; two or more make it complex. */
   components: SyntheticComponent[];
   /** Measurement window of the instrument: ω in rad/s or t in s. */
   xMin: number;
   xMax: number;
   pointsPerDecade: number;
-  /** Multiplicative noise, relative standard deviation (0.02 = 2 %). */
-  relativeNoise: number;
-  /** Optional low-torque outliers: the lowest `count` points of each listed isotherm get `relativeNoise`. */
-  outliers?: SyntheticOutliers;
-  /** Optional density model for an entropic vertical shift. */
-  density?: SyntheticDensity;
-  seed: number;
-  name?: string;
 }
 
 export interface SyntheticTruth {
