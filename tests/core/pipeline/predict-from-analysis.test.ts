@@ -41,6 +41,9 @@ const density = {
   referenceDensityKgPerM3: truth.verticalShift.referenceDensityKgPerM3,
   volumetricExpansionPerK: truth.verticalShift.volumetricExpansionPerK,
 };
+/** True aT of the generator's Arrhenius law (truth.json gives Ea in kJ/mol). */
+const trueAT = (T: number): number =>
+  10 ** arrheniusLog10aT(T, truth.shiftLaw.activationEnergyKJPerMol * 1000, Tref);
 const trueBT = (T: number): number =>
   entropicBT(
     T,
@@ -68,7 +71,7 @@ describe('predictFromAnalysis()', () => {
       temperatureK: T,
       omegaRadPerS: omega,
     });
-    const aT = 10 ** arrheniusLog10aT(T, truth.shiftLaw.activationEnergyKJPerMol * 1000, Tref);
+    const aT = trueAT(T);
     const expected = pronyStorage(trueSeries, aT * omega) / trueBT(T);
     // 5 %: 2 % noise on the invented data plus the Prony fit's own error (both stated in the issue)
     expectRelClose(p.value, expected, 0.05, "G' at 170 °C, 1 Hz");
@@ -88,7 +91,7 @@ describe('predictFromAnalysis()', () => {
       temperatureK: T,
       timeS: t,
     });
-    const aT = 10 ** arrheniusLog10aT(T, truth.shiftLaw.activationEnergyKJPerMol * 1000, Tref);
+    const aT = trueAT(T);
     // 10 %: G(t) comes from the series fitted to G′ and G″, a harder inversion near the terminal zone
     expectRelClose(
       p.value,
