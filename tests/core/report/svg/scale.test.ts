@@ -2,23 +2,21 @@ import { describe, it, expect } from 'vitest';
 import { drawable, niceDomain, project } from '../../../../core/report/svg/scale';
 import { expectAbsClose } from '../../../helpers/assert-close';
 
+const scale = <K extends 'log' | 'linear'>(
+  kind: K,
+  domain: [number, number],
+  range: [number, number],
+) => ({ kind, domain, range });
+
 describe('project()', () => {
   it('project() maps decades evenly on a log scale', () => {
-    const s = {
-      kind: 'log' as const,
-      domain: [1, 1000] as [number, number],
-      range: [0, 300] as [number, number],
-    };
+    const s = scale('log', [1, 1000], [0, 300]);
     expectAbsClose(project(s, 1), 0, 1e-9, 'exact up to rounding');
     expectAbsClose(project(s, 10), 100, 1e-9, 'exact up to rounding');
     expectAbsClose(project(s, 1000), 300, 1e-9, 'exact up to rounding');
   });
   it('project() handles an inverted pixel range (SVG y axis)', () => {
-    const s = {
-      kind: 'linear' as const,
-      domain: [0, 10] as [number, number],
-      range: [200, 0] as [number, number],
-    };
+    const s = scale('linear', [0, 10], [200, 0]);
     expectAbsClose(project(s, 2.5), 150, 1e-9, 'exact up to rounding');
   });
 });
