@@ -5,6 +5,7 @@ import { shiftModelBand } from '../../../core/models/shift-model-band';
 import { wlfLog10aT, arrheniusLog10aT } from '../../../core/models/shift-laws';
 import { seededRandom } from '../../../core/synthetic';
 import { expectRelClose } from '../../helpers/assert-close';
+import { lawPoints } from '../../helpers/law-points';
 
 const K = 273.15;
 const TEMPS = [0, 10, 20, 30, 40, 50, 60, 70, 80, 90].map((c) => c + K);
@@ -102,11 +103,11 @@ describe('fitWlf()', () => {
     const temps = [193, 213, 233, 253, 273, 298, 323, 348];
     const refK = 233;
     const moved = rereferenceWlf(3.44, 196.6, 298, refK);
-    const pts = temps.map((T) => ({
-      temperatureK: T,
-      log10aT: wlfLog10aT(T, 3.44, 196.6, 298) - wlfLog10aT(refK, 3.44, 196.6, 298),
-      stdErr: 0.01,
-    }));
+    const pts = lawPoints(
+      temps,
+      (T) => wlfLog10aT(T, 3.44, 196.6, 298) - wlfLog10aT(refK, 3.44, 196.6, 298),
+      0.01,
+    );
     const f = fitWlf(pts, { referenceK: refK });
     expectRelClose(f.c1, moved.c1, 1e-6, 'C1 at 233 K');
     const back = rereferenceWlf(f.c1, f.c2K, refK, 298);
@@ -118,11 +119,7 @@ describe('fitWlf()', () => {
     // (Ea/(R ln10))(1/T − 1/Tr) = −(Ea/(R ln10 Tr))(T − Tr)/T : WLF with its pole at 0 K
     const temps = [150, 170, 190, 210, 230].map((c) => c + K);
     const Tr = 190 + K;
-    const pts = temps.map((T) => ({
-      temperatureK: T,
-      log10aT: arrheniusLog10aT(T, 30e3, Tr),
-      stdErr: 0.01,
-    }));
+    const pts = lawPoints(temps, (T) => arrheniusLog10aT(T, 30e3, Tr), 0.01);
     const f = fitWlf(pts, { referenceK: Tr });
     expect(f.converged).toBe(true);
     expectRelClose(f.c2K, Tr, 1e-5, 'C2');
@@ -130,11 +127,7 @@ describe('fitWlf()', () => {
   });
 
   it('fitWlf() reports a runaway C2 when log10 aT is straight in T', () => {
-    const pts = [300, 310, 320, 330, 340].map((T) => ({
-      temperatureK: T,
-      log10aT: -0.05 * (T - 320),
-      stdErr: 0.01,
-    }));
+    const pts = lawPoints([300, 310, 320, 330, 340], (T) => -0.05 * (T - 320), 0.01);
     const f = fitWlf(pts, { referenceK: 320 });
     expect(f.converged).toBe(false);
     expect(f.reason).toMatch(/C2 ran away/);

@@ -6,6 +6,7 @@ import { fitWlf } from '../../../core/models/fit-wlf';
 import { arrheniusLog10aT, wlfLog10aT } from '../../../core/models/shift-laws';
 import { seededRandom } from '../../../core/synthetic';
 import type { ShiftPoint } from '../../../core/models/types';
+import { lawPoints } from '../../helpers/law-points';
 
 function fitAll(pts: ShiftPoint[], referenceK: number) {
   return {
@@ -21,14 +22,12 @@ describe('suggestShiftModel()', () => {
   it('suggestShiftModel() picks WLF for curved log aT near Tg', () => {
     const rng = seededRandom(1);
     const temps = [-10, 0, 10, 20, 30, 40, 50, 60].map((c) => c + K);
-    const pts = temps.map((T) => ({
-      temperatureK: T,
-      log10aT:
-        wlfLog10aT(T, 17.44, 51.6, -10 + K) -
-        wlfLog10aT(20 + K, 17.44, 51.6, -10 + K) +
-        0.01 * rng.normal(),
-      stdErr: 0.01,
-    }));
+    const pts = lawPoints(
+      temps,
+      (T) => wlfLog10aT(T, 17.44, 51.6, -10 + K) - wlfLog10aT(20 + K, 17.44, 51.6, -10 + K),
+      0.01,
+      rng,
+    );
     expect(suggestShiftModel(fitAll(pts, 20 + K)).recommended).toBe('wlf');
     const withTg = suggestShiftModel(fitAll(pts, 20 + K), -15 + K);
     expect(withTg.recommended).toBe('wlf');
@@ -38,11 +37,7 @@ describe('suggestShiftModel()', () => {
   it('suggestShiftModel() picks Arrhenius for a melt far above Tg', () => {
     const rng = seededRandom(2);
     const temps = [150, 170, 190, 210, 230].map((c) => c + K);
-    const pts = temps.map((T) => ({
-      temperatureK: T,
-      log10aT: arrheniusLog10aT(T, 30e3, 190 + K) + 0.01 * rng.normal(),
-      stdErr: 0.01,
-    }));
+    const pts = lawPoints(temps, (T) => arrheniusLog10aT(T, 30e3, 190 + K), 0.01, rng);
     const hint = suggestShiftModel(fitAll(pts, 190 + K));
     expect(hint.recommended).toBe('arrhenius');
     expect(suggestShiftModel(fitAll(pts, 190 + K), -100 + K).reasons.join(' ')).toMatch(
@@ -54,11 +49,7 @@ describe('suggestShiftModel()', () => {
   it('suggestShiftModel() avoids WLF when isotherms lie below Tg', () => {
     const rng = seededRandom(3);
     const temps = [-40, -30, -20, -10, 0].map((c) => c + K);
-    const pts = temps.map((T) => ({
-      temperatureK: T,
-      log10aT: arrheniusLog10aT(T, 80e3, -20 + K) + 0.01 * rng.normal(),
-      stdErr: 0.01,
-    }));
+    const pts = lawPoints(temps, (T) => arrheniusLog10aT(T, 80e3, -20 + K), 0.01, rng);
     const hint = suggestShiftModel(fitAll(pts, -20 + K), -10 + K);
     expect(hint.recommended).toBe('arrhenius');
     expect(hint.reasons[0]).toMatch(/below Tg/);

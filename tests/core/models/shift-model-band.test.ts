@@ -5,15 +5,17 @@ import { fitWlf } from '../../../core/models/fit-wlf';
 import { arrheniusLog10aT, wlfLog10aT } from '../../../core/models/shift-laws';
 import { seededRandom } from '../../../core/synthetic';
 import { expectAbsClose } from '../../helpers/assert-close';
+import { lawPoints } from '../../helpers/law-points';
 
 describe('shiftModelBand()', () => {
   it('shiftModelBand() for Arrhenius is t·SE(Ea)·|∂log10aT/∂Ea| (one parameter, analytic)', () => {
     const rng = seededRandom(2);
-    const pts = [400, 420, 440, 460, 480].map((T) => ({
-      temperatureK: T,
-      log10aT: arrheniusLog10aT(T, 40e3, 440) + 0.01 * rng.normal(),
-      stdErr: 0.01,
-    }));
+    const pts = lawPoints(
+      [400, 420, 440, 460, 480],
+      (T) => arrheniusLog10aT(T, 40e3, 440),
+      0.01,
+      rng,
+    );
     const f = fitArrhenius(pts, { referenceK: 440 });
     const [b] = shiftModelBand(f, [480]);
     const slope = arrheniusLog10aT(480, 1000, 440);
@@ -26,11 +28,12 @@ describe('shiftModelBand()', () => {
 
   it('shiftModelBand() for WLF is zero at Tr and narrower than propagating C1, C2 as if independent', () => {
     const rng = seededRandom(4);
-    const pts = [280, 290, 300, 310, 320, 330, 340].map((T) => ({
-      temperatureK: T,
-      log10aT: wlfLog10aT(T, 9, 100, 300) + 0.015 * rng.normal(),
-      stdErr: 0.015,
-    }));
+    const pts = lawPoints(
+      [280, 290, 300, 310, 320, 330, 340],
+      (T) => wlfLog10aT(T, 9, 100, 300),
+      0.015,
+      rng,
+    );
     const f = fitWlf(pts, { referenceK: 300 });
     const [atRef, cold] = shiftModelBand(f, [300, 280]);
     expect(atRef.stdErr).toBe(0);

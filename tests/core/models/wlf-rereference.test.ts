@@ -4,6 +4,7 @@ import { fitWlf } from '../../../core/models/fit-wlf';
 import { wlfLog10aT } from '../../../core/models/shift-laws';
 import { seededRandom } from '../../../core/synthetic';
 import { expectAbsClose, expectRelClose } from '../../helpers/assert-close';
+import { lawPoints } from '../../helpers/law-points';
 
 describe('rereferenceWlf()', () => {
   // Williams, Landel & Ferry, J. Am. Chem. Soc. 77, 3701 (1955): 'universal' constants
@@ -43,11 +44,12 @@ describe('rereferenceWlf()', () => {
 describe('rereferenceWlfFit()', () => {
   it('rereferenceWlfFit() carries the covariance so the band at any T is unchanged relative to the new zero', () => {
     const rng = seededRandom(5);
-    const pts = [280, 290, 300, 310, 320, 330, 340].map((T) => ({
-      temperatureK: T,
-      log10aT: wlfLog10aT(T, 9, 100, 300) + 0.01 * rng.normal(),
-      stdErr: 0.01,
-    }));
+    const pts = lawPoints(
+      [280, 290, 300, 310, 320, 330, 340],
+      (T) => wlfLog10aT(T, 9, 100, 300),
+      0.01,
+      rng,
+    );
     const f = fitWlf(pts, { referenceK: 300, glassTransitionK: 260 });
     const g = rereferenceWlfFit(f, 260);
     expectRelClose(g.c1, rereferenceWlf(f.c1, f.c2K, 300, 260).c1, 1e-12);
