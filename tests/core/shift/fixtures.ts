@@ -191,6 +191,24 @@ export function horizontalProblem(dataset: Dataset) {
   });
 }
 
+/**
+ * Appends to `z` the error over the standard error, (estimated − true log10 aT)/stdErr, of every
+ * isotherm that has a standard error, in isotherm order.
+ */
+export function pushStandardisedErrors(
+  z: number[],
+  curves: { log10aT: number | null; log10aTStdErr: number | null }[],
+  truth: number[],
+): void {
+  curves.forEach((cv, k) => {
+    if (cv.log10aTStdErr) z.push((cv.log10aT! - truth[k]) / cv.log10aTStdErr);
+  });
+}
+
+/** Root mean square of `z`. */
+export const rootMeanSquare = (z: number[]): number =>
+  Math.sqrt(z.reduce((a, b) => a + b * b, 0) / z.length);
+
 /** Largest |estimated − true log10 aT| over the isotherms, decades. */
 export function maxError(estimated: (number | null)[], truth: number[]): number {
   return estimated.reduce<number>(
