@@ -4,23 +4,10 @@
  * points; sorted by reduced abscissa. (core/shift's `masterCurve` does the same from a ShiftResult;
  * this one works from the analysis's curves, so it also serves curves edited after the fit.)
  */
-import type { AbscissaKind, Dataset, QuantityId } from '../data/types';
+import type { AbscissaKind, Dataset } from '../data/types';
 import { QUANTITY_IDS } from '../data/types';
+import { reducedAbscissa, reductionFactor } from '../data/reduction';
 import type { AnalysisCurve, AnalysisMasterCurve } from './types';
-
-function verticalFactor(q: QuantityId, aT: number, bT: number): number {
-  switch (q) {
-    case 'tanDelta':
-    case 'phaseAngle':
-      return 1;
-    case 'creepCompliance':
-      return 1 / bT;
-    case 'complexViscosity':
-      return bT / aT;
-    default:
-      return bT;
-  }
-}
 
 export function reduceToMasterCurve(
   dataset: Dataset,
@@ -41,13 +28,13 @@ export function reduceToMasterCurve(
     iso.x.forEach((x, i) => {
       if (!iso.mask[i]) return;
       rows.push({
-        x: abscissa === 'angularFrequency' ? aT * x : x / aT,
+        x: reducedAbscissa(abscissa, x, aT),
         id: iso.id,
         T: iso.temperatureK,
         outlier: outliers.has(i),
         v: present.map((q) => {
           const arr = iso.quantities[q];
-          return arr ? arr[i] * verticalFactor(q, aT, bT) : NaN;
+          return arr ? arr[i] * reductionFactor(q, aT, bT) : NaN;
         }),
       });
     });
