@@ -7,6 +7,7 @@ import type { IpcMainInvokeEvent } from 'electron';
 import type { IpcChannel, IpcRequest, IpcResponse } from '../shared/ipc-channels';
 import { IPC_SCHEMAS } from '../shared/ipc-schemas';
 import { ipcFail, ipcOk, type IpcResult } from '../shared/ipc-result';
+import { isSameOrigin } from './origin';
 
 /** The part of ipcMain used here. */
 export interface IpcMainLike {
@@ -21,20 +22,24 @@ export type SenderCheck = (event: IpcMainInvokeEvent) => boolean;
 /** The fields of the app window that identify it. */
 export interface AppWindowRef {
   webContentsId: number;
-  /** URL prefix the app is loaded from (file:///…/out/renderer/ or the dev server origin). */
-  urlPrefix: string;
+  /**
+   * The one origin the app page is served from: app://thermoshift, or in an unpackaged run the
+   * dev server's exact origin (renderer-source.ts).
+   */
+  origin: string;
 }
 
 /**
- * True when the request comes from the main frame of the app window, showing an app page.
- * Subframes and other windows are refused (Electron security checklist: validate the sender).
+ * True when the request comes from the main frame of the app window, showing a page of the app's
+ * origin (same scheme, host and port). Subframes and other windows are refused (Electron
+ * security checklist: validate the sender).
  */
 export function isTrustedSender(event: IpcMainInvokeEvent, app: AppWindowRef | null): boolean {
   if (!app) return false;
   const frame = event.senderFrame;
   if (!frame || event.sender.id !== app.webContentsId) return false;
   if (frame !== event.sender.mainFrame) return false;
-  return frame.url.startsWith(app.urlPrefix);
+  return isSameOrigin(frame.url, app.origin);
 }
 
 export type Handler<C extends IpcChannel> = (

@@ -1,28 +1,34 @@
 /**
  * Electron main process: only wires the setupX() modules together (as Electron Fiddle does).
  */
-import { app, BrowserWindow, ipcMain } from 'electron';
+import { app, BrowserWindow, ipcMain, protocol } from 'electron';
 import { join } from 'node:path';
-import { fileURLToPath, pathToFileURL } from 'node:url';
+import { fileURLToPath } from 'node:url';
+import { registerAppScheme, serveAppFiles } from './app-protocol';
 import { isTrustedSender, type AppWindowRef } from './ipc';
 import { createRecentStore } from './recent-files';
+import { rendererSource } from './renderer-source';
 import { setupAutosave } from './setup-autosave';
 import { setupFiles } from './setup-files';
 import { setupSecurity } from './setup-security';
 import { createMainWindow } from './window';
 
 const here = fileURLToPath(new URL('.', import.meta.url));
-const rendererFile = join(here, '../renderer/index.html');
-const devUrl = process.env.ELECTRON_RENDERER_URL;
+/** The packaged app: ELECTRON_RENDERER_URL is ignored and DevTools are off. */
+const packaged = app.isPackaged;
+const source = rendererSource({ packaged, devUrl: process.env.ELECTRON_RENDERER_URL });
 
 let win: BrowserWindow | null = null;
 let appRef: AppWindowRef | null = null;
 
+// Custom schemes must be declared before the app is ready.
+registerAppScheme(protocol);
 app.enableSandbox();
 
 void app.whenReady().then(() => {
   // The session exists only once the app is ready; windows are made after this.
-  setupSecurity(devUrl);
+  serveAppFiles(protocol, join(here, '../renderer'));
+  setupSecurity({ devUrl: source.devUrl, devTools: !packaged });
   const ipc = {
     ipcMain,
     isTrusted: (e: Electron.IpcMainInvokeEvent) => isTrustedSender(e, appRef),
@@ -36,11 +42,10 @@ void app.whenReady().then(() => {
   setupAutosave(join(userData, 'autosave.thermoshift.json'), ipc);
 
   const open = (): void => {
-    win = createMainWindow(join(here, '../preload/preload.cjs'), { file: rendererFile, devUrl });
-    appRef = {
-      webContentsId: win.webContents.id,
-      urlPrefix: devUrl ? new URL(devUrl).origin : pathToFileURL(join(here, '../renderer/')).href,
-    };
+    win = createMainWindow(join(here, '../preload/preload.cjs'), source.url, {
+      devTools: !packaged,
+    });
+    appRef = { webContentsId: win.webContents.id, origin: source.origin };
     win.on('closed', () => {
       win = null;
       appRef = null;

@@ -4,7 +4,15 @@
  */
 import { BrowserWindow, type BrowserWindowConstructorOptions } from 'electron';
 
-export function mainWindowOptions(preloadPath: string): BrowserWindowConstructorOptions {
+export interface MainWindowSettings {
+  /** Whether DevTools can be opened: only when the app is not packaged. @default false */
+  devTools?: boolean;
+}
+
+export function mainWindowOptions(
+  preloadPath: string,
+  { devTools = false }: MainWindowSettings = {},
+): BrowserWindowConstructorOptions {
   return {
     width: 1440,
     height: 920,
@@ -26,20 +34,19 @@ export function mainWindowOptions(preloadPath: string): BrowserWindowConstructor
       experimentalFeatures: false,
       navigateOnDragDrop: false,
       spellcheck: false,
+      devTools,
     },
   };
 }
 
-/** Where the renderer comes from: the built file, or electron-vite's dev server in development. */
-export interface RendererLocation {
-  file: string;
-  devUrl?: string;
-}
-
-export function createMainWindow(preloadPath: string, where: RendererLocation): BrowserWindow {
-  const win = new BrowserWindow(mainWindowOptions(preloadPath));
+/** Opens the window on `url`: app://thermoshift/index.html, or the dev server when unpackaged. */
+export function createMainWindow(
+  preloadPath: string,
+  url: string,
+  settings: MainWindowSettings = {},
+): BrowserWindow {
+  const win = new BrowserWindow(mainWindowOptions(preloadPath, settings));
   win.once('ready-to-show', () => win.show());
-  if (where.devUrl) void win.loadURL(where.devUrl);
-  else void win.loadFile(where.file);
+  void win.loadURL(url);
   return win;
 }

@@ -26,7 +26,7 @@ function fakeContents() {
 describe('isSafeExternalUrl()', () => {
   it.each([
     ['https://example.org/docs', true],
-    ['http://example.org', true],
+    ['http://example.org', false],
     ['file:///etc/passwd', false],
     ['javascript:alert(1)', false],
     ['smb://server/share', false],
@@ -43,6 +43,12 @@ describe('lockDownContents()', () => {
     expect(f.fire('will-attach-webview')).toBe(true);
   });
 
+  it('lockDownContents() prevents navigation in any frame (will-frame-navigate)', () => {
+    const f = fakeContents();
+    lockDownContents(f.contents, vi.fn());
+    expect(f.fire('will-frame-navigate')).toBe(true);
+  });
+
   it('lockDownContents() denies every new window and hands only http(s) links to the browser', () => {
     const openExternal = vi.fn();
     const f = fakeContents();
@@ -52,18 +58,68 @@ describe('lockDownContents()', () => {
     expect(openExternal).toHaveBeenCalledTimes(1);
     expect(openExternal).toHaveBeenCalledWith('https://example.org/');
   });
+
+  it('lockDownContents() never hands plain http, mail or custom-scheme links to the browser', () => {
+    const openExternal = vi.fn();
+    const f = fakeContents();
+    lockDownContents(f.contents, openExternal);
+    for (const url of [
+      'http://example.org/',
+      'mailto:a@b.c',
+      'smb://server/x',
+      'app://thermoshift/',
+    ])
+      expect(f.open(url)).toEqual({ action: 'deny' });
+    expect(openExternal).not.toHaveBeenCalled();
+  });
 });
 
 describe('isAllowedRequest()', () => {
   it('isAllowedRequest() lets the app load its own files and refuses remote content', () => {
-    expect(isAllowedRequest('file:///opt/thermoshift/out/renderer/index.html')).toBe(true);
+    expect(isAllowedRequest('app://thermoshift/index.html')).toBe(true);
+    expect(isAllowedRequest('file:///opt/thermoshift/out/renderer/index.html')).toBe(false);
     expect(isAllowedRequest('data:image/png;base64,AAAA')).toBe(true);
     expect(isAllowedRequest('https://cdn.example.org/lib.js')).toBe(false);
     expect(isAllowedRequest('http://localhost:5173/src/main.ts')).toBe(false);
   });
 
   it('isAllowedRequest() allows the dev server origin only when one is given', () => {
-    expect(isAllowedRequest('http://localhost:5173/x.js', 'http://localhost:5173/')).toBe(true);
-    expect(isAllowedRequest('http://localhost:5174/x.js', 'http://localhost:5173/')).toBe(false);
+    const dev = { devUrl: 'http://localhost:5173/' };
+    expect(isAllowedRequest('http://localhost:5173/x.js', dev)).toBe(true);
+    expect(isAllowedRequest('http://localhost:5174/x.js', dev)).toBe(false);
+  });
+
+  it('isAllowedRequest() refuses every file: URL, other app hosts and other schemes', () => {
+    for (const url of [
+      'file:///etc/passwd',
+      'file:///opt/thermoshift/resources/app.asar/out/renderer/index.html',
+      'FILE:///C:/Windows/win.ini',
+      'app://other/index.html',
+      'app://thermoshift.evil/x.js',
+      'ws://localhost:5173/',
+      'ftp://example.org/x',
+      'javascript:alert(1)',
+    ])
+      expect(isAllowedRequest(url), url).toBe(false);
+    expect(isAllowedRequest('blob:app://thermoshift/1234')).toBe(true);
+  });
+
+  it('isAllowedRequest() refuses devtools: and chrome-extension: unless DevTools are allowed', () => {
+    for (const url of [
+      'devtools://devtools/bundled/inspector.html',
+      'chrome-extension://abc/x.js',
+    ]) {
+      expect(isAllowedRequest(url), url).toBe(false);
+      expect(isAllowedRequest(url, { devUrl: 'http://localhost:5173/' }), url).toBe(false);
+      expect(isAllowedRequest(url, { devTools: true }), url).toBe(true);
+    }
+  });
+
+  it("isAllowedRequest() lets the dev server's HMR socket through only in a dev run", () => {
+    const dev = { devUrl: 'http://localhost:5173/' };
+    expect(isAllowedRequest('ws://localhost:5173/?token=x', dev)).toBe(true);
+    expect(isAllowedRequest('ws://localhost:5174/', dev)).toBe(false);
+    expect(isAllowedRequest('wss://localhost:5173/', dev)).toBe(false);
+    expect(isAllowedRequest('ws://localhost:5173/')).toBe(false);
   });
 });
