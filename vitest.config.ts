@@ -41,6 +41,8 @@ export default mergeConfig(
             root,
             environment: 'node',
             include: ['tests/e2e/**/*.test.ts'],
+            // Builds dist/web and out/ when missing or stale (runs only when e2e tests run).
+            globalSetup: ['tests/e2e/global-setup.ts'],
             testTimeout: 120_000,
             hookTimeout: 120_000,
             fileParallelism: false,
