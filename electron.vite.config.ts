@@ -1,12 +1,13 @@
 /**
  * electron-vite builds the three parts of the desktop app into out/: main (ESM), preload (CommonJS
  * `preload.cjs`, because sandboxed preloads cannot be ES modules) and the renderer (the same page
- * `npm run web` serves, root app/renderer). Dependencies are bundled, so out/** is self-contained
- * for electron-builder.
+ * `npm run web` serves, root app/renderer), which main serves on app://thermoshift/. Dependencies
+ * are bundled, so out/** is self-contained for electron-builder.
  */
 import { defineConfig } from 'electron-vite';
 import vue from '@vitejs/plugin-vue';
 import { fileURLToPath } from 'node:url';
+import { devStyleNonce } from './scripts/vite-dev-style-nonce.ts';
 
 const at = (p: string): string => fileURLToPath(new URL(p, import.meta.url));
 
@@ -33,7 +34,7 @@ export default defineConfig({
     root: at('./app/renderer'),
     base: './',
     publicDir: false,
-    plugins: [vue()],
+    plugins: [vue(), devStyleNonce()],
     worker: { format: 'es' },
     build: {
       outDir: at('./out/renderer'),

@@ -3,7 +3,8 @@
  * is imported, the reference temperature changes, an isotherm is excluded, a curve is dragged,
  * the drag is undone, results are exported, the analysis is saved and reopened, and the autosave
  * restores it after a reload. Assertions are on visible text and numbers and on painted pixels;
- * screenshots of every view go to test-results/artifacts/.
+ * screenshots of every view go to test-results/artifacts/. The last test checks that the whole
+ * session ran under the page's CSP without a violation.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { preview, type PreviewServer } from 'vite';
@@ -12,6 +13,7 @@ import { mkdirSync, readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { ARTIFACT_DIR, launchBrowser } from '../helpers/browser';
 import { expectAbsClose } from '../helpers/assert-close';
+import { watchCsp, type CspWatch } from '../helpers/csp-watch';
 
 const ROOT = process.cwd();
 const SEAL = join(ROOT, 'samples', 'seal-dma');
@@ -19,6 +21,7 @@ const SEAL = join(ROOT, 'samples', 'seal-dma');
 let server: PreviewServer;
 let ctx: BrowserContext;
 let page: Page;
+let csp: CspWatch;
 
 const shot = (name: string): Promise<Buffer> =>
   page.screenshot({ path: join(ARTIFACT_DIR, `app-${name}.png`) });
@@ -62,6 +65,7 @@ beforeAll(async () => {
   });
   ctx = await launchBrowser();
   page = await ctx.newPage();
+  csp = await watchCsp(page);
   page.on('pageerror', (e) => console.error('page error:', e.message));
   await page.goto(server.resolvedUrls!.local[0]);
 });
@@ -321,5 +325,10 @@ describe('the Thermoshift app in Chromium', () => {
     expect(await page.innerText('[aria-label="Keyboard shortcuts"]')).toMatch(/Ctrl\+Z/);
     await shot('shortcuts');
     await page.keyboard.press('Escape');
+  });
+
+  it('did all of the above under the page’s CSP without a single violation', () => {
+    expect(csp.violations, 'securitypolicyviolation events').toEqual([]);
+    expect(csp.cspConsoleErrors, 'CSP console errors').toEqual([]);
   });
 });

@@ -2,6 +2,7 @@
  * The analysis worker: imports and master-curve fits run here, so the window never blocks.
  * One request at a time; the renderer coalesces requests so no stale work piles up.
  */
+import '../zod-without-eval';
 import type { WorkerInbound, WorkerOutbound } from './engine-protocol';
 import { runRequest } from './run-request';
 
