@@ -7,11 +7,18 @@
  * session ran under the page's CSP without a violation.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { preview, type PreviewServer } from 'vite';
+import type { PreviewServer } from 'vite';
 import type { BrowserContext, Page } from 'playwright-core';
-import { mkdirSync, readdirSync, readFileSync } from 'node:fs';
+import { mkdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { ARTIFACT_DIR, launchBrowser } from '../helpers/browser';
+import {
+  ARTIFACT_DIR,
+  closePreview,
+  launchBrowser,
+  openInImportPreview,
+  previewWebBuild,
+  sealSampleFiles,
+} from '../helpers/browser';
 import { expectAbsClose } from '../helpers/assert-close';
 import { watchCsp, type CspWatch } from '../helpers/csp-watch';
 
@@ -57,12 +64,7 @@ async function settled(): Promise<void> {
 
 beforeAll(async () => {
   mkdirSync(ARTIFACT_DIR, { recursive: true });
-  server = await preview({
-    root: ROOT,
-    configFile: join(ROOT, 'vite.config.ts'),
-    preview: { host: '127.0.0.1', port: 0, strictPort: false },
-    logLevel: 'warn',
-  });
+  server = await previewWebBuild();
   ctx = await launchBrowser();
   page = await ctx.newPage();
   csp = await watchCsp(page);
@@ -72,7 +74,7 @@ beforeAll(async () => {
 
 afterAll(async () => {
   await ctx?.close();
-  await new Promise<void>((r) => server?.httpServer.close(() => r()));
+  await closePreview(server);
 });
 
 describe('the Thermoshift app in Chromium', () => {
@@ -101,13 +103,7 @@ describe('the Thermoshift app in Chromium', () => {
   });
 
   it('imports a sample through the import preview', async () => {
-    const files = readdirSync(SEAL)
-      .filter((f) => f.endsWith('.txt'))
-      .map((f) => join(SEAL, f));
-    const chooser = page.waitForEvent('filechooser');
-    await page.click('[data-role="open-data"]');
-    await (await chooser).setFiles(files);
-    await page.waitForSelector('[data-role="import-groups"] tr');
+    await openInImportPreview(page, sealSampleFiles());
     expect(await page.locator('[data-role="import-groups"] tr').count()).toBe(11);
     await shot('import-preview');
     await page.click('[data-role="import-accept"]');

@@ -9,17 +9,22 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createServer as createHttpServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
-import { mkdtempSync, readFileSync, readdirSync } from 'node:fs';
+import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { createServer, preview, type PreviewServer, type ViteDevServer } from 'vite';
+import { createServer, type PreviewServer, type ViteDevServer } from 'vite';
 import type { BrowserContext, Page } from 'playwright-core';
-import { launchBrowser } from '../helpers/browser';
+import {
+  closePreview,
+  launchBrowser,
+  openInImportPreview,
+  previewWebBuild,
+  sealSampleFiles,
+} from '../helpers/browser';
 import { cspOfHtml, parseCsp, watchCsp, type CspWatch } from '../helpers/csp-watch';
 import { APP_ORIGIN, createAppFileHandler } from '../../app/main/app-protocol';
 
 const ROOT = process.cwd();
-const SEAL = join(ROOT, 'samples', 'seal-dma');
 
 async function settled(page: Page): Promise<void> {
   await page.waitForSelector('[data-role="busy"][aria-busy="false"]');
@@ -37,15 +42,20 @@ async function walkThrough(page: Page): Promise<void> {
   await page.keyboard.press('F1');
   await page.waitForSelector('[aria-label="Keyboard shortcuts"]');
   await page.keyboard.press('Escape');
-  const files = readdirSync(SEAL)
-    .filter((f) => f.endsWith('.txt'))
-    .map((f) => join(SEAL, f));
-  const chooser = page.waitForEvent('filechooser');
-  await page.click('[data-role="open-data"]');
-  await (await chooser).setFiles(files);
-  await page.waitForSelector('[data-role="import-groups"] tr');
+  await openInImportPreview(page, sealSampleFiles());
   await page.click('[data-role="import-cancel"]');
   await settled(page);
+}
+
+/** A fresh Chromium profile with one page, watched for CSP violations, opened at `url`. */
+async function openWatched(
+  url: string,
+): Promise<{ ctx: BrowserContext; page: Page; watch: CspWatch }> {
+  const ctx = await launchBrowser();
+  const page = await ctx.newPage();
+  const watch = await watchCsp(page);
+  await page.goto(url);
+  return { ctx, page, watch };
 }
 
 /** The page background set by styles/base.css (--paper: #eef0ec): proof its styles applied. */
@@ -82,21 +92,13 @@ describe('the web build (dist/web) in Chromium', () => {
   let watch: CspWatch;
 
   beforeAll(async () => {
-    server = await preview({
-      root: ROOT,
-      configFile: join(ROOT, 'vite.config.ts'),
-      preview: { host: '127.0.0.1', port: 0, strictPort: false },
-      logLevel: 'warn',
-    });
-    ctx = await launchBrowser();
-    page = await ctx.newPage();
-    watch = await watchCsp(page);
-    await page.goto(server.resolvedUrls!.local[0]);
+    server = await previewWebBuild();
+    ({ ctx, page, watch } = await openWatched(server.resolvedUrls!.local[0]));
   });
 
   afterAll(async () => {
     await ctx?.close();
-    await new Promise<void>((r) => server?.httpServer.close(() => r()));
+    await closePreview(server);
   });
 
   it('runs every view, the shortcuts and the import preview without a CSP violation or error', async () => {
@@ -148,9 +150,7 @@ describe('the desktop build (out/renderer) served by the app:// handler', () => 
     });
     await new Promise<void>((r) => http.listen(0, '127.0.0.1', r));
     base = `http://127.0.0.1:${(http.address() as AddressInfo).port}`;
-    ctx = await launchBrowser();
-    page = await ctx.newPage();
-    watch = await watchCsp(page);
+    ({ ctx, page, watch } = await openWatched('about:blank'));
     page.on('response', (r) => types.set(new URL(r.url()).pathname, r.headers()['content-type']));
     await page.goto(`${base}/index.html`);
   });
@@ -199,10 +199,7 @@ describe('the dev server (npm run web) in Chromium', () => {
       logLevel: 'warn',
     });
     await server.listen();
-    ctx = await launchBrowser();
-    page = await ctx.newPage();
-    watch = await watchCsp(page);
-    await page.goto(server.resolvedUrls!.local[0]);
+    ({ ctx, page, watch } = await openWatched(server.resolvedUrls!.local[0]));
   });
 
   afterAll(async () => {

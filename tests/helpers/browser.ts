@@ -3,10 +3,11 @@
  * browser). Flags as in shared/TOOLCHAIN.md: the machine's network is closed, so background
  * networking is switched off.
  */
-import { chromium, type BrowserContext } from 'playwright-core';
-import { mkdtempSync } from 'node:fs';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { mkdtempSync, readdirSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { preview, type PreviewServer } from 'vite';
 
 export const CHROMIUM_PATH = process.env.THERMOSHIFT_CHROMIUM ?? '/usr/bin/chromium';
 
@@ -30,3 +31,34 @@ export async function launchBrowser(): Promise<BrowserContext> {
 
 /** Folder for screenshots and other artifacts that tests keep. */
 export const ARTIFACT_DIR = join(process.cwd(), 'test-results', 'artifacts');
+
+/** Serves the web build (dist/web, made by the e2e global setup) on 127.0.0.1, a free port. */
+export function previewWebBuild(): Promise<PreviewServer> {
+  const root = process.cwd();
+  return preview({
+    root,
+    configFile: join(root, 'vite.config.ts'),
+    preview: { host: '127.0.0.1', port: 0, strictPort: false },
+    logLevel: 'warn',
+  });
+}
+
+export function closePreview(server: PreviewServer | undefined): Promise<void> {
+  return new Promise<void>((r) => (server ? server.httpServer.close(() => r()) : r()));
+}
+
+/** The invented seal sample's per-isotherm files (samples/seal-dma/*.txt). */
+export function sealSampleFiles(): string[] {
+  const dir = join(process.cwd(), 'samples', 'seal-dma');
+  return readdirSync(dir)
+    .filter((f) => f.endsWith('.txt'))
+    .map((f) => join(dir, f));
+}
+
+/** Picks files through the app's *Import data…* file dialog and waits for the import preview. */
+export async function openInImportPreview(page: Page, files: string[]): Promise<void> {
+  const chooser = page.waitForEvent('filechooser');
+  await page.click('[data-role="open-data"]');
+  await (await chooser).setFiles(files);
+  await page.waitForSelector('[data-role="import-groups"] tr');
+}
