@@ -6,6 +6,7 @@ import { dialog, type BrowserWindow, type FileFilter } from 'electron';
 import { extname } from 'node:path';
 import { handleChannel, type HandleOptions } from './ipc';
 import type { RecentStore } from './recent-files';
+import type { RecentKind } from '../shared/ipc-channels';
 import { readTextFile, writeFileAtomic } from './text-files';
 
 const DATA_FILTERS: FileFilter[] = [
@@ -28,6 +29,9 @@ export interface FileSetup extends HandleOptions {
 }
 
 export function setupFiles({ getWindow, recent, ...ipc }: FileSetup): void {
+  // Files picked (or reopened) but not yet known to have opened: the renderer confirms with
+  // recent:confirm once they did, and only then are they listed under Recent.
+  const pending: Partial<Record<RecentKind, string[]>> = {};
   const parent = (): BrowserWindow => {
     const w = getWindow();
     if (!w) throw new Error('The Thermoshift window is not open.');
@@ -44,7 +48,7 @@ export function setupFiles({ getWindow, recent, ...ipc }: FileSetup): void {
       });
       if (r.canceled || r.filePaths.length === 0) return [];
       const files = await Promise.all(r.filePaths.map(readTextFile));
-      await recent.remember('data', r.filePaths);
+      pending.data = r.filePaths;
       return files;
     },
     ipc,
@@ -75,7 +79,7 @@ export function setupFiles({ getWindow, recent, ...ipc }: FileSetup): void {
       });
       if (r.canceled || r.filePaths.length === 0) return null;
       const file = await readTextFile(r.filePaths[0]);
-      await recent.remember('analysis', [r.filePaths[0]]);
+      pending.analysis = [r.filePaths[0]];
       return file;
     },
     ipc,
@@ -104,8 +108,19 @@ export function setupFiles({ getWindow, recent, ...ipc }: FileSetup): void {
     async ({ id }) => {
       const { kind, paths } = await recent.paths(id);
       const files = await Promise.all(paths.map(readTextFile));
-      await recent.remember(kind, paths);
+      pending[kind] = paths;
       return { kind, files };
+    },
+    ipc,
+  );
+
+  handleChannel(
+    'recent:confirm',
+    async ({ kind }) => {
+      const paths = pending[kind];
+      delete pending[kind];
+      if (paths) await recent.remember(kind, paths);
+      return true as const;
     },
     ipc,
   );

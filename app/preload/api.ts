@@ -3,7 +3,13 @@
  * function so it can be tested without Electron; preload.ts passes ipcRenderer.invoke, never
  * ipcRenderer itself. The renderer's type for it is derived from this object (`ThermoshiftApi`).
  */
-import type { IpcChannel, IpcRequest, IpcResponse, SaveFileRequest } from '../shared/ipc-channels';
+import type {
+  IpcChannel,
+  IpcRequest,
+  IpcResponse,
+  RecentKind,
+  SaveFileRequest,
+} from '../shared/ipc-channels';
 import type { IpcResult } from '../shared/ipc-result';
 
 export type Invoke = <C extends IpcChannel>(
@@ -26,6 +32,8 @@ export function createApi(invoke: Invoke) {
     listRecent: () => invoke('recent:list', undefined),
     /** Reads a recent entry again. */
     openRecent: (id: string) => invoke('recent:open', { id }),
+    /** The files last picked or reopened for `kind` opened: list them under Recent. */
+    confirmRecent: (kind: RecentKind) => invoke('recent:confirm', { kind }),
     /** Keeps the current analysis on disk so a crash loses nothing. */
     writeAutosave: (text: string) => invoke('autosave:write', { text }),
     /** The analysis kept by the last autosave, or null. */
@@ -43,6 +51,7 @@ export const API_FUNCTIONS = [
   'saveAnalysis',
   'listRecent',
   'openRecent',
+  'confirmRecent',
   'writeAutosave',
   'readAutosave',
 ] as const satisfies readonly (keyof ThermoshiftApi)[];

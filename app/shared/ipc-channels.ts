@@ -52,6 +52,11 @@ export interface IpcChannels {
   'analysis:save': { request: { suggestedName: string; text: string }; response: SaveOutcome };
   'recent:list': { request: void; response: RecentEntry[] };
   'recent:open': { request: { id: string }; response: RecentOpened };
+  /**
+   * The files last picked (or reopened) for `kind` did open: only now are they added to the
+   * recent list, so files that failed to open are never listed.
+   */
+  'recent:confirm': { request: { kind: RecentKind }; response: true };
   /** Keeps the current analysis so a crash loses nothing. */
   'autosave:write': { request: { text: string }; response: true };
   'autosave:read': { request: void; response: string | null };
@@ -68,6 +73,7 @@ export const IPC_CHANNELS: readonly IpcChannel[] = [
   'analysis:save',
   'recent:list',
   'recent:open',
+  'recent:confirm',
   'autosave:write',
   'autosave:read',
 ];

@@ -34,6 +34,7 @@ export const IPC_SCHEMAS = {
     .strict(),
   'recent:list': noPayload,
   'recent:open': z.object({ id: z.string().regex(/^[a-z0-9-]{1,64}$/) }).strict(),
+  'recent:confirm': z.object({ kind: z.enum(['data', 'analysis']) }).strict(),
   'autosave:write': z.object({ text: z.string().max(MAX_TEXT_CHARS) }).strict(),
   'autosave:read': noPayload,
 } satisfies Record<IpcChannel, z.ZodType>;

@@ -4,7 +4,9 @@
  * opens offline and prints to A4 or Letter PDF from any browser.
  */
 import type { Analysis } from '../pipeline/types';
-import { toCelsius, toKelvinText } from '../pipeline/temperature';
+import { toCelsius } from '../pipeline/temperature';
+import { isInventedDemo } from '../synthetic/demo-header';
+import { sampleFacts } from './sample-facts';
 import { CONVENTIONS } from '../pipeline/conventions';
 import { escapeHtml } from './escape';
 import { REPORT_CSS } from './styles';
@@ -41,26 +43,8 @@ function chartBlock(spec: ChartSpec | null, caption: string): string {
 const table = (t: TableSpec | null): string => (t ? htmlTable(t) : '');
 
 function titleBlock(a: Analysis, o: ReportOptions, title: string): string {
-  const meta = a.sample.metadata;
-  const invented = Object.entries(meta).some(
-    ([k, v]) => /invented/i.test(k) || /invented/i.test(v),
-  );
-  const rows: [string, string][] = [
-    ['sample', a.sample.name],
-    ['test', `${a.sample.testKind}, ${a.sample.deformation}`],
-    [
-      'reference temperature',
-      `${toCelsius(a.referenceTemperatureK)} °C (${toKelvinText(a.referenceTemperatureK)} K)`,
-    ],
-    [
-      'isotherms',
-      `${a.curves.filter((c) => c.included).length} of ${a.curves.length} in the master curve`,
-    ],
-    ['files', a.sample.files.join(', ')],
-    ...Object.entries(meta)
-      .filter(([, v]) => v !== a.sample.name)
-      .map(([k, v]): [string, string] => [k, v]),
-  ];
+  const invented = isInventedDemo(a.sample.metadata);
+  const rows = sampleFacts(a);
   return (
     `<header class="title-block"><div><h1>${esc(title)}</h1><dl>` +
     rows.map(([k, v]) => `<dt>${esc(k)}</dt><dd>${esc(v)}</dd>`).join('') +

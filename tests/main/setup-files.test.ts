@@ -33,7 +33,7 @@ beforeEach(() => {
 });
 
 describe('setupFiles()', () => {
-  it('setupFiles() opens the files the user picked, as names and text, and remembers them', async () => {
+  it('setupFiles() opens the files the user picked, as names and text, and lists them under Recent once they opened', async () => {
     const h = harness();
     dialog.showOpenDialog.mockResolvedValue({
       canceled: false,
@@ -49,6 +49,9 @@ describe('setupFiles()', () => {
       { name: 'melt_160C.csv', text: 'T,f\n160,1\n' },
     ]);
     expect(dialog.showOpenDialog.mock.calls[0][0]).toBe(h.win);
+    // listed under Recent only once the renderer says the files opened
+    expect(((await h.call('recent:list')) as { value: unknown[] }).value).toEqual([]);
+    expect(await h.call('recent:confirm', { kind: 'data' })).toEqual({ ok: true, value: true });
     const recent = (await h.call('recent:list')) as { value: { id: string; label: string }[] };
     expect(recent.value[0].label).toBe('melt_150C.csv + 1 more');
     const again = (await h.call('recent:open', { id: recent.value[0].id })) as {

@@ -57,8 +57,9 @@ describe('serializeAnalysis() and parseAnalysis()', () => {
 });
 
 describe('analysisFileName()', () => {
-  it('analysisFileName() makes a safe name with our suffix', () => {
-    expect(analysisFileName('QS-72 seal / batch 3')).toBe('QS-72 seal _ batch 3.thermoshift.json');
+  it('analysisFileName() uses the same stem as every export of the analysis, with our suffix', () => {
+    expect(analysisFileName('QS-72 seal / batch 3')).toBe('qs-72-seal-batch-3.thermoshift.json');
+    expect(analysisFileName('seal_dma')).toBe('seal-dma.thermoshift.json');
     expect(analysisFileName('')).toBe('analysis.thermoshift.json');
   });
 });

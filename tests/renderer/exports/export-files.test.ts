@@ -6,6 +6,6 @@ describe('fileStem()', () => {
     expect(fileStem('HX-310 film-grade polyolefin (invented)')).toBe(
       'hx-310-film-grade-polyolefin',
     );
-    expect(fileStem('***')).toBe('thermoshift');
+    expect(fileStem('***')).toBe('analysis');
   });
 });

@@ -22,11 +22,15 @@ function fakeStorage(limitChars = Number.POSITIVE_INFINITY): Storage {
 describe('browserAccess()', () => {
   it('browserAccess() remembers recent files with their text and reopens them by id', async () => {
     const a = browserAccess(memoryStore(), fakeStorage());
-    await a.rememberRecent('data', [
-      { name: 'a_40C.csv', text: '1' },
-      { name: 'a_60C.csv', text: '2' },
-    ]);
-    await a.rememberRecent('analysis', [{ name: 'b.thermoshift.json', text: '{}' }]);
+    await a.rememberRecent(
+      'data',
+      [
+        { name: 'a_40C.csv', text: '1' },
+        { name: 'a_60C.csv', text: '2' },
+      ],
+      true,
+    );
+    await a.rememberRecent('analysis', [{ name: 'b.thermoshift.json', text: '{}' }], false);
     const list = await a.listRecent();
     expect(list.map((e) => e.label)).toEqual(['b.thermoshift.json', 'a_40C.csv + 1 more']);
     expect(list[0]).not.toHaveProperty('files');

@@ -9,7 +9,9 @@ describe('desktopAccess()', () => {
         ? { ok: true, value: { name: 'out.csv' } }
         : channel === 'analysis:open'
           ? { ok: true, value: null }
-          : { ok: false, message: 'The disk is full.' },
+          : channel === 'recent:confirm'
+            ? { ok: true, value: true }
+            : { ok: false, message: 'The disk is full.' },
     );
     const access = desktopAccess(createApi(invoke as never));
     expect(access.kind).toBe('desktop');
@@ -18,7 +20,9 @@ describe('desktopAccess()', () => {
     );
     expect(await access.openAnalysis()).toBeNull();
     await expect(access.writeAutosave('{}')).rejects.toThrow('The disk is full.');
-    await access.rememberRecent('data', [{ name: 'a', text: 'b' }]);
+    await access.rememberRecent('data', [{ name: 'a', text: 'b' }], false);
     expect(invoke).toHaveBeenCalledTimes(3); // remembering dropped files needs no call: main never sees their paths
+    await access.rememberRecent('data', [{ name: 'a', text: 'b' }], true);
+    expect(invoke).toHaveBeenLastCalledWith('recent:confirm', { kind: 'data' });
   });
 });

@@ -1,14 +1,41 @@
 import { describe, expect, it } from 'vitest';
 import { modelTable } from '../../../app/renderer/src/tables/analysis-tables';
-import { fixtureAnalysis, FIXTURE_TRUTH } from '../../core/report/analysis-fixture';
+import { cellText } from '../../../app/renderer/src/tables/tsv';
+import { fixtureAnalysis } from '../../core/report/analysis-fixture';
 
 describe('modelTable()', () => {
   it('modelTable() gives one row per constant with s.e., 95 % interval, unit, Tr and fit figures', () => {
     const t = modelTable(fixtureAnalysis());
     expect(t.header).toHaveLength(11);
-    expect(t.rows).toEqual([
-      ['WLF', 'C1', FIXTURE_TRUTH.c1, 0.3, 8.1, 9.6, '', 100, 0.999, 0.01, '70.0 … 130.0'],
-      ['WLF', 'C2', FIXTURE_TRUTH.c2K, 4, 92, 111, 'K', 100, 0.999, 0.01, '70.0 … 130.0'],
+    // each value to the digits its s.e. supports (s.e. to 2 significant digits, JCGM 100:2008
+    // §7.2.6): C1 = 8.86 ± 0.30, C2 = 101.6 ± 4.0 K; Tr to 0.01 K, R² to 4, RMS to 2 digits
+    expect(t.rows.map((r) => r.map(cellText))).toEqual([
+      [
+        'WLF',
+        'C1',
+        '8.86',
+        '0.30',
+        '8.10',
+        '9.60',
+        '',
+        '100.00',
+        '0.9990',
+        '0.010',
+        '70.0 … 130.0',
+      ],
+      [
+        'WLF',
+        'C2',
+        '101.6',
+        '4.0',
+        '92.0',
+        '111.0',
+        'K',
+        '100.00',
+        '0.9990',
+        '0.010',
+        '70.0 … 130.0',
+      ],
     ]);
   });
 

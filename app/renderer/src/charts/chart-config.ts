@@ -4,6 +4,7 @@
  */
 import type { ChartConfiguration, ChartDataset, Plugin, Scale } from 'chart.js';
 import { decadeTicks } from './decade-ticks';
+import { paddedRange } from './zoom-math';
 import type { PlotSeries, PlotSpec, PlotWindow } from './plot-spec';
 import { withAlpha } from './temperature-colours';
 
@@ -98,12 +99,15 @@ function axisOptions(kind: 'log' | 'linear', label: string, min?: number, max?: 
     title: { display: true, text: label, color: INK, font: { size: 12 } },
     grid: { color: GRID },
     border: { color: '#9aa3a0' },
+    // Linear axes keep Chart.js's own tick formatter (no callback key at all: `undefined` would
+    // replace it and print 2.3000000000000003) and no ticks at the padded window's edges.
     ticks: {
       color: INK,
       autoSkip: kind !== 'log',
       maxRotation: 0,
-      callback:
-        kind === 'log' ? (value: number | string) => labels.get(Number(value)) ?? '' : undefined,
+      ...(kind === 'log'
+        ? { callback: (value: number | string) => labels.get(Number(value)) ?? '' }
+        : { includeBounds: false }),
     },
     afterBuildTicks:
       kind === 'log'
@@ -157,6 +161,9 @@ export function plotChartConfig(
     datasets.push(seriesDataset(s, d));
     seriesIndex.push(i);
   });
+  // Without a zoom window, the axes cover the data with a margin: markers at the extremes are
+  // drawn whole, not half-cut by the frame.
+  const fit = view ?? fittedWindow(spec);
   const config: PlotChartConfig = {
     type: 'scatter',
     data: { datasets },
@@ -168,12 +175,32 @@ export function plotChartConfig(
       events: ['mousemove', 'mouseout'],
       layout: { padding: { top: 8, right: 14, bottom: 4, left: 4 } },
       scales: {
-        x: axisOptions(spec.x.kind, spec.x.label, view?.xMin, view?.xMax),
-        y: axisOptions(spec.y.kind, spec.y.label, view?.yMin, view?.yMax),
+        x: axisOptions(spec.x.kind, spec.x.label, fit?.xMin, fit?.xMax),
+        y: axisOptions(spec.y.kind, spec.y.label, fit?.yMin, fit?.yMax),
       },
       plugins: { tooltip: { enabled: false }, legend: { display: false } },
     },
     plugins: [whiteBackground, errorBars],
   };
   return { config, map: { seriesIndex } };
+}
+
+/** The window that shows every point, band and error bar of a plot with a margin around it. */
+export function fittedWindow(spec: PlotSpec): PlotWindow | undefined {
+  const xs: number[] = [];
+  const ys: number[] = [];
+  for (const s of spec.series)
+    s.points.forEach((p, i) => {
+      xs.push(p.x);
+      ys.push(p.y);
+      const e = s.yError?.[i];
+      if (e) ys.push(p.y - e, p.y + e);
+    });
+  for (const b of spec.bands) {
+    xs.push(...b.x);
+    ys.push(...b.lower, ...b.upper);
+  }
+  const x = paddedRange(spec.x.kind, xs);
+  const y = paddedRange(spec.y.kind, ys);
+  return x && y ? { xMin: x[0], xMax: x[1], yMin: y[0], yMax: y[1] } : undefined;
 }

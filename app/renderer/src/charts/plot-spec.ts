@@ -28,8 +28,10 @@ export interface PlotSeries {
   points: PlotPoint[];
   /** The isotherm this series belongs to: a drag on it moves that isotherm's shift. */
   isothermId?: string;
-  /** Drawn faint (masked points, excluded isotherms). */
+  /** Drawn faint (masked points, excluded and left-out isotherms, outliers). */
   faint?: boolean;
+  /** Why the series is faint (or anything else worth saying), shown on hover. */
+  note?: string;
   /** Symmetric y errors (same length as points), drawn in the SVG export. */
   yError?: (number | null)[];
 }

@@ -43,3 +43,39 @@ export function panAxis(
 export function axisDistance(kind: AxisKind, from: number, to: number): number {
   return fwd(kind, to) - fwd(kind, from);
 }
+
+/**
+ * Decades (log axis) or units (linear) per pixel of an axis drawn from `min` to `max` over
+ * `fromPx`…`toPx`: the conversion a drag uses, taken once when the pointer goes down so the
+ * axis re-fitting during the drag cannot change it.
+ */
+export function unitsPerPixel(
+  kind: AxisKind,
+  min: number,
+  max: number,
+  fromPx: number,
+  toPx: number,
+): number {
+  return (fwd(kind, max) - fwd(kind, min)) / (toPx - fromPx);
+}
+
+/**
+ * A window around the data with a margin on each side, so markers at the extremes are drawn
+ * whole instead of half-cut by the plot frame: 4 % of the span (log axes: of the decades), at
+ * least 0.05 decades or, for a single value, ±10 %. null when there is nothing to show.
+ */
+export function paddedRange(kind: AxisKind, values: Iterable<number>): [number, number] | null {
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const v of values) {
+    if (!Number.isFinite(v) || (kind === 'log' && !(v > 0))) continue;
+    const t = fwd(kind, v);
+    if (t < lo) lo = t;
+    if (t > hi) hi = t;
+  }
+  if (!(hi >= lo)) return null;
+  const span = hi - lo;
+  const pad =
+    kind === 'log' ? Math.max(0.04 * span, 0.05) : span > 0 ? 0.04 * span : Math.abs(lo) * 0.1 || 1;
+  return [back(kind, lo - pad), back(kind, hi + pad)];
+}

@@ -12,7 +12,10 @@ import {
   parseAnalysis,
   serializeAnalysis,
 } from '../document/analysis-file';
-import { fileStem } from '../exports/export-files';
+import { exportName, fileStem } from '../exports/export-files';
+import { bytesToBase64, zipFiles, type ZipEntry } from '../exports/zip-exports';
+import { unitsFromImport } from '../format/display-units';
+import { isInventedDemo } from '../../../../core/synthetic/demo-header';
 import { OUTPUT_FILE_SPECS, type OutputFileSpec } from '../../../../core/report/output-files';
 import type { FileAccess, RecentEntry, TextFile } from '../platform/file-access';
 import type { UseImportSessionReturn } from './useImportSession';
@@ -37,6 +40,13 @@ export interface UseFileCommandsReturn {
   exportList(): readonly OutputFileSpec[];
 }
 
+export interface UseFileCommandsOptions {
+  /** Today as YYYY-MM-DD (the report's date). */
+  today?: () => string;
+  /** Figures (SVG) of every plot view, added to *Export → All*. */
+  figures?: () => ZipEntry[];
+}
+
 const looksLikeAnalysis = (f: TextFile): boolean =>
   f.text.trimStart().startsWith('{') && f.text.slice(0, 300).includes(`"${ANALYSIS_FORMAT}"`);
 
@@ -46,8 +56,9 @@ export function useFileCommands(
   analysis: ShallowRef<Analysis | null>,
   importer: UseImportSessionReturn,
   notify: Notify,
-  today: () => string = () => new Date().toISOString().slice(0, 10),
+  options: UseFileCommandsOptions = {},
 ): UseFileCommandsReturn {
+  const today = options.today ?? (() => new Date().toISOString().slice(0, 10));
   const recent = ref<RecentEntry[]>([]);
 
   const guard = async (what: string, f: () => Promise<void>): Promise<void> => {
@@ -58,11 +69,25 @@ export function useFileCommands(
     }
   };
 
-  const loadAnalysis = (f: TextFile): void => {
+  /** Opens an analysis file; only a file that parsed goes under Recent. */
+  const loadAnalysis = async (f: TextFile, picked: boolean): Promise<void> => {
     const doc: AnalysisDocument = parseAnalysis(f.text, f.name);
     wb.commit(doc);
     notify(`Opened ${f.name}.`);
+    await access.rememberRecent('analysis', [f], picked);
   };
+
+  /** Shows data files in the import preview; they go under Recent once the import read them. */
+  const previewData = async (files: TextFile[], picked: boolean): Promise<void> => {
+    await importer.start(files);
+    if (importer.result.value && !importer.error.value)
+      await access.rememberRecent('data', files, picked);
+  };
+
+  const outputOptions = () => ({
+    date: today(),
+    modulusUnit: wb.doc.value?.display.modulus ?? 'Pa',
+  });
 
   const refreshRecent = (): Promise<void> =>
     guard('Recent files', async () => {
@@ -73,12 +98,11 @@ export function useFileCommands(
     await guard('Export', async () => {
       const a = analysis.value;
       if (!a) return;
-      const text = file.build(a, { date: today() });
+      const text = file.build(a, outputOptions());
       if (text === null)
         return notify(`${file.label}: nothing to export for this analysis.`, 'error');
-      const stem = fileStem(a.sample.name);
       const written = await access.saveFile({
-        suggestedName: `${stem}-${file.name}`,
+        suggestedName: exportName(a.sample.name, file.name),
         content: text,
         encoding: 'utf8',
       });
@@ -92,35 +116,37 @@ export function useFileCommands(
     openData: () =>
       guard('Import', async () => {
         const files = await access.openDataFiles();
-        if (files.length) await importer.start(files);
+        if (files.length) await previewData(files, true);
       }),
     openAnalysis: () =>
       guard('Open analysis', async () => {
         const f = await access.openAnalysis();
-        if (f) loadAnalysis(f);
+        if (f) await loadAnalysis(f, true);
       }),
     openRecent: (id) =>
       guard('Recent file', async () => {
         const r = await access.openRecent(id);
-        if (r.kind === 'analysis') loadAnalysis(r.files[0]);
-        else await importer.start(r.files);
+        if (r.kind === 'analysis') await loadAnalysis(r.files[0], true);
+        else await previewData(r.files, true);
       }),
     openDropped: (files) =>
       guard('Dropped files', async () => {
-        if (files.length === 1 && looksLikeAnalysis(files[0])) {
-          loadAnalysis(files[0]);
-          await access.rememberRecent('analysis', files);
-        } else {
-          await access.rememberRecent('data', files);
-          await importer.start(files);
-        }
+        if (files.length === 1 && looksLikeAnalysis(files[0])) await loadAnalysis(files[0], false);
+        else await previewData(files, false);
       }),
     acceptImport() {
       const r = importer.result.value;
       if (!r) return;
       const names = importer.files.value.map((f) => f.name);
       const origin = names.length > 1 ? `${names[0]} + ${names.length - 1} more` : names[0];
-      wb.commit(newDocument(r.dataset, origin, { importWarnings: r.warnings }));
+      wb.commit(
+        newDocument(r.dataset, origin, {
+          importWarnings: r.warnings,
+          // the badge only for our own demo data, by the generator's explicit marker
+          invented: isInventedDemo(r.dataset.metadata),
+          display: unitsFromImport(r),
+        }),
+      );
       importer.close();
       notify(`Imported ${r.groups.length} isotherms from ${origin}.`);
     },
@@ -142,8 +168,24 @@ export function useFileCommands(
     },
     exportOne,
     async exportAll() {
-      if (!analysis.value) return;
-      for (const f of OUTPUT_FILE_SPECS) await exportOne(f);
+      await guard('Export', async () => {
+        const a = analysis.value;
+        if (!a) return;
+        const o = outputOptions();
+        const entries: ZipEntry[] = OUTPUT_FILE_SPECS.flatMap((f) => {
+          const content = f.build(a, o);
+          return content === null ? [] : [{ name: f.name, content }];
+        });
+        entries.push(...(options.figures?.() ?? []));
+        const stem = fileStem(a.sample.name);
+        const zip = zipFiles(stem, entries, new Date());
+        const written = await access.saveFile({
+          suggestedName: `${stem}-exports.zip`,
+          content: bytesToBase64(zip),
+          encoding: 'base64',
+        });
+        if (written) notify(`Exported ${written}: ${entries.length} files in one zip.`);
+      });
     },
     exportList: () => (analysis.value ? OUTPUT_FILE_SPECS : []),
   };

@@ -5,6 +5,7 @@
  */
 import type { DataWarning, Dataset } from '../../../../core/data/types';
 import type { AnalysisOptions } from '../../../../core/pipeline/options';
+import { SI_DISPLAY, type DisplayUnits } from '../format/display-units';
 
 /** The serialisable options (no progress callback; import warnings are kept beside them). */
 export type DocumentOptions = Omit<
@@ -21,12 +22,19 @@ export interface AnalysisDocument {
   origin: string;
   /** Problems the importer found in the files (shown with the analysis warnings). */
   importWarnings: DataWarning[];
+  /** Units the app shows and exports in (the data stay SI). */
+  display: DisplayUnits;
 }
 
 export function newDocument(
   dataset: Dataset,
   origin: string,
-  opts: { invented?: boolean; importWarnings?: DataWarning[]; options?: DocumentOptions } = {},
+  opts: {
+    invented?: boolean;
+    importWarnings?: DataWarning[];
+    options?: DocumentOptions;
+    display?: DisplayUnits;
+  } = {},
 ): AnalysisDocument {
   return {
     dataset,
@@ -34,7 +42,12 @@ export function newDocument(
     invented: opts.invented ?? false,
     origin,
     importWarnings: opts.importWarnings ?? [],
+    display: opts.display ?? SI_DISPLAY,
   };
+}
+
+export function withDisplay(doc: AnalysisDocument, display: DisplayUnits): AnalysisDocument {
+  return { ...doc, display };
 }
 
 export function withOptions(

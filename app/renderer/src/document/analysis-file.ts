@@ -3,10 +3,13 @@
  * changes, enough to reopen an analysis exactly as it was. Validated on load; a newer format
  * version is refused with a message saying so, never half-read.
  *
- *   { "format": "thermoshift-analysis", "formatVersion": 1, "savedAt": ISO time,
+ *   { "format": "thermoshift-analysis", "formatVersion": 2, "savedAt": ISO time,
  *     "savedBy": app version, "origin": text, "invented": boolean,
  *     "dataset": Dataset, "options": AnalysisOptions (without callbacks),
- *     "importWarnings": [{ file, row, column, message }] (optional) }
+ *     "importWarnings": [{ file, row, column, message }] (optional),
+ *     "display": { "modulus": "Pa"|"kPa"|"MPa"|"GPa", "frequency": "rad/s"|"Hz" } }
+ *
+ * Format 1 (Thermoshift 0.1) had no "display": it opens with Pa and rad/s, as 0.1 showed.
  *
  * Numbers that are NaN (missing values) are written as null and read back as NaN.
  */
@@ -15,9 +18,13 @@ import { analysisOptionsSchema } from '../../../../core/pipeline/options';
 import { THERMOSHIFT_VERSION } from '../../../../core/pipeline/version';
 import type { AnalysisDocument } from './analysis-document';
 import { datasetSchema } from './dataset-schema';
+import { fileStem } from '../exports/export-files';
+import { FREQUENCY_UNITS, MODULUS_UNITS, SI_DISPLAY } from '../format/display-units';
 
 export const ANALYSIS_FORMAT = 'thermoshift-analysis';
-export const ANALYSIS_FORMAT_VERSION = 1;
+export const ANALYSIS_FORMAT_VERSION = 2;
+/** The oldest format this version still opens. */
+export const OLDEST_ANALYSIS_FORMAT_VERSION = 1;
 export const ANALYSIS_FILE_SUFFIX = '.thermoshift.json';
 
 /** A file that is not a readable analysis; the message names the file and the problem. */
@@ -28,9 +35,14 @@ export class AnalysisFileError extends Error {
   }
 }
 
+const displaySchema = z.object({
+  modulus: z.enum(MODULUS_UNITS as ['Pa', 'kPa', 'MPa', 'GPa']),
+  frequency: z.enum(FREQUENCY_UNITS as ['rad/s', 'Hz']),
+});
+
 const fileSchema = z.object({
   format: z.literal(ANALYSIS_FORMAT),
-  formatVersion: z.literal(ANALYSIS_FORMAT_VERSION),
+  formatVersion: z.number().int().min(OLDEST_ANALYSIS_FORMAT_VERSION).max(ANALYSIS_FORMAT_VERSION),
   savedAt: z.string(),
   savedBy: z.string(),
   origin: z.string(),
@@ -40,6 +52,8 @@ const fileSchema = z.object({
   importWarnings: z
     .array(z.object({ file: z.string(), row: z.number(), column: z.number(), message: z.string() }))
     .optional(),
+  /** From format 2 on. */
+  display: displaySchema.optional(),
 });
 
 export function serializeAnalysis(doc: AnalysisDocument, now: Date = new Date()): string {
@@ -53,6 +67,7 @@ export function serializeAnalysis(doc: AnalysisDocument, now: Date = new Date())
     dataset: doc.dataset,
     options: doc.options,
     importWarnings: doc.importWarnings,
+    display: doc.display,
   };
   // JSON has no NaN: missing values become null (read back as NaN by datasetSchema).
   return JSON.stringify(body, (_k, v: unknown) =>
@@ -95,11 +110,11 @@ export function parseAnalysis(text: string, fileName: string): AnalysisDocument 
     invented: f.invented,
     origin: f.origin,
     importWarnings: f.importWarnings ?? [],
+    display: f.display ?? SI_DISPLAY,
   };
 }
 
-/** A file name for saving: the sample name made safe, with our suffix. */
+/** A file name for saving: the same stem as every export of the analysis, with our suffix. */
 export function analysisFileName(sampleName: string): string {
-  const base = sampleName.replace(/[^\p{L}\p{N} ._-]+/gu, '_').trim() || 'analysis';
-  return `${base.slice(0, 80)}${ANALYSIS_FILE_SUFFIX}`;
+  return `${fileStem(sampleName)}${ANALYSIS_FILE_SUFFIX}`;
 }

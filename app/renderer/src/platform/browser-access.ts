@@ -34,11 +34,20 @@ export function pickFiles(accept: string, multiple: boolean): Promise<TextFile[]
   });
 }
 
-/** Starts a download of `content` under `name`. */
+const MIME: Record<string, string> = {
+  png: 'image/png',
+  zip: 'application/zip',
+  svg: 'image/svg+xml',
+  csv: 'text/csv;charset=utf-8',
+  html: 'text/html;charset=utf-8',
+  json: 'application/json',
+};
+
+/** Starts a download of `content` (text, or bytes as base64) under `name`. */
 export function downloadBlob(name: string, content: string, encoding: 'utf8' | 'base64'): void {
   const bytes =
     encoding === 'base64' ? Uint8Array.from(atob(content), (c) => c.charCodeAt(0)) : content;
-  const type = encoding === 'base64' ? 'image/png' : 'text/plain;charset=utf-8';
+  const type = MIME[name.split('.').pop()?.toLowerCase() ?? ''] ?? 'text/plain;charset=utf-8';
   const url = URL.createObjectURL(new Blob([bytes], { type }));
   const a = document.createElement('a');
   a.href = url;
@@ -72,14 +81,9 @@ export function browserAccess(store: KeyValueStore, storage: Storage | null): Fi
   };
   return {
     kind: 'browser',
-    async openDataFiles() {
-      const files = await pickFiles('.csv,.txt,.tsv,.dat,.asc,text/*', true);
-      await remember('data', files);
-      return files;
-    },
+    openDataFiles: () => pickFiles('.csv,.txt,.tsv,.dat,.asc,text/*', true),
     async openAnalysis() {
       const [file] = await pickFiles('.json,application/json', false);
-      if (file) await remember('analysis', [file]);
       return file ?? null;
     },
     async saveFile({ suggestedName, content, encoding }) {
@@ -101,10 +105,9 @@ export function browserAccess(store: KeyValueStore, storage: Storage | null): Fi
     async openRecent(id) {
       const e = (await loadRecent()).find((x) => x.id === id);
       if (!e) throw new Error('That recent file is no longer in the list.');
-      await remember(e.kind, e.files);
       return { kind: e.kind, files: e.files };
     },
-    rememberRecent: remember,
+    rememberRecent: (kind, files) => remember(kind, files),
     async writeAutosave(text) {
       try {
         storage?.setItem(AUTOSAVE_KEY, text);

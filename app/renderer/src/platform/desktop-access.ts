@@ -19,7 +19,9 @@ export function desktopAccess(api: ThermoshiftApi): FileAccess {
     listRecent: () => unwrap(api.listRecent()),
     openRecent: (id) => unwrap(api.openRecent(id)),
     // Main cannot remember dropped files: it never learns their paths, by design.
-    rememberRecent: async () => undefined,
+    rememberRecent: async (kind, _files, picked) => {
+      if (picked) await unwrap(api.confirmRecent(kind));
+    },
     writeAutosave: async (text) => void (await unwrap(api.writeAutosave(text))),
     readAutosave: () => unwrap(api.readAutosave()),
   };

@@ -25,10 +25,12 @@ export interface FileAccess {
   listRecent(): Promise<RecentEntry[]>;
   openRecent(id: string): Promise<RecentOpened>;
   /**
-   * Remembers files that came in another way (drag-and-drop). The desktop app remembers files
-   * picked in its dialogs by itself.
+   * Lists files under Recent once they opened (the import read them, the analysis parsed), so a
+   * file that failed to open is never listed. The browser keeps the files themselves; the
+   * desktop app confirms the files its dialog (or Recent) last gave for `kind` — dropped files
+   * it cannot remember, as main never learns their paths.
    */
-  rememberRecent(kind: RecentEntry['kind'], files: TextFile[]): Promise<void>;
+  rememberRecent(kind: RecentEntry['kind'], files: TextFile[], picked: boolean): Promise<void>;
   writeAutosave(text: string): Promise<void>;
   readAutosave(): Promise<string | null>;
 }

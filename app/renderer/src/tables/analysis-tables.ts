@@ -1,10 +1,31 @@
 /**
- * The analysis tables as header + rows of plain values (full precision, SI or stated units), used
- * both for copying to spreadsheets and for the on-screen tables.
+ * The analysis tables as header + rows, used both for copying to spreadsheets and for the
+ * on-screen tables. Numbers carry the digits they are known to: a value with a standard error
+ * to the digits the error supports (format/numbers.ts), the error itself to two significant
+ * digits, other figures to four. Moduli are in the display unit, stated in the header.
  */
 import type { Analysis, ModelFitStats } from '../../../../core/pipeline/types';
 import { toCelsius } from '../../../../core/pipeline/temperature';
-import type { Cell } from './tsv';
+import { SI_DISPLAY, toDisplay, type DisplayUnits } from '../format/display-units';
+import { digitsForError } from '../format/numbers';
+import type { Cell, Rounded } from './tsv';
+
+/** A value to the digits its standard error supports. */
+const withError = (value: number | null, se: number | null | undefined): Rounded => ({
+  value,
+  digits: value === null ? 4 : digitsForError(value, se),
+});
+/** A standard error to two significant digits. */
+const stdErr = (se: number | null | undefined): Rounded => ({ value: se ?? null, digits: 2 });
+const sig = (value: number | null | undefined, digits = 4): Rounded => ({
+  value: value ?? null,
+  digits,
+});
+/** A temperature in °C to 0.01 K. */
+const celsius = (k: number): Rounded => {
+  const c = toCelsius(k);
+  return { value: c, digits: Math.max(1, Math.floor(Math.log10(Math.abs(c) || 1)) + 3) };
+};
 
 export interface PlainTable {
   header: string[];
@@ -26,12 +47,12 @@ export function shiftTable(a: Analysis): PlainTable {
     ],
     rows: a.curves.map((c) => [
       c.isothermId,
-      toCelsius(c.temperatureK),
-      c.log10aT,
-      c.log10aTStdErr,
-      c.log10bT,
-      c.log10bTStdErr,
-      c.qualityRmsDecades,
+      celsius(c.temperatureK),
+      withError(c.log10aT, c.log10aTStdErr),
+      stdErr(c.log10aTStdErr),
+      withError(c.log10bT, c.log10bTStdErr),
+      stdErr(c.log10bTStdErr),
+      sig(c.qualityRmsDecades, 2),
       c.included ? 'yes' : 'no',
       c.note ?? '',
     ]),
@@ -80,14 +101,14 @@ export function modelTable(a: Analysis): PlainTable {
     constants.map(([constant, value, se, ci, unit]): Cell[] => [
       name,
       constant,
-      value,
-      se,
-      ci?.[0] ?? null,
-      ci?.[1] ?? null,
+      withError(value, se),
+      stdErr(se),
+      ci ? withError(ci[0], se) : null,
+      ci ? withError(ci[1], se) : null,
       unit,
-      toCelsius(m.referenceK),
-      m.r2,
-      m.rmsResidualDecades,
+      celsius(m.referenceK),
+      sig(m.r2, 4),
+      sig(m.rmsResidualDecades, 2),
       `${toCelsius(m.fittedRangeK[0]).toFixed(1)} … ${toCelsius(m.fittedRangeK[1]).toFixed(1)}`,
     ]),
   );
@@ -109,27 +130,36 @@ export function modelTable(a: Analysis): PlainTable {
   };
 }
 
-export function pronyTable(a: Analysis): PlainTable {
+export function pronyTable(a: Analysis, units: DisplayUnits = SI_DISPLAY): PlainTable {
   const p = a.prony;
   if (!p) return { header: [], rows: [] };
   const g0 = p.instantaneousModulusPa;
+  const g = (pa: number): Rounded => sig(toDisplay(pa, 'Pa', units).value);
   return {
-    header: ['mode', 'τ_i (s)', 'g_i (Pa)', 'g_i / G0'],
+    header: ['mode', 'τ_i (s)', `g_i (${units.modulus})`, 'g_i / G0'],
     rows: [
-      ['equilibrium', null, p.equilibriumModulusPa, g0 > 0 ? p.equilibriumModulusPa / g0 : null],
+      [
+        'equilibrium',
+        null,
+        g(p.equilibriumModulusPa),
+        sig(g0 > 0 ? p.equilibriumModulusPa / g0 : null),
+      ],
       ...p.tauS.map((t, i): Cell[] => [
-        i + 1,
-        t,
-        p.modulusPa[i],
-        g0 > 0 ? p.modulusPa[i] / g0 : null,
+        String(i + 1),
+        sig(t),
+        g(p.modulusPa[i]),
+        sig(g0 > 0 ? p.modulusPa[i] / g0 : null),
       ]),
     ],
   };
 }
 
-export function indicatorTable(a: Analysis): PlainTable {
+export function indicatorTable(a: Analysis, units: DisplayUnits = SI_DISPLAY): PlainTable {
   return {
     header: ['indicator', 'value', 'unit', 'note'],
-    rows: a.indicators.map((i) => [i.label, i.value, i.unit, i.note ?? '']),
+    rows: a.indicators.map((i) => {
+      const d = toDisplay(i.value, i.unit, units);
+      return [i.label, sig(d.value), d.unit, i.note ?? ''];
+    }),
   };
 }

@@ -1,12 +1,9 @@
 /**
- * Numbers for reading on screen: significant digits without exponent notation between 10⁻³ and
- * 10⁶ (273300, not 2.733e+5), and core/report's ×10ⁿ form outside that range.
+ * Numbers for reading on screen: the app's one format (format/numbers.ts) — significant digits
+ * without exponent notation between 10⁻³ and 10⁶ (273300, not 2.733e+5), ×10ⁿ outside.
  */
-import { formatNumber } from '../../../../core/report/format';
+import { formatSig } from '../format/numbers';
 
 export function formatValue(value: number | null | undefined, digits = 4): string {
-  if (value === null || value === undefined || !Number.isFinite(value)) return formatNumber(value);
-  const abs = Math.abs(value);
-  if (abs >= 1e-3 && abs < 1e6) return String(Number(value.toPrecision(digits)));
-  return formatNumber(value, digits);
+  return formatSig(value, digits);
 }

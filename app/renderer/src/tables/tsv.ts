@@ -1,12 +1,28 @@
 /**
  * Tables as tab-separated text, which spreadsheets paste into cells. Tabs and line breaks inside
- * a cell become spaces so the grid stays intact.
+ * a cell become spaces so the grid stays intact. Numbers carry their precision (`Rounded`): they
+ * paste with the digits they are known to (plain e-notation for very large or small values, which
+ * every spreadsheet reads), never as 16-digit floats.
  */
-export type Cell = string | number | null | undefined;
+import { plainNumber } from '../format/numbers';
+
+/** A number with the significant digits it is known to. */
+export interface Rounded {
+  value: number | null;
+  digits: number;
+}
+
+export type Cell = string | number | null | undefined | Rounded;
+
+/** Significant digits for numbers given without a precision. */
+export const DEFAULT_DIGITS = 4;
+
+export const isRounded = (c: Cell): c is Rounded => typeof c === 'object' && c !== null;
 
 export function cellText(c: Cell): string {
   if (c === null || c === undefined) return '';
-  if (typeof c === 'number') return Number.isFinite(c) ? String(c) : '';
+  if (isRounded(c)) return c.value === null ? '' : plainNumber(c.value, c.digits);
+  if (typeof c === 'number') return Number.isFinite(c) ? plainNumber(c, DEFAULT_DIGITS) : '';
   return c.replace(/[\t\r\n]+/g, ' ');
 }
 

@@ -26,6 +26,7 @@ describe('measuredPlot()', () => {
     expect(masked.faint).toBe(true);
     expect(masked.points[0].ref).toEqual({ isothermId: 'T01', index: 0, file: 'tiny.csv', row: 2 });
     expect(spec.series.find((s) => s.id === 'T02:storageModulus')!.faint).toBe(true);
-    expect(spec.series.find((s) => s.id === 'T01:storageModulus')!.faint).toBe(false);
+    expect(spec.series.find((s) => s.id === 'T01:storageModulus')!.faint).toBeFalsy();
+    expect(spec.series.find((s) => s.id === 'T02:storageModulus')!.label).toMatch(/excluded/);
   });
 });

@@ -1,93 +1,152 @@
 /**
- * The master curve at the reference temperature: every included isotherm moved by its shift, in
- * its temperature colour, with the fitted Prony series drawn through it. Curves can be dragged.
+ * Master curves at the reference temperature: the moduli (G′ and G″, or G(t), J(t)), tan δ,
+ * |η*|, and the relaxation modulus G(t) interconverted through the Prony series. Every isotherm
+ * is drawn at its shift in its temperature colour, the fitted Prony series through it; isotherms
+ * that are not in the fit and the engine's outlier points are drawn faded. Curves can be dragged
+ * sideways. The points and curves come from core (reducedIsotherms, pronyCurve).
  */
 import { quantitySymbol } from '../../../../../core/data/quantities';
 import type { QuantityId } from '../../../../../core/data/types';
+import type { IsothermState } from '../../../../../core/pipeline/isotherm-states';
+import { pronyCurve } from '../../../../../core/pipeline/prony-curves';
+import { hasQuantity, reducedIsotherms } from '../../../../../core/pipeline/reduced-isotherms';
 import type { Analysis } from '../../../../../core/pipeline/types';
 import { toCelsius } from '../../../../../core/pipeline/temperature';
-import { pronyLoss, pronyRelaxation, pronyStorage } from '../../../../../core/spectrum/prony-model';
+import { abscissaFactor, SI_DISPLAY, type DisplayUnits } from '../../format/display-units';
 import type { PlotSeries, PlotSpec } from '../plot-spec';
-import { temperatureScale } from '../temperature-colours';
-import { celsiusText, valueText, xAxisLabel, xText, yAxisLabel } from './plot-labels';
+import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';
+import { celsiusText, inDisplay, valueText, xAxisLabel, xText, yAxisLabel } from './plot-labels';
 import { plotQuantities, QUANTITY_STYLE } from './measured-plot';
 
 export const PRONY_COLOUR = '#1e2326';
 
-export function masterPlot(a: Analysis): PlotSpec {
-  const qs = plotQuantities(a.dataset);
-  const mc = a.masterCurve;
-  const scale = temperatureScale(a.dataset.isotherms.map((i) => i.temperatureK));
-  const byId = new Map<string, number[]>();
-  mc.isothermId.forEach((id, i) => byId.set(id, [...(byId.get(id) ?? []), i]));
+/** The master-curve views: which quantities each one draws. */
+export type MasterView = 'moduli' | 'tanDelta' | 'viscosity' | 'relaxation';
+
+const VIEW_ID: Record<MasterView, string> = {
+  moduli: 'master',
+  tanDelta: 'master-tan-delta',
+  viscosity: 'master-viscosity',
+  relaxation: 'master-relaxation',
+};
+
+function viewQuantities(a: Analysis, view: MasterView): QuantityId[] {
+  if (view === 'moduli') return plotQuantities(a.dataset);
+  if (view === 'tanDelta') return ['tanDelta'];
+  if (view === 'viscosity') return ['complexViscosity'];
+  return ['relaxationModulus'];
+}
+
+/** True when the analysis has something to draw in this view. */
+export function hasMasterView(a: Analysis, view: MasterView): boolean {
+  if (view === 'moduli') return true;
+  // relaxation data already show G(t) as their moduli view
+  if (view === 'relaxation')
+    return a.sample.testKind === 'oscillatory' && pronyCurve(a, 'relaxationModulus') !== null;
+  return (
+    a.sample.testKind === 'oscillatory' && viewQuantities(a, view).every((q) => hasQuantity(a, q))
+  );
+}
+
+export function masterPlot(
+  a: Analysis,
+  units: DisplayUnits = SI_DISPLAY,
+  view: MasterView = 'moduli',
+  states?: readonly IsothermState[],
+): PlotSpec {
   const mode = a.sample.deformation;
+  const qs = viewQuantities(a, view);
+  const scale = datasetScale(a.dataset);
+  const byState = statesById(states);
+  const interconverted = view === 'relaxation' && a.sample.abscissa === 'angularFrequency';
+  const fx = interconverted ? 1 : abscissaFactor(a.sample.abscissa, units);
   const series: PlotSeries[] = [];
-  for (const [id, idx] of byId) {
-    const t = mc.temperatureK[idx[0]];
+  if (!interconverted)
     qs.forEach((q, k) => {
-      const v = mc.quantities[q];
-      if (!v) return;
-      series.push({
-        id: `${id}:${q}`,
-        label: `${celsiusText(t)} ${quantitySymbol(q, mode)}`,
-        colour: scale.colour(t),
+      for (const r of reducedIsotherms(a, q)) {
+        const marks = stateMarks(byState.get(r.isothermId));
+        const base = {
+          colour: scale.colour(r.temperatureK),
+          style: QUANTITY_STYLE[k % 2],
+          isothermId: r.isothermId,
+        };
+        const label = `${celsiusText(r.temperatureK)} ${quantitySymbol(q, mode)}`;
+        const pts = (keep: (i: number) => boolean): PlotSeries['points'] =>
+          r.x.flatMap((x, i) =>
+            keep(i) && r.y[i] > 0 ? [{ x: x * fx, y: inDisplay(q, r.y[i], units) }] : [],
+          );
+        series.push({
+          ...base,
+          id: `${r.isothermId}:${q}`,
+          label: label + marks.suffix,
+          points: pts((i) => !r.outlier[i]),
+          ...(marks.faint && { faint: true, note: marks.note }),
+        });
+        const out = pts((i) => r.outlier[i]);
+        if (out.length)
+          series.push({
+            ...base,
+            id: `${r.isothermId}:${q}:outliers`,
+            label: `${label} (outliers)`,
+            points: out,
+            faint: true,
+            note: 'Flagged by the shift engine as outliers and left out of the fit.',
+          });
+      }
+    });
+  const legend: PlotSpec['legend'] = interconverted
+    ? []
+    : qs.map((q, k) => ({
+        label: `${quantitySymbol(q, mode)} (shifted)`,
+        colour: '#4a5358',
         style: QUANTITY_STYLE[k % 2],
-        isothermId: id,
-        points: idx.flatMap((i) => {
-          const y = v[i];
-          return y !== null && y > 0 && mc.reducedX[i] > 0 ? [{ x: mc.reducedX[i], y }] : [];
-        }),
-      });
+      }));
+  for (const [k, q] of qs.entries()) {
+    const c = pronyCurve(a, q);
+    if (!c) continue;
+    const cx = c.abscissa === 'angularFrequency' ? abscissaFactor(c.abscissa, units) : 1;
+    series.push({
+      id: `prony:${q}`,
+      label: `Prony series ${quantitySymbol(q, mode)}`,
+      colour: PRONY_COLOUR,
+      style: k === 1 ? 'dashed' : 'line',
+      points: c.x.flatMap((x, i) =>
+        c.y[i] > 0 ? [{ x: x * cx, y: inDisplay(q, c.y[i], units) }] : [],
+      ),
     });
   }
-  const legend = qs.map((q, k) => ({
-    label: `${quantitySymbol(q, mode)} (shifted)`,
-    colour: '#4a5358',
-    style: QUANTITY_STYLE[k % 2],
-  }));
-  if (a.prony && mc.reducedX.length > 1) {
-    const p = a.prony;
-    const lo = Math.min(...mc.reducedX);
-    const hi = Math.max(...mc.reducedX);
-    const grid = Array.from({ length: 160 }, (_, i) => lo * (hi / lo) ** (i / 159));
-    const fns: [QuantityId, (x: number) => number][] =
-      a.sample.abscissa === 'angularFrequency'
-        ? [
-            ['storageModulus', (w) => pronyStorage(p, w)],
-            ['lossModulus', (w) => pronyLoss(p, w)],
-          ]
-        : [['relaxationModulus', (t) => pronyRelaxation(p, t)]];
-    for (const [q, f] of fns.filter(([q]) => qs.includes(q))) {
-      series.push({
-        id: `prony:${q}`,
-        label: `Prony series ${quantitySymbol(q, mode)}`,
-        colour: PRONY_COLOUR,
-        style: q === 'lossModulus' ? 'dashed' : 'line',
-        points: grid.map((x) => ({ x, y: f(x) })).filter((pt) => pt.y > 0),
-      });
-    }
+  if (a.prony && series.some((s) => s.id.startsWith('prony:')))
     legend.push({
-      label: `Prony series (${p.tauS.length} modes)`,
+      label: interconverted
+        ? `${quantitySymbol('relaxationModulus', mode)} from the Prony series (${a.prony.tauS.length} modes)`
+        : `Prony series (${a.prony.tauS.length} modes)`,
       colour: PRONY_COLOUR,
       style: 'line',
     });
-  }
+  const abscissa = interconverted ? 'time' : a.sample.abscissa;
   const quantityOf = (s: PlotSeries): QuantityId => s.id.split(':')[1] as QuantityId;
+  const what =
+    view === 'moduli'
+      ? 'Master curve'
+      : view === 'tanDelta'
+        ? 'Master curve of tan δ'
+        : view === 'viscosity'
+          ? 'Master curve of |η*|'
+          : `Master curve of ${quantitySymbol('relaxationModulus', mode)}${interconverted ? ' (from the Prony series)' : ''}`;
   return {
-    id: 'master',
-    title: `Master curve at Tref = ${toCelsius(a.referenceTemperatureK).toFixed(1)} °C`,
-    x: { kind: 'log', label: xAxisLabel(a.sample.abscissa, true) },
-    y: { kind: 'log', label: yAxisLabel(qs, mode, a.settings.verticalShift !== 'none') },
+    id: VIEW_ID[view],
+    title: `${what} at Tref = ${toCelsius(a.referenceTemperatureK).toFixed(1)} °C`,
+    x: { kind: 'log', label: xAxisLabel(abscissa, true, units) },
+    y: {
+      kind: 'log',
+      label: yAxisLabel(qs, mode, a.settings.verticalShift !== 'none', units),
+    },
     series,
     bands: [],
     legend,
-    colourBar: {
-      minC: toCelsius(scale.minK),
-      maxC: toCelsius(scale.maxK),
-      gradient: scale.gradient,
-    },
+    colourBar: interconverted ? undefined : colourBar(scale),
     describe: (s, pt) =>
-      `${xText(a.sample.abscissa, true, pt.x)} · ${valueText(quantityOf(s), mode, pt.y)}`,
-    draggable: true,
+      `${xText(abscissa, true, pt.x, units)} · ${valueText(quantityOf(s), mode, pt.y, units)}`,
+    draggable: !interconverted,
   };
 }

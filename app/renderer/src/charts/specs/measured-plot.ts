@@ -1,14 +1,16 @@
 /**
  * The measured isotherms as they came from the files, one colour per temperature. Masked points
- * and excluded isotherms stay visible (faint) so they can be brought back.
+ * and excluded or left-out isotherms stay visible (faint, with the reason on hover) so they can
+ * be brought back.
  */
 import type { Dataset, QuantityId } from '../../../../../core/data/types';
+import type { IsothermState } from '../../../../../core/pipeline/isotherm-states';
 import type { DocumentOptions } from '../../document/analysis-document';
+import { abscissaFactor, SI_DISPLAY, type DisplayUnits } from '../../format/display-units';
 import type { PlotSeries, PlotSpec, SeriesStyle } from '../plot-spec';
-import { temperatureScale } from '../temperature-colours';
-import { celsiusText, valueText, xAxisLabel, xText, yAxisLabel } from './plot-labels';
-import { toCelsius } from '../../../../../core/pipeline/temperature';
+import { celsiusText, inDisplay, valueText, xAxisLabel, xText, yAxisLabel } from './plot-labels';
 import { quantitySymbol } from '../../../../../core/data/quantities';
+import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';
 
 /** The two quantities drawn for a kind of test (first solid discs, second rings). */
 export function plotQuantities(dataset: Dataset): QuantityId[] {
@@ -25,14 +27,28 @@ export function plotQuantities(dataset: Dataset): QuantityId[] {
 
 export const QUANTITY_STYLE: SeriesStyle[] = ['disc', 'ring'];
 
-export function measuredPlot(dataset: Dataset, options: DocumentOptions): PlotSpec {
+export function measuredPlot(
+  dataset: Dataset,
+  options: DocumentOptions,
+  units: DisplayUnits = SI_DISPLAY,
+  /** The analysis's isotherm states (engine-dropped ones are drawn faint too). */
+  states?: readonly IsothermState[],
+): PlotSpec {
   const qs = plotQuantities(dataset);
-  const scale = temperatureScale(dataset.isotherms.map((i) => i.temperatureK));
+  const scale = datasetScale(dataset);
   const masked = new Set((options.maskedPoints ?? []).map((p) => `${p.file}\u0000${p.row}`));
   const excluded = new Set(options.excludedIsothermIds ?? []);
+  const byId = statesById(states);
+  const fx = abscissaFactor(dataset.abscissa, units);
   const series: PlotSeries[] = [];
   for (const iso of dataset.isotherms) {
     const colour = scale.colour(iso.temperatureK);
+    const marks = stateMarks(
+      byId.get(iso.id) ??
+        (excluded.has(iso.id)
+          ? { use: 'excluded', description: 'Excluded by you: not in the fit.' }
+          : undefined),
+    );
     qs.forEach((q, k) => {
       const v = iso.quantities[q];
       if (!v) return;
@@ -42,21 +58,21 @@ export function measuredPlot(dataset: Dataset, options: DocumentOptions): PlotSp
         if (!(v[i] > 0) || !(x > 0)) return;
         const src = iso.source[i];
         const point = {
-          x,
-          y: v[i],
+          x: x * fx,
+          y: inDisplay(q, v[i], units),
           ref: { isothermId: iso.id, index: i, file: src.file, row: src.row },
         };
         const isMasked = !iso.mask[i] || masked.has(`${src.file}\u0000${src.row}`);
         (isMasked ? off : used).push(point);
       });
       const base = { colour, style: QUANTITY_STYLE[k % 2], isothermId: iso.id };
-      const label = `${celsiusText(iso.temperatureK)} ${quantitySymbol(q, dataset.deformation)}`;
+      const label = `${celsiusText(iso.temperatureK)} ${quantitySymbol(q, dataset.deformation)}${marks.suffix}`;
       series.push({
         ...base,
         id: `${iso.id}:${q}`,
         label,
         points: used,
-        faint: excluded.has(iso.id),
+        ...(marks.faint && { faint: true, note: marks.note }),
       });
       if (off.length)
         series.push({
@@ -65,6 +81,7 @@ export function measuredPlot(dataset: Dataset, options: DocumentOptions): PlotSp
           label: `${label} (masked)`,
           points: off,
           faint: true,
+          note: 'Masked points: left out of the fit.',
         });
     });
   }
@@ -72,8 +89,8 @@ export function measuredPlot(dataset: Dataset, options: DocumentOptions): PlotSp
   return {
     id: 'measured',
     title: 'Measured isotherms',
-    x: { kind: 'log', label: xAxisLabel(dataset.abscissa, false) },
-    y: { kind: 'log', label: yAxisLabel(qs, dataset.deformation, false) },
+    x: { kind: 'log', label: xAxisLabel(dataset.abscissa, false, units) },
+    y: { kind: 'log', label: yAxisLabel(qs, dataset.deformation, false, units) },
     series,
     bands: [],
     legend: qs.map((q, k) => ({
@@ -81,15 +98,11 @@ export function measuredPlot(dataset: Dataset, options: DocumentOptions): PlotSp
       colour: '#4a5358',
       style: QUANTITY_STYLE[k % 2],
     })),
-    colourBar: {
-      minC: toCelsius(scale.minK),
-      maxC: toCelsius(scale.maxK),
-      gradient: scale.gradient,
-    },
+    colourBar: colourBar(scale),
     describe: (s, p) =>
       [
-        xText(dataset.abscissa, false, p.x),
-        valueText(quantityOf(s), dataset.deformation, p.y),
+        xText(dataset.abscissa, false, p.x, units),
+        valueText(quantityOf(s), dataset.deformation, p.y, units),
         p.ref ? `${p.ref.file} row ${p.ref.row}` : '',
       ]
         .filter(Boolean)

@@ -1,12 +1,15 @@
 /**
- * Shift factors against temperature: the fitted log10 aT of each isotherm (±1 s.e. in the SVG
- * export) with each fitted model's curve and 95 % band.
+ * Shift factors against temperature: the fitted log10 aT of each isotherm (±1 s.e.) with each
+ * fitted model's curve and 95 % band, and a vertical line at Tg when Tg is known (WLF constants
+ * fitted above Tg do not hold below it). Isotherms that are not in the fit are drawn as faded
+ * rings.
  */
+import type { IsothermState } from '../../../../../core/pipeline/isotherm-states';
 import type { Analysis } from '../../../../../core/pipeline/types';
 import { toCelsius } from '../../../../../core/pipeline/temperature';
-import { formatFixed } from '../../../../../core/report/format';
+import { formatWithError } from '../../format/numbers';
 import type { PlotBand, PlotSeries, PlotSpec } from '../plot-spec';
-import { temperatureScale } from '../temperature-colours';
+import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';
 
 export const MODEL_COLOURS = {
   wlf: '#23676b',
@@ -18,13 +21,35 @@ export const MODEL_NAMES = {
   arrhenius: 'Arrhenius',
   polynomial: 'polynomial',
 } as const;
+export const TG_COLOUR = '#8a2f1d';
 
-export function shiftPlot(a: Analysis): PlotSpec {
-  const scale = temperatureScale(a.dataset.isotherms.map((i) => i.temperatureK));
+/** A vertical line at x from y0 to y1 (Tg), as a plot series. */
+export function verticalLine(
+  id: string,
+  label: string,
+  x: number,
+  y0: number,
+  y1: number,
+): PlotSeries {
+  return {
+    id,
+    label,
+    colour: TG_COLOUR,
+    style: 'dashed',
+    points: [
+      { x, y: y0 },
+      { x, y: y1 },
+    ],
+  };
+}
+
+export function shiftPlot(a: Analysis, states?: readonly IsothermState[]): PlotSpec {
+  const scale = datasetScale(a.dataset);
+  const byState = statesById(states);
   const series: PlotSeries[] = [];
   const bands: PlotBand[] = [];
   const legend: PlotSpec['legend'] = [
-    { label: 'log10 aT of an isotherm', colour: '#4a5358', style: 'disc' },
+    { label: 'log10 aT of an isotherm (±1 s.e.)', colour: '#4a5358', style: 'disc' },
   ];
   for (const kind of ['wlf', 'arrhenius', 'polynomial'] as const) {
     const m = a.models[kind];
@@ -50,18 +75,30 @@ export function shiftPlot(a: Analysis): PlotSpec {
       style: kind === 'wlf' ? 'line' : 'dashed',
     });
   }
+  const ys: number[] = [];
   for (const c of a.curves) {
     if (c.log10aT === null) continue;
+    const marks = stateMarks(byState.get(c.isothermId));
+    ys.push(c.log10aT);
     series.push({
       id: `curve:${c.isothermId}`,
-      label: `${toCelsius(c.temperatureK).toFixed(1)} °C${c.included ? '' : ' (excluded)'}`,
+      label: `${toCelsius(c.temperatureK).toFixed(1)} °C${marks.suffix}`,
       colour: scale.colour(c.temperatureK),
       style: c.included ? 'disc' : 'ring',
-      faint: !c.included,
+      ...(marks.faint && { faint: true, note: marks.note }),
       isothermId: c.isothermId,
       points: [{ x: toCelsius(c.temperatureK), y: c.log10aT }],
       yError: [c.log10aTStdErr],
     });
+  }
+  const tg = a.settings.glassTransitionK;
+  if (tg !== null) {
+    const all = [...ys, ...bands.flatMap((b) => [...b.lower, ...b.upper])];
+    const lo = all.length ? Math.min(...all) : -1;
+    const hi = all.length ? Math.max(...all) : 1;
+    const label = `Tg = ${toCelsius(tg).toFixed(1)} °C`;
+    series.push(verticalLine('tg', label, toCelsius(tg), lo, hi));
+    legend.push({ label, colour: TG_COLOUR, style: 'dashed' });
   }
   const err = new Map(a.curves.map((c) => [c.isothermId, c.log10aTStdErr]));
   return {
@@ -72,14 +109,11 @@ export function shiftPlot(a: Analysis): PlotSpec {
     series,
     bands,
     legend,
-    colourBar: {
-      minC: toCelsius(scale.minK),
-      maxC: toCelsius(scale.maxK),
-      gradient: scale.gradient,
-    },
+    colourBar: colourBar(scale),
     describe: (s, p) => {
+      if (s.id === 'tg') return s.label;
       const e = s.isothermId ? err.get(s.isothermId) : undefined;
-      return `T = ${p.x.toFixed(1)} °C · log10 aT = ${formatFixed(p.y, 3)}${e != null ? ` ± ${formatFixed(e, 3)}` : ''}`;
+      return `T = ${p.x.toFixed(1)} °C · log10 aT = ${formatWithError(p.y, e)}`;
     },
   };
 }

@@ -5,42 +5,52 @@
  * The points come from core (vanGurpPalmenSeries); this only styles them.
  */
 import { quantitySymbol } from '../../../../../core/data/quantities';
+import type { IsothermState } from '../../../../../core/pipeline/isotherm-states';
 import type { Analysis } from '../../../../../core/pipeline/types';
-import { toCelsius } from '../../../../../core/pipeline/temperature';
 import { vanGurpPalmenSeries } from '../../../../../core/pipeline/van-gurp-palmen';
-import { formatValue as formatNumber } from '../../tables/format-value';
+import { SI_DISPLAY, type DisplayUnits } from '../../format/display-units';
+import { formatSig } from '../../format/numbers';
 import type { PlotSeries, PlotSpec } from '../plot-spec';
-import { temperatureScale } from '../temperature-colours';
-import { celsiusText } from './plot-labels';
+import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';
+import { celsiusText, inDisplay, unitOf } from './plot-labels';
 
 /** null when the data are not oscillatory (no phase angle). */
-export function vgpPlot(a: Analysis): PlotSpec | null {
+export function vgpPlot(
+  a: Analysis,
+  units: DisplayUnits = SI_DISPLAY,
+  states?: readonly IsothermState[],
+): PlotSpec | null {
   if (a.sample.testKind !== 'oscillatory') return null;
-  const scale = temperatureScale(a.dataset.isotherms.map((i) => i.temperatureK));
-  const series: PlotSeries[] = vanGurpPalmenSeries(a).map((v) => ({
-    id: `${v.isothermId}:vgp`,
-    label: celsiusText(v.temperatureK),
-    colour: scale.colour(v.temperatureK),
-    style: 'disc',
-    isothermId: v.isothermId,
-    points: v.complexModulusPa.map((g, i) => ({ x: g, y: v.phaseAngleDeg[i] })),
-  }));
+  const scale = datasetScale(a.dataset);
+  const byState = statesById(states);
+  const series: PlotSeries[] = vanGurpPalmenSeries(a).map((v) => {
+    const marks = stateMarks(byState.get(v.isothermId));
+    return {
+      id: `${v.isothermId}:vgp`,
+      label: celsiusText(v.temperatureK) + marks.suffix,
+      colour: scale.colour(v.temperatureK),
+      style: 'disc',
+      ...(marks.faint && { faint: true, note: marks.note }),
+      isothermId: v.isothermId,
+      points: v.complexModulusPa.map((g, i) => ({
+        x: inDisplay('complexModulus', g, units),
+        y: v.phaseAngleDeg[i],
+      })),
+    };
+  });
   if (!series.length) return null;
   const sym = quantitySymbol('complexModulus', a.sample.deformation);
   const prefix = a.settings.verticalShift === 'none' ? '' : 'bT·';
+  const unit = unitOf('complexModulus', units);
   return {
     id: 'van-gurp-palmen',
     title: 'van Gurp–Palmen plot (no shift needed)',
-    x: { kind: 'log', label: `${prefix}${sym} (Pa)` },
+    x: { kind: 'log', label: `${prefix}${sym} (${unit})` },
     y: { kind: 'linear', label: 'phase angle δ (°)' },
     series,
     bands: [],
     legend: [{ label: 'δ against ' + prefix + sym, colour: '#4a5358', style: 'disc' }],
-    colourBar: {
-      minC: toCelsius(scale.minK),
-      maxC: toCelsius(scale.maxK),
-      gradient: scale.gradient,
-    },
-    describe: (_s, p) => `${prefix}${sym} = ${formatNumber(p.x, 4)} Pa · δ = ${p.y.toFixed(1)}°`,
+    colourBar: colourBar(scale),
+    describe: (_s, p) => `${prefix}${sym} = ${formatSig(p.x, 4)} ${unit} · δ = ${p.y.toFixed(1)}°`,
   };
 }

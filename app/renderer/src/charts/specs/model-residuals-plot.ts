@@ -1,0 +1,60 @@
+/**
+ * Residuals of each shift-factor model against temperature (log10 aT of the isotherm − model,
+ * decades, from core's fits), with the isotherm's ±1 s.e.: a pattern with temperature says the
+ * model does not suit the data range; scatter within the error bars says it does.
+ */
+import type { Analysis } from '../../../../../core/pipeline/types';
+import { toCelsius } from '../../../../../core/pipeline/temperature';
+import { formatFixed } from '../../../../../core/report/format';
+import type { PlotSeries, PlotSpec } from '../plot-spec';
+import { MODEL_COLOURS, MODEL_NAMES } from './shift-plot';
+
+const STYLES = { wlf: 'disc', arrhenius: 'ring', polynomial: 'disc' } as const;
+
+export function modelResidualsPlot(a: Analysis): PlotSpec {
+  const err = new Map(a.curves.map((c) => [c.isothermId, c.log10aTStdErr]));
+  const series: PlotSeries[] = [];
+  const legend: PlotSpec['legend'] = [];
+  const ts: number[] = [];
+  for (const kind of ['wlf', 'arrhenius', 'polynomial'] as const) {
+    const m = a.models[kind];
+    if (!m || m.residuals.length === 0) continue;
+    const rs = [...m.residuals].sort((p, q) => p.temperatureK - q.temperatureK);
+    ts.push(...rs.map((r) => toCelsius(r.temperatureK)));
+    series.push({
+      id: `residuals:${kind}`,
+      label: `${MODEL_NAMES[kind]} (RMS ${formatFixed(m.rmsResidualDecades, 3)} decades)`,
+      colour: MODEL_COLOURS[kind],
+      style: STYLES[kind],
+      points: rs.map((r) => ({ x: toCelsius(r.temperatureK), y: r.residualDecades })),
+      yError: rs.map((r) => err.get(r.isothermId) ?? null),
+    });
+    legend.push({
+      label: `${MODEL_NAMES[kind]}: RMS ${formatFixed(m.rmsResidualDecades, 3)} decades`,
+      colour: MODEL_COLOURS[kind],
+      style: STYLES[kind],
+    });
+  }
+  if (ts.length)
+    series.unshift({
+      id: 'zero',
+      label: 'zero',
+      colour: '#9aa3a0',
+      style: 'line',
+      points: [
+        { x: Math.min(...ts), y: 0 },
+        { x: Math.max(...ts), y: 0 },
+      ],
+    });
+  return {
+    id: 'model-residuals',
+    title: `Residuals of the shift-factor models, Tref = ${toCelsius(a.referenceTemperatureK).toFixed(1)} °C`,
+    x: { kind: 'linear', label: 'temperature T (°C)' },
+    y: { kind: 'linear', label: 'log10 aT − model (decades)' },
+    series,
+    bands: [],
+    legend,
+    describe: (s, p) =>
+      `${s.label.split(' (')[0]} · T = ${p.x.toFixed(1)} °C · residual ${formatFixed(p.y, 3)} decades`,
+  };
+}

@@ -1,0 +1,96 @@
+/**
+ * Every isotherm's points at the reference temperature for one quantity: the measured values,
+ * or the ones derived from G′ and G″ (|G*| = √(G′² + G″²), tan δ = G″/G′, δ = atan2(G″, G′),
+ * |η*| = |G*|/ω; DOMAIN.md §1), reduced with the isotherm's shift (core/data/reduction: aT·ω or
+ * t/aT; moduli × bT, |η*| × bT/aT, tan δ and δ unchanged). Used isotherms come at their fitted
+ * shift with the engine's outlier flags; the others at the shift `isothermStates` places them
+ * at, so plots can draw them faded. Masked points are left out.
+ */
+import type { Isotherm, QuantityId } from '../data/types';
+import { reducedAbscissa, reductionFactor } from '../data/reduction';
+import { isothermStates, type IsothermUse } from './isotherm-states';
+import type { Analysis } from './types';
+
+export interface ReducedIsotherm {
+  isothermId: string;
+  temperatureK: number;
+  use: IsothermUse;
+  /** Reduced abscissa (aT·ω in rad/s or t/aT in s), in the isotherm's point order. */
+  x: number[];
+  /** Reduced values, SI. */
+  y: number[];
+  /** Index of each point within the isotherm. */
+  index: number[];
+  /** True where the shift engine flagged the point as an outlier. */
+  outlier: boolean[];
+}
+
+/** The values of `q` at every point of an isotherm, measured or derived; null when neither. */
+export function isothermValues(iso: Isotherm, q: QuantityId): number[] | null {
+  const v = iso.quantities;
+  if (v[q]) return v[q];
+  const gp = v.storageModulus;
+  const gpp = v.lossModulus;
+  const both = gp && gpp;
+  switch (q) {
+    case 'tanDelta':
+      if (both) return gp.map((g, i) => gpp[i] / g);
+      return v.phaseAngle ? v.phaseAngle.map((d) => Math.tan((d * Math.PI) / 180)) : null;
+    case 'phaseAngle':
+      if (both) return gp.map((g, i) => (Math.atan2(gpp[i], g) * 180) / Math.PI);
+      return v.tanDelta ? v.tanDelta.map((t) => (Math.atan(t) * 180) / Math.PI) : null;
+    case 'complexModulus':
+      return both ? gp.map((g, i) => Math.hypot(g, gpp[i])) : null;
+    case 'complexViscosity': {
+      const gs = isothermValues(iso, 'complexModulus');
+      return gs ? gs.map((g, i) => g / iso.x[i]) : null;
+    }
+    default:
+      return null;
+  }
+}
+
+/** True when the data hold `q` for at least one isotherm (measured or derivable). */
+export function hasQuantity(a: Analysis, q: QuantityId): boolean {
+  if (q === 'complexViscosity' && a.sample.abscissa !== 'angularFrequency') return false;
+  return a.dataset.isotherms.some((iso) => isothermValues(iso, q) !== null);
+}
+
+export function reducedIsotherms(a: Analysis, q: QuantityId): ReducedIsotherm[] {
+  const states = new Map(isothermStates(a).map((s) => [s.isothermId, s]));
+  const mc = a.masterCurve;
+  const flagged = new Map<string, number[]>();
+  mc.isothermId.forEach((id, i) => {
+    if (mc.outlier[i]) flagged.set(id, [...(flagged.get(id) ?? []), mc.reducedX[i]]);
+  });
+  const out: ReducedIsotherm[] = [];
+  for (const iso of a.dataset.isotherms) {
+    const s = states.get(iso.id);
+    const values = isothermValues(iso, q);
+    if (!s || !values || s.drawLog10aT === null) continue;
+    const aT = 10 ** s.drawLog10aT;
+    const bT = 10 ** s.drawLog10bT;
+    const f = reductionFactor(q, aT, bT);
+    const bad = flagged.get(iso.id) ?? [];
+    const r: ReducedIsotherm = {
+      isothermId: iso.id,
+      temperatureK: iso.temperatureK,
+      use: s.use,
+      x: [],
+      y: [],
+      index: [],
+      outlier: [],
+    };
+    iso.x.forEach((x, i) => {
+      const y = values[i] * f;
+      if (!iso.mask[i] || !Number.isFinite(y) || !(x > 0)) return;
+      const xr = reducedAbscissa(a.sample.abscissa, x, aT);
+      r.x.push(xr);
+      r.y.push(y);
+      r.index.push(i);
+      r.outlier.push(bad.some((b) => Math.abs(b - xr) <= 1e-9 * Math.abs(xr)));
+    });
+    if (r.x.length) out.push(r);
+  }
+  return out;
+}
