@@ -90,7 +90,7 @@ describe('the Thermoshift app in Chromium', () => {
     for (const [tab, name] of [
       ['measured', 'isotherms'],
       ['shift', 'shift-factors'],
-      ['vgp', 'van-gurp-palmen'],
+      ['checks', 'van-gurp-palmen'],
     ] as const) {
       await page.click(`[data-view-tab="${tab}"]`);
       await page.waitForSelector(`canvas[data-plot]`);
@@ -98,6 +98,7 @@ describe('the Thermoshift app in Chromium', () => {
       await shot(name);
     }
     await page.click('[data-view-tab="models"]');
+    await page.click('[data-sub-view="tables"]');
     expect(await page.innerText('.models-view')).toMatch(/Prony series: \d+ modes/);
     await shot('models');
   });

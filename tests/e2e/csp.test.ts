@@ -34,7 +34,7 @@ async function settled(page: Page): Promise<void> {
 async function walkThrough(page: Page): Promise<void> {
   await page.waitForSelector('[data-view="master"] canvas');
   await settled(page);
-  for (const tab of ['measured', 'master', 'shift', 'vgp', 'models', 'predict']) {
+  for (const tab of ['measured', 'master', 'shift', 'checks', 'models', 'predict']) {
     await page.click(`[data-view-tab="${tab}"]`);
     await page.waitForSelector(`[data-view-tab="${tab}"][aria-selected="true"]`);
     await settled(page);

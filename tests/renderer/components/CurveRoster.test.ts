@@ -76,4 +76,30 @@ describe('CurveRoster', () => {
     expect((row.find('[data-role="include"]').element as HTMLInputElement).checked).toBe(false);
     expect(row.find('[data-role="nudge-right"]').attributes('disabled')).toBeDefined();
   });
+
+  it('CurveRoster shows an isotherm the engine left out with no ticked box, a mark and the reason', () => {
+    const w = make({
+      states: [
+        {
+          isothermId: 'T02',
+          temperatureK: 320,
+          use: 'left-out',
+          locked: false,
+          reason: 'overlaps no other isotherm: no shift can be found',
+          description:
+            'Left out by the shift engine: overlaps no other isotherm: no shift can be found.',
+          drawLog10aT: null,
+          drawLog10bT: 0,
+          placedBy: null,
+        },
+      ],
+    });
+    const row = w.find('tr[data-isotherm="T02"]');
+    const box = row.find('[data-role="include"]').element as HTMLInputElement;
+    expect(box.checked).toBe(false);
+    expect(box.indeterminate).toBe(true);
+    expect(row.attributes('data-state')).toBe('left-out');
+    expect(row.find('[data-role="left-out"]').attributes('title')).toMatch(/overlaps no other/);
+    expect(row.attributes('title')).toMatch(/Left out by the shift engine/);
+  });
 });

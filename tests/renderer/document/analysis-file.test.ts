@@ -29,6 +29,20 @@ describe('serializeAnalysis() and parseAnalysis()', () => {
     expect(JSON.parse(text).savedAt).toBe('2026-01-02T03:04:05.000Z');
   });
 
+  it('parseAnalysis() keeps the display units, and opens a format-1 file (no units) in Pa and rad/s', () => {
+    const mpa = { ...doc, display: { modulus: 'MPa' as const, frequency: 'Hz' as const } };
+    expect(parseAnalysis(serializeAnalysis(mpa), 'a.json').display).toEqual({
+      modulus: 'MPa',
+      frequency: 'Hz',
+    });
+    const v1 = JSON.parse(serializeAnalysis(doc));
+    v1.formatVersion = 1;
+    delete v1.display;
+    const back = parseAnalysis(JSON.stringify(v1), 'old.thermoshift.json');
+    expect(back.display).toEqual({ modulus: 'Pa', frequency: 'rad/s' });
+    expect(back.options).toEqual(doc.options);
+  });
+
   it('parseAnalysis() refuses a file from a newer version with a message saying so', () => {
     const raw = JSON.parse(serializeAnalysis(doc));
     raw.formatVersion = ANALYSIS_FORMAT_VERSION + 1;
