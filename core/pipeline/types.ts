@@ -25,6 +25,8 @@ export interface AnalysisWarning {
   column?: number;
   /** The isotherm the warning concerns. */
   isothermId?: string;
+  /** The model the warning concerns (e.g. `wlf`, `prony`, `carreau-yasuda`). */
+  model?: string;
 }
 
 /**
@@ -76,6 +78,20 @@ export interface ModelFitStats {
   /** Temperature range the model was fitted over, K. */
   fittedRangeK: [number, number];
   converged: boolean;
+  /** Why the fit stopped, in words (converged or not). */
+  convergence: string;
+  /** χ²/(degrees of freedom): ≈ 1 when the shifts scatter as their covariance says. */
+  reducedChiSquare: number | null;
+  /**
+   * How the shifts were weighted: generalised least squares with the engine's covariance
+   * ('full-covariance'), or each shift by its own standard error ('diagonal', with the reason),
+   * and which shifts were left out (fixed by hand) with the reason.
+   */
+  weighting: {
+    kind: 'full-covariance' | 'diagonal';
+    note: string;
+    leftOut: { isothermId: string; temperatureK: number; reason: string }[];
+  };
   band: ModelBand;
   /**
    * The model as core/models evaluates it (`shiftModelBand`, core/spectrum `predictQuantity`):

@@ -85,6 +85,13 @@ export function fixtureAnalysis(kind: 'oscillatory' | 'relaxation' = 'oscillator
         residuals: [],
         fittedRangeK: [343.15, 403.15],
         converged: true,
+        convergence: 'fixture: not a fit',
+        reducedChiSquare: 1,
+        weighting: {
+          kind: 'full-covariance',
+          note: 'generalised least squares with the full covariance of the shifts',
+          leftOut: [],
+        },
         band: {
           temperatureK: grid,
           log10aT: mid,
