@@ -33,6 +33,42 @@ export default tseslint.config(
       'no-undef': 'off',
     },
   },
+  // Spreading an array into a call passes every element as an argument: Math.max(...x) overflows
+  // the call stack at a few 10⁵ elements (issue 9). Use extent()/minOf()/maxOf() from core/data.
+  {
+    files: ['core/**/*.ts', 'app/**/*.{ts,vue}', 'bench/**/*.ts', 'scripts/**/*.{ts,mjs}'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        {
+          selector:
+            "CallExpression[callee.object.name='Math'][callee.property.name=/^(max|min)$/] > SpreadElement",
+          message:
+            'No spread into Math.max/Math.min: it overflows the stack on big arrays. Use extent(), minOf() or maxOf() from core/data/extent.',
+        },
+      ],
+    },
+  },
+  // In the library and the renderer, arrays can hold a million points: no push(...array) either.
+  {
+    files: ['core/**/*.ts', 'app/renderer/**/*.{ts,vue}'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        {
+          selector:
+            "CallExpression[callee.object.name='Math'][callee.property.name=/^(max|min)$/] > SpreadElement",
+          message:
+            'No spread into Math.max/Math.min: it overflows the stack on big arrays. Use extent(), minOf() or maxOf() from core/data/extent.',
+        },
+        {
+          selector: "CallExpression[callee.property.name='push'] > SpreadElement",
+          message:
+            'No push(...array): it overflows the stack on big arrays. Push in a loop, or concatenate.',
+        },
+      ],
+    },
+  },
   // core/ is a pure library: no DOM, no Node, no Electron.
   {
     files: ['core/**/*.ts'],

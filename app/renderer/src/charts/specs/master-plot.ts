@@ -11,6 +11,8 @@ import type { PlotSeries, PlotSpec } from '../plot-spec';
 import { temperatureScale } from '../temperature-colours';
 import { celsiusText, valueText, xAxisLabel, xText, yAxisLabel } from './plot-labels';
 import { plotQuantities, QUANTITY_STYLE } from './measured-plot';
+import { plotThinner } from './thin-series';
+import { extent } from '../../../../../core/data/extent';
 
 export const PRONY_COLOUR = '#1e2326';
 
@@ -19,27 +21,43 @@ export function masterPlot(a: Analysis): PlotSpec {
   const mc = a.masterCurve;
   const scale = temperatureScale(a.dataset.isotherms.map((i) => i.temperatureK));
   const byId = new Map<string, number[]>();
-  mc.isothermId.forEach((id, i) => byId.set(id, [...(byId.get(id) ?? []), i]));
+  mc.isothermId.forEach((id, i) => {
+    const list = byId.get(id);
+    if (list) list.push(i);
+    else byId.set(id, [i]);
+  });
   const mode = a.sample.deformation;
-  const series: PlotSeries[] = [];
+  // one (x, y) pair of columns per isotherm and quantity, thinned together before any point object
+  const columns: {
+    id: string;
+    q: QuantityId;
+    k: number;
+    t: number;
+    x: Float64Array;
+    y: Float64Array;
+  }[] = [];
   for (const [id, idx] of byId) {
-    const t = mc.temperatureK[idx[0]];
     qs.forEach((q, k) => {
       const v = mc.quantities[q];
       if (!v) return;
-      series.push({
-        id: `${id}:${q}`,
-        label: `${celsiusText(t)} ${quantitySymbol(q, mode)}`,
-        colour: scale.colour(t),
-        style: QUANTITY_STYLE[k % 2],
-        isothermId: id,
-        points: idx.flatMap((i) => {
-          const y = v[i];
-          return y !== null && y > 0 && mc.reducedX[i] > 0 ? [{ x: mc.reducedX[i], y }] : [];
-        }),
+      const x = new Float64Array(idx.length);
+      const y = new Float64Array(idx.length);
+      idx.forEach((i, j) => {
+        x[j] = mc.reducedX[i];
+        y[j] = v[i] ?? NaN;
       });
+      columns.push({ id, q, k, t: mc.temperatureK[idx[0]], x, y });
     });
   }
+  const thinner = plotThinner(columns, 'log', 'log');
+  const series: PlotSeries[] = columns.map(({ id, q, k, t, x, y }) => ({
+    id: `${id}:${q}`,
+    label: `${celsiusText(t)} ${quantitySymbol(q, mode)}`,
+    colour: scale.colour(t),
+    style: QUANTITY_STYLE[k % 2],
+    isothermId: id,
+    points: thinner.keep(x, y).map((i) => ({ x: x[i], y: y[i] })),
+  }));
   const legend = qs.map((q, k) => ({
     label: `${quantitySymbol(q, mode)} (shifted)`,
     colour: '#4a5358',
@@ -47,8 +65,7 @@ export function masterPlot(a: Analysis): PlotSpec {
   }));
   if (a.prony && mc.reducedX.length > 1) {
     const p = a.prony;
-    const lo = Math.min(...mc.reducedX);
-    const hi = Math.max(...mc.reducedX);
+    const [lo, hi] = extent(mc.reducedX);
     const grid = Array.from({ length: 160 }, (_, i) => lo * (hi / lo) ** (i / 159));
     const fns: [QuantityId, (x: number) => number][] =
       a.sample.abscissa === 'angularFrequency'
@@ -75,7 +92,7 @@ export function masterPlot(a: Analysis): PlotSpec {
   const quantityOf = (s: PlotSeries): QuantityId => s.id.split(':')[1] as QuantityId;
   return {
     id: 'master',
-    title: `Master curve at Tref = ${toCelsius(a.referenceTemperatureK).toFixed(1)} °C`,
+    title: `Master curve at Tref = ${toCelsius(a.referenceTemperatureK).toFixed(1)} °C${thinner.note()}`,
     x: { kind: 'log', label: xAxisLabel(a.sample.abscissa, true) },
     y: { kind: 'log', label: yAxisLabel(qs, mode, a.settings.verticalShift !== 'none') },
     series,

@@ -9,6 +9,7 @@ import { temperatureScale } from '../temperature-colours';
 import { celsiusText, valueText, xAxisLabel, xText, yAxisLabel } from './plot-labels';
 import { toCelsius } from '../../../../../core/pipeline/temperature';
 import { quantitySymbol } from '../../../../../core/data/quantities';
+import { plotThinner } from './thin-series';
 
 /** The two quantities drawn for a kind of test (first solid discs, second rings). */
 export function plotQuantities(dataset: Dataset): QuantityId[] {
@@ -31,6 +32,13 @@ export function measuredPlot(dataset: Dataset, options: DocumentOptions): PlotSp
   const masked = new Set((options.maskedPoints ?? []).map((p) => `${p.file}\u0000${p.row}`));
   const excluded = new Set(options.excludedIsothermIds ?? []);
   const series: PlotSeries[] = [];
+  const thinner = plotThinner(
+    dataset.isotherms.flatMap((iso) =>
+      qs.flatMap((q) => (iso.quantities[q] ? [{ x: iso.x, y: iso.quantities[q] }] : [])),
+    ),
+    'log',
+    'log',
+  );
   for (const iso of dataset.isotherms) {
     const colour = scale.colour(iso.temperatureK);
     qs.forEach((q, k) => {
@@ -38,8 +46,8 @@ export function measuredPlot(dataset: Dataset, options: DocumentOptions): PlotSp
       if (!v) return;
       const used: PlotSeries['points'] = [];
       const off: PlotSeries['points'] = [];
-      iso.x.forEach((x, i) => {
-        if (!(v[i] > 0) || !(x > 0)) return;
+      for (const i of thinner.keep(iso.x, v)) {
+        const x = iso.x[i];
         const src = iso.source[i];
         const point = {
           x,
@@ -48,7 +56,7 @@ export function measuredPlot(dataset: Dataset, options: DocumentOptions): PlotSp
         };
         const isMasked = !iso.mask[i] || masked.has(`${src.file}\u0000${src.row}`);
         (isMasked ? off : used).push(point);
-      });
+      }
       const base = { colour, style: QUANTITY_STYLE[k % 2], isothermId: iso.id };
       const label = `${celsiusText(iso.temperatureK)} ${quantitySymbol(q, dataset.deformation)}`;
       series.push({
@@ -71,7 +79,7 @@ export function measuredPlot(dataset: Dataset, options: DocumentOptions): PlotSp
   const quantityOf = (s: PlotSeries): QuantityId => s.id.split(':')[1] as QuantityId;
   return {
     id: 'measured',
-    title: 'Measured isotherms',
+    title: `Measured isotherms${thinner.note()}`,
     x: { kind: 'log', label: xAxisLabel(dataset.abscissa, false) },
     y: { kind: 'log', label: yAxisLabel(qs, dataset.deformation, false) },
     series,

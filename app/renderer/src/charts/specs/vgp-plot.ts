@@ -12,25 +12,34 @@ import { formatValue as formatNumber } from '../../tables/format-value';
 import type { PlotSeries, PlotSpec } from '../plot-spec';
 import { temperatureScale } from '../temperature-colours';
 import { celsiusText } from './plot-labels';
+import { plotThinner } from './thin-series';
 
 /** null when the data are not oscillatory (no phase angle). */
 export function vgpPlot(a: Analysis): PlotSpec | null {
   if (a.sample.testKind !== 'oscillatory') return null;
   const scale = temperatureScale(a.dataset.isotherms.map((i) => i.temperatureK));
-  const series: PlotSeries[] = vanGurpPalmenSeries(a).map((v) => ({
+  const all = vanGurpPalmenSeries(a);
+  const thinner = plotThinner(
+    all.map((v) => ({ x: v.complexModulusPa, y: v.phaseAngleDeg })),
+    'log',
+    'linear',
+  );
+  const series: PlotSeries[] = all.map((v) => ({
     id: `${v.isothermId}:vgp`,
     label: celsiusText(v.temperatureK),
     colour: scale.colour(v.temperatureK),
     style: 'disc',
     isothermId: v.isothermId,
-    points: v.complexModulusPa.map((g, i) => ({ x: g, y: v.phaseAngleDeg[i] })),
+    points: thinner
+      .keep(v.complexModulusPa, v.phaseAngleDeg)
+      .map((i) => ({ x: v.complexModulusPa[i], y: v.phaseAngleDeg[i] })),
   }));
   if (!series.length) return null;
   const sym = quantitySymbol('complexModulus', a.sample.deformation);
   const prefix = a.settings.verticalShift === 'none' ? '' : 'bT·';
   return {
     id: 'van-gurp-palmen',
-    title: 'van Gurp–Palmen plot (no shift needed)',
+    title: `van Gurp–Palmen plot (no shift needed)${thinner.note()}`,
     x: { kind: 'log', label: `${prefix}${sym} (Pa)` },
     y: { kind: 'linear', label: 'phase angle δ (°)' },
     series,
