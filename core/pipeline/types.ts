@@ -151,8 +151,21 @@ export interface AnalysisModels {
 export interface AnalysisProny {
   /** The quantities it was fitted to, e.g. storage and loss modulus, or relaxation modulus. */
   fittedTo: QuantityId[];
+  /**
+   * Shear (G(t) = Ge + Σ g_i e^(−t/τ_i)) or tension (E(t) = Ee + Σ E_i e^(−t/τ_i)): the terms are
+   * moduli of that deformation and must be entered as such (E ≈ 3G for a rubber).
+   */
+  deformation: DeformationMode;
+  /** Equilibrium modulus Ge (shear) or Ee (tension), Pa. */
   equilibriumModulusPa: number;
-  /** Instantaneous modulus G0 = Ge + Σ g_i, Pa. */
+  /** How the equilibrium modulus was set ('fitted' ≥ 0 or 'zero'), and why. */
+  equilibrium: { mode: 'fitted' | 'zero'; reason: string };
+  /** Log–log slopes of the storage and loss modulus over the lowest decade (relaxation: over the last decade), null where not measured. */
+  terminalSlopes: { storage: number | null; loss: number | null; relaxation: number | null };
+  /** Measured points the series rests on and the log-bins (rows) it was fitted to. */
+  pointCount: number;
+  binCount: number;
+  /** Instantaneous modulus G0 = Ge + Σ g_i (E0 in tension), Pa. */
   instantaneousModulusPa: number;
   tauS: number[];
   modulusPa: number[];

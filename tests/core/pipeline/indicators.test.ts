@@ -68,4 +68,26 @@ describe('computeIndicators()', () => {
     expect(ind.tanDeltaPeakTemperature1Hz.unit).toBe('°C');
     expect(ind.zeroShearViscosity).toBeUndefined(); // a solid: its G'' > G' transition is no terminal zone
   });
+
+  it('computeIndicators() labels a tensile solid with E-symbols (E0, Ee, E″/E′) and a shear one with G-symbols', () => {
+    const p: PronySeries = {
+      equilibriumModulusPa: 1e6,
+      tauS: [1e-4, 1e-3, 1e-2, 1e-1, 1],
+      modulusPa: [2e8, 2e8, 2e8, 2e8, 2e8],
+    };
+    for (const [deformation, m] of [
+      ['tension', 'E'],
+      ['shear', 'G'],
+    ] as const) {
+      const ind = Object.fromEntries(
+        computeIndicators({ ...dataset, deformation }, masterOf(p), p, window, {}, []).map((i) => [
+          i.key,
+          i,
+        ]),
+      );
+      expect(ind.glassyModulus.label).toContain(`${m}0`);
+      expect(ind.rubberyModulus.label).toContain(`${m}e`);
+      expect(ind.tanDeltaPeakFrequency.label).toContain(`${m}''/${m}'`);
+    }
+  });
 });

@@ -4,6 +4,7 @@
  */
 import type { Analysis, ModelFitStats } from '../../../../core/pipeline/types';
 import { toCelsius } from '../../../../core/pipeline/temperature';
+import { pronySymbols } from '../../../../core/spectrum/prony-symbols';
 import type { Cell } from './tsv';
 
 export interface PlainTable {
@@ -89,6 +90,8 @@ export function modelTable(a: Analysis): PlainTable {
       m.r2,
       m.rmsResidualDecades,
       `${toCelsius(m.fittedRangeK[0]).toFixed(1)} … ${toCelsius(m.fittedRangeK[1]).toFixed(1)}`,
+      m.weighting.kind === 'full-covariance' ? 'shift covariance (GLS)' : 'own s.e. only',
+      m.converged ? 'yes' : 'no',
     ]),
   );
   return {
@@ -104,6 +107,8 @@ export function modelTable(a: Analysis): PlainTable {
       'R²',
       'RMS residual (decades)',
       'fitted range (°C)',
+      'weighting',
+      'converged',
     ],
     rows,
   };
@@ -113,10 +118,21 @@ export function pronyTable(a: Analysis): PlainTable {
   const p = a.prony;
   if (!p) return { header: [], rows: [] };
   const g0 = p.instantaneousModulusPa;
+  const y = pronySymbols(p.deformation);
   return {
-    header: ['mode', 'τ_i (s)', 'g_i (Pa)', 'g_i / G0'],
+    header: [
+      'mode',
+      'τ_i (s)',
+      `${y.term} (Pa, ${p.deformation})`,
+      `${y.term} / ${y.instantaneous}`,
+    ],
     rows: [
-      ['equilibrium', null, p.equilibriumModulusPa, g0 > 0 ? p.equilibriumModulusPa / g0 : null],
+      [
+        `${y.equilibrium} (equilibrium)`,
+        null,
+        p.equilibriumModulusPa,
+        g0 > 0 ? p.equilibriumModulusPa / g0 : null,
+      ],
       ...p.tauS.map((t, i): Cell[] => [
         i + 1,
         t,
