@@ -3,6 +3,15 @@ import tseslint from 'typescript-eslint';
 import vue from 'eslint-plugin-vue';
 import prettier from 'eslint-config-prettier';
 
+// Spreading an array into a call passes every element as an argument: Math.max(...x) overflows
+// the call stack at a few 10⁵ elements (issue 9). Use extent()/minOf()/maxOf() from core/data.
+const NO_SPREAD_INTO_MATH_EXTREMES = {
+  selector:
+    "CallExpression[callee.object.name='Math'][callee.property.name=/^(max|min)$/] > SpreadElement",
+  message:
+    'No spread into Math.max/Math.min: it overflows the stack on big arrays. Use extent(), minOf() or maxOf() from core/data/extent.',
+};
+
 export default tseslint.config(
   { ignores: ['node_modules/', 'dist/', 'out/', 'release/', 'test-results/'] },
   js.configs.recommended,
@@ -33,20 +42,10 @@ export default tseslint.config(
       'no-undef': 'off',
     },
   },
-  // Spreading an array into a call passes every element as an argument: Math.max(...x) overflows
-  // the call stack at a few 10⁵ elements (issue 9). Use extent()/minOf()/maxOf() from core/data.
   {
     files: ['core/**/*.ts', 'app/**/*.{ts,vue}', 'bench/**/*.ts', 'scripts/**/*.{ts,mjs}'],
     rules: {
-      'no-restricted-syntax': [
-        'error',
-        {
-          selector:
-            "CallExpression[callee.object.name='Math'][callee.property.name=/^(max|min)$/] > SpreadElement",
-          message:
-            'No spread into Math.max/Math.min: it overflows the stack on big arrays. Use extent(), minOf() or maxOf() from core/data/extent.',
-        },
-      ],
+      'no-restricted-syntax': ['error', NO_SPREAD_INTO_MATH_EXTREMES],
     },
   },
   // In the library and the renderer, arrays can hold a million points: no push(...array) either.
@@ -55,12 +54,7 @@ export default tseslint.config(
     rules: {
       'no-restricted-syntax': [
         'error',
-        {
-          selector:
-            "CallExpression[callee.object.name='Math'][callee.property.name=/^(max|min)$/] > SpreadElement",
-          message:
-            'No spread into Math.max/Math.min: it overflows the stack on big arrays. Use extent(), minOf() or maxOf() from core/data/extent.',
-        },
+        NO_SPREAD_INTO_MATH_EXTREMES,
         {
           selector: "CallExpression[callee.property.name='push'] > SpreadElement",
           message:

@@ -5,6 +5,7 @@
  * Relaxation data of a liquid fall faster than any power of t at long times. Judged on the binned
  * curve over its lowest decade of frequency (highest decade of time).
  */
+import { weightedLinearFit } from '../models/weighted-linear-fit';
 import type { LogBins } from './log-bins';
 
 export interface TerminalZone {
@@ -29,20 +30,11 @@ export const TERMINAL_RELAXATION_SLOPE = -1;
 /** Weighted straight-line slope of (x, y) with weights w; NaN with fewer than 3 points. */
 function slope(x: number[], y: number[], w: number[]): number {
   if (x.length < 3) return NaN;
-  let s = 0;
-  let sx = 0;
-  let sy = 0;
-  let sxx = 0;
-  let sxy = 0;
-  x.forEach((xi, i) => {
-    s += w[i];
-    sx += w[i] * xi;
-    sy += w[i] * y[i];
-    sxx += w[i] * xi * xi;
-    sxy += w[i] * xi * y[i];
-  });
-  const d = s * sxx - sx * sx;
-  return d > 0 ? (s * sxy - sx * sy) / d : NaN;
+  return weightedLinearFit(
+    x.map((v) => [1, v]),
+    y,
+    w,
+  ).coefficients[1];
 }
 
 /** Slope of binned quantity k over bins [from, to] (inclusive positions). */

@@ -92,7 +92,7 @@ describe('the Thermoshift app in Chromium', () => {
       await shot(name);
     }
     await page.click('[data-view-tab="models"]');
-    expect(await page.innerText('.models-view')).toMatch(/Prony series: \d+ modes/);
+    expect(await page.innerText('.models-view')).toMatch(/Prony series in shear \(.*\): \d+ modes/);
     await shot('models');
   });
 

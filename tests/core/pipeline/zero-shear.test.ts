@@ -1,27 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { zeroShearIndicators } from '../../../core/pipeline/zero-shear';
-import type {
-  AnalysisIndicator,
-  AnalysisMasterCurve,
-  AnalysisWarning,
-} from '../../../core/pipeline/types';
-import { pronyLoss, pronyStorage, type PronySeries } from '../../../core/spectrum/prony-model';
+import type { AnalysisIndicator, AnalysisWarning } from '../../../core/pipeline/types';
+import type { PronySeries } from '../../../core/spectrum/prony-model';
+import { pronyMasterCurve } from '../../helpers/prony-master';
 import { expectRelClose } from '../../helpers/assert-close';
 
-function masterOf(p: PronySeries, lo = 1e-3, hi = 1e3): AnalysisMasterCurve {
-  const n = 121;
-  const x = Array.from({ length: n }, (_, i) => lo * (hi / lo) ** (i / (n - 1)));
-  return {
-    reducedX: x,
-    quantities: {
-      storageModulus: x.map((w) => pronyStorage(p, w)),
-      lossModulus: x.map((w) => pronyLoss(p, w)),
-    },
-    isothermId: x.map(() => 'T01'),
-    temperatureK: x.map(() => 450),
-    outlier: x.map(() => false),
-  };
-}
+const masterOf = (p: PronySeries, lo = 1e-3, hi = 1e3) => pronyMasterCurve(p, lo, hi, 121, 450);
 
 const keyed = (list: AnalysisIndicator[]) => Object.fromEntries(list.map((i) => [i.key, i]));
 
