@@ -3,6 +3,15 @@ import tseslint from 'typescript-eslint';
 import vue from 'eslint-plugin-vue';
 import prettier from 'eslint-config-prettier';
 
+// Spreading an array into a call passes every element as an argument: Math.max(...x) overflows
+// the call stack at a few 10⁵ elements (issue 9). Use extent()/minOf()/maxOf() from core/data.
+const NO_SPREAD_INTO_MATH_EXTREMES = {
+  selector:
+    "CallExpression[callee.object.name='Math'][callee.property.name=/^(max|min)$/] > SpreadElement",
+  message:
+    'No spread into Math.max/Math.min: it overflows the stack on big arrays. Use extent(), minOf() or maxOf() from core/data/extent.',
+};
+
 export default tseslint.config(
   { ignores: ['node_modules/', 'dist/', 'out/', 'release/', 'test-results/'] },
   js.configs.recommended,
@@ -31,6 +40,27 @@ export default tseslint.config(
       // TypeScript (tsc, vue-tsc) already reports undefined names, with the right lib per folder;
       // typescript-eslint advises turning the core rule off.
       'no-undef': 'off',
+    },
+  },
+  {
+    files: ['core/**/*.ts', 'app/**/*.{ts,vue}', 'bench/**/*.ts', 'scripts/**/*.{ts,mjs}'],
+    rules: {
+      'no-restricted-syntax': ['error', NO_SPREAD_INTO_MATH_EXTREMES],
+    },
+  },
+  // In the library and the renderer, arrays can hold a million points: no push(...array) either.
+  {
+    files: ['core/**/*.ts', 'app/renderer/**/*.{ts,vue}'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        NO_SPREAD_INTO_MATH_EXTREMES,
+        {
+          selector: "CallExpression[callee.property.name='push'] > SpreadElement",
+          message:
+            'No push(...array): it overflows the stack on big arrays. Push in a loop, or concatenate.',
+        },
+      ],
     },
   },
   // core/ is a pure library: no DOM, no Node, no Electron.

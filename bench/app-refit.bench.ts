@@ -10,6 +10,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { importFiles } from '../core/io/index.ts';
+import { maxOf } from '../core/data/extent.ts';
 import type { Dataset } from '../core/data/types.ts';
 import type { Analysis } from '../core/pipeline/types.ts';
 import { syntheticIsotherms } from '../core/synthetic/index.ts';
@@ -107,7 +108,7 @@ export async function run(): Promise<void> {
     const points = c.dataset.isotherms.reduce((n, i) => n + i.x.length, 0);
     console.log(
       `${c.name}: ${c.dataset.isotherms.length} isotherms, ${points} points; re-fit per drag step (shifts only, one curve locked): ` +
-        `warm start median ${median(warm).toFixed(1)} ms (max ${Math.max(...warm).toFixed(1)}), ` +
+        `warm start median ${median(warm).toFixed(1)} ms (max ${maxOf(warm).toFixed(1)}), ` +
         `cold median ${median(cold).toFixed(1)} ms`,
     );
   }

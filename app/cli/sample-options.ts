@@ -83,6 +83,12 @@ export function addSampleOptions(cmd: Command): Command {
         'Prony relaxation times per decade (0 = no Prony series; default 2, which meets the 3 % fit target)',
       ).choices(['0', '1', '2']),
     )
+    .addOption(
+      new Option(
+        '--prony-equilibrium <mode>',
+        'equilibrium modulus Ge of the Prony series: auto (0 when the data reach the terminal zone of a liquid), fit or zero (default auto)',
+      ).choices(['auto', 'fit', 'zero']),
+    )
     .option(
       '--tg <T>',
       'glass transition temperature (°C or K suffix): WLF constants are also given at Tg',
@@ -125,6 +131,7 @@ export interface SampleOptionValues {
   expansion?: string;
   models?: string;
   modesPerDecade?: string;
+  pronyEquilibrium?: 'auto' | 'fit' | 'zero';
   tg?: string;
   exclude?: string[];
   mask?: string[];
@@ -189,6 +196,7 @@ export function optionsToSettings(o: SampleOptionValues): Settings {
     s.models =
       o.models.trim() === 'none' ? [] : o.models.split(',').map((m) => m.trim().toLowerCase());
   if (o.modesPerDecade !== undefined) s.pronyModesPerDecade = Number(o.modesPerDecade);
+  if (o.pronyEquilibrium !== undefined) s.pronyEquilibrium = o.pronyEquilibrium;
   if (o.tg !== undefined) {
     settingTemperatureK(o.tg, '--tg', 'command line');
     s.glassTransition = o.tg;

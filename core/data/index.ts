@@ -1,3 +1,4 @@
 export * from './types';
 export * from './quantities';
 export * from './reduction';
+export * from './extent';

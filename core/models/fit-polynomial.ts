@@ -1,53 +1,53 @@
 import { shiftFitStatistics } from './fit-statistics';
+import { glsLinearFit } from './gls-linear-fit';
 import { resolveShiftFitOptions } from './shift-fit-options';
 import { preparePoints } from './prepare-points';
+import { weightingOfPoints } from './shift-weighting';
 import type { PolynomialFit, ShiftFitOptions, ShiftPoint } from './types';
-import { weightedLinearFit } from './weighted-linear-fit';
 
 /**
  * Quadratic polynomial, log10 aT = a1 (T − Tr) + a2 (T − Tr)², through the origin (aT(Tr) = 1),
- * by closed-form weighted least squares. The form used with dynamic-modulus master curves of
- * asphalt mixtures (common practice).
+ * by closed-form (generalised) least squares. The form used with dynamic-modulus master curves
+ * of asphalt mixtures (common practice).
  */
 export function fitPolynomial(
   points: readonly ShiftPoint[],
   options: ShiftFitOptions,
 ): PolynomialFit {
-  const pts = preparePoints(points, options.referenceK);
+  const o = resolveShiftFitOptions(options);
+  const pts = preparePoints(points, o.referenceK);
   if (pts.temperatureK.length < 2) {
     throw new RangeError(
-      'fitPolynomial needs at least two shift factors away from the reference temperature',
+      'fitPolynomial needs at least two measured shift factors away from the reference temperature',
     );
   }
+  const weighting = weightingOfPoints(pts, o.covariance, o.diagonalReason);
   const design = pts.temperatureK.map((T) => {
-    const d = T - options.referenceK;
+    const d = T - o.referenceK;
     return [d, d * d];
   });
-  const lin = weightedLinearFit(
-    design,
-    pts.log10aT,
-    pts.sigma.map((s) => 1 / (s * s)),
-  );
-  const ok = lin.coefficients.every(Number.isFinite);
+  const coefficients = glsLinearFit(design, pts.log10aT, weighting);
+  const ok = coefficients.every(Number.isFinite);
   const stats = shiftFitStatistics(
     'polynomial',
-    lin.coefficients,
-    options.referenceK,
+    coefficients,
+    o.referenceK,
     pts,
-    resolveShiftFitOptions(options).errorScaling,
+    weighting,
+    o.errorScaling,
     {
       converged: ok,
       iterations: 1,
       reason: ok
-        ? 'Closed-form weighted least squares.'
+        ? 'Closed-form least squares.'
         : 'The temperatures do not determine both coefficients (need two distinct temperatures besides the reference).',
     },
-    options.glassTransitionK,
+    o.glassTransitionK,
   );
   return {
     ...stats,
     kind: 'polynomial',
-    a1PerK: lin.coefficients[0],
-    a2PerK2: lin.coefficients[1],
+    a1PerK: coefficients[0],
+    a2PerK2: coefficients[1],
   };
 }

@@ -1,8 +1,9 @@
-import { shiftFitStatistics } from './fit-statistics';
+import { adjustedModel, shiftFitStatistics } from './fit-statistics';
 import { resolveShiftFitOptions } from './shift-fit-options';
 import { levenbergMarquardtFit } from './levenberg-marquardt-fit';
 import type { PreparedPoints } from './prepare-points';
 import { preparePoints } from './prepare-points';
+import { weightingOfPoints } from './shift-weighting';
 import type { ShiftFitOptions, ShiftPoint, WlfFit } from './types';
 import { weightedLinearFit } from './weighted-linear-fit';
 
@@ -44,19 +45,25 @@ function startingValues(pts: PreparedPoints, referenceK: number, minC2: number):
 
 /**
  * WLF fit, log10 aT = −C1 (T − Tr)/(C2 + T − Tr) (Williams, Landel & Ferry, JACS 77, 3701, 1955),
- * weighted by 1/σ², by Levenberg–Marquardt on scaled parameters. C2 is kept above Tr − Tmin so
- * the curve's pole stays below the coldest isotherm, and below WLF_C2_RUNAWAY_K.
+ * by Levenberg–Marquardt on scaled parameters, minimising the generalised sum of squares with the
+ * shift covariance when given (whitened residuals, see shift-weighting.ts), else Σ (r/σ)². C2 is
+ * kept above Tr − Tmin so the curve's pole stays below the coldest isotherm, and below
+ * WLF_C2_RUNAWAY_K.
  */
 export function fitWlf(points: readonly ShiftPoint[], options: WlfFitOptions): WlfFit {
-  const referenceK = options.referenceK;
+  const o = resolveShiftFitOptions(options);
+  const referenceK = o.referenceK;
   const pts = preparePoints(points, referenceK);
   if (pts.temperatureK.length < 2) {
     throw new RangeError(
-      'fitWlf needs at least two shift factors away from the reference temperature',
+      'fitWlf needs at least two measured shift factors away from the reference temperature',
     );
   }
+  const weighting = weightingOfPoints(pts, o.covariance, o.diagonalReason);
   // the pole Tr − C2 must lie below the reference and below the coldest isotherm
-  const minC2 = Math.max(referenceK - Math.min(...pts.temperatureK), 0) + 1e-3;
+  let coldest = Infinity;
+  for (const T of pts.temperatureK) if (T < coldest) coldest = T;
+  const minC2 = Math.max(referenceK - coldest, 0) + 1e-3;
   const init = options.initial ?? startingValues(pts, referenceK, minC2);
   if (!(init[1] > minC2)) {
     throw new RangeError(
@@ -64,15 +71,28 @@ export function fitWlf(points: readonly ShiftPoint[], options: WlfFitOptions): W
     );
   }
   const scale = [Math.abs(init[0]) || 1, init[1]];
+  const m = pts.temperatureK.length;
+  const target = weighting.whiten(pts.log10aT);
+  let cacheKey = '';
+  let cache: Float64Array = new Float64Array(m);
+  const whitenedModel = (u: number[]): Float64Array => {
+    const key = `${u[0]}|${u[1]}`;
+    if (key !== cacheKey) {
+      const values = [u[0] * scale[0], u[1] * scale[1]];
+      cache = weighting.whiten(
+        adjustedModel('wlf', values, referenceK, pts.temperatureK, weighting),
+      );
+      cacheKey = key;
+    }
+    return cache;
+  };
   const lm = levenbergMarquardtFit(
     {
-      x: pts.temperatureK,
-      y: pts.log10aT,
-      weights: pts.sigma.map((s) => 1 / (s * s)),
-      model: ([u1, u2]) => {
-        const c1 = u1 * scale[0];
-        const c2 = u2 * scale[1];
-        return (T) => (-c1 * (T - referenceK)) / (c2 + T - referenceK);
+      x: Array.from({ length: m }, (_, i) => i),
+      y: target,
+      model: (u) => {
+        const v = whitenedModel(u);
+        return (i) => v[i];
       },
       initial: [init[0] / scale[0], 1],
       min: [-1e6, minC2 / scale[1]],
@@ -96,9 +116,10 @@ export function fitWlf(points: readonly ShiftPoint[], options: WlfFitOptions): W
     [c1, c2K],
     referenceK,
     pts,
-    resolveShiftFitOptions(options).errorScaling,
+    weighting,
+    o.errorScaling,
     { converged, iterations: lm.iterations, reason },
-    options.glassTransitionK,
+    o.glassTransitionK,
   );
   return { ...stats, kind: 'wlf', c1, c2K };
 }

@@ -6,7 +6,11 @@
  *
  * 5.0.1 minimises Σ (v_i r_i)² for its `weights` option v; we take statistical weights
  * w_i = 1/σ_i² and pass v_i = √w_i. The library stops only when the error reaches its tolerance,
- * so we run it in short rounds and stop when a round no longer improves the fit.
+ * so we run it in short rounds. Whether the fit has converged is decided here, not by the rounds:
+ * by the relative-offset criterion of Bates & Watts (Technometrics 23, 179–183, 1981), the size of
+ * the Gauss–Newton step still available compared with the statistical noise of the residuals.
+ * A fit that stops (rounds no longer improve it, or the budget runs out) without meeting that
+ * tolerance is reported as not converged, with the reason.
  */
 import { levenbergMarquardt } from 'ml-levenberg-marquardt';
 import { invert, normalEquations } from './linear-algebra';
@@ -34,6 +38,12 @@ export interface NonlinearFitOptions {
   /** A round that lowers Σ w r² by less than this fraction counts as settled. @default 1e-12 */
   relativeTolerance?: number;
   /**
+   * Convergence tolerance on the Bates–Watts relative offset √(Δ/p)/√(S/(n−p)), Δ the decrease a
+   * Gauss–Newton step would still give, S = Σ w r²: the remaining step is this small a fraction
+   * of the parameters' statistical uncertainty. @default 1e-3
+   */
+  offsetTolerance?: number;
+  /**
    * Finite-difference step for the Jacobian, per parameter (central differences).
    * @default max(1e-7·|initial_k|, 1e-10)
    */
@@ -44,6 +54,8 @@ export interface NonlinearFitResult extends FitStatus {
   params: number[];
   /** Σ w_i r_i² at the returned parameters. */
   weightedSumSquares: number;
+  /** Bates–Watts relative offset at the returned parameters (0 for an exact fit; NaN when undetermined). */
+  relativeOffset: number;
   /**
    * Parameter covariance (JᵀWJ)⁻¹·s², s² = Σ w r²/(n − p) (the weights taken as relative), from a
    * central-difference Jacobian at the returned parameters. NaN where not determined.
@@ -56,12 +68,14 @@ function resolveOptions(o: NonlinearFitOptions, initial: number[]): Required<Non
     maxIterations: o.maxIterations ?? 1000,
     roundIterations: o.roundIterations ?? 20,
     relativeTolerance: o.relativeTolerance ?? 1e-12,
+    offsetTolerance: o.offsetTolerance ?? 1e-3,
     step: o.step ?? initial.map((p) => Math.max(1e-7 * Math.abs(p), 1e-10)),
   };
   if (!(r.maxIterations >= 1)) throw new RangeError('The maxIterations option must be at least 1');
   if (!(r.roundIterations >= 1))
     throw new RangeError('The roundIterations option must be at least 1');
   if (!(r.relativeTolerance >= 0)) throw new RangeError('The relativeTolerance option must be ≥ 0');
+  if (!(r.offsetTolerance > 0)) throw new RangeError('The offsetTolerance option must be > 0');
   if (r.step.length !== initial.length || r.step.some((s) => !(s > 0))) {
     throw new RangeError('The step option must hold one positive step per parameter');
   }
@@ -79,14 +93,8 @@ function sumSquares(p: NonlinearFitProblem, params: number[], w: ArrayLike<numbe
   return s;
 }
 
-/** Covariance of the parameters from a central-difference Jacobian (see NonlinearFitResult). */
-function covarianceAt(
-  p: NonlinearFitProblem,
-  params: number[],
-  w: ArrayLike<number>,
-  step: number[],
-  ss: number,
-): number[][] {
+/** Central-difference Jacobian ∂f(x_i)/∂p_k at the parameters (n rows of p). */
+function jacobianAt(p: NonlinearFitProblem, params: number[], step: number[]): number[][] {
   const n = p.x.length;
   const jac = Array.from({ length: n }, () => new Array<number>(params.length).fill(0));
   params.forEach((v, k) => {
@@ -95,12 +103,73 @@ function covarianceAt(
     const dn = p.model(params.map((q, j) => (j === k ? q - h : q)));
     for (let i = 0; i < n; i++) jac[i][k] = (up(p.x[i]) - dn(p.x[i])) / (2 * h);
   });
-  const dof = n - params.length;
+  return jac;
+}
+
+/** Covariance (JᵀWJ)⁻¹·s² of the parameters (see NonlinearFitResult). */
+function covarianceOf(jac: number[][], w: ArrayLike<number>, ss: number): number[][] {
+  const n = jac.length;
+  const dof = n - (jac[0]?.length ?? 0);
   const s2 = dof > 0 ? ss / dof : NaN;
   const wArr = Array.from({ length: n }, (_, i) => w[i]);
   return invert(normalEquations(jac, wArr, new Array<number>(n).fill(0)).matrix).map((row) =>
     row.map((c) => c * s2),
   );
+}
+
+/**
+ * Bates–Watts relative offset at the parameters: √(Δ/p) / √(S/(n − p)) with Δ = gᵀA⁻¹g the
+ * decrease a Gauss–Newton step would give (g = JᵀWr, A = JᵀWJ) and S = Σ w r² (S alone when
+ * n = p). Parameters held at a bound, with the step pointing out of the box, are left out
+ * (projected step). 0 for an exact fit.
+ */
+function relativeOffset(
+  p: NonlinearFitProblem,
+  params: number[],
+  jac: number[][],
+  w: ArrayLike<number>,
+  ss: number,
+  scaleSs: number,
+): number {
+  const n = jac.length;
+  if (!(ss > 1e-28 * scaleSs)) return 0;
+  const f = p.model(params);
+  const r = Array.from({ length: n }, (_, i) => p.y[i] - f(p.x[i]));
+  let free = params.map((_, k) => k);
+  for (let round = 0; round <= params.length; round++) {
+    const sub = jac.map((row) => free.map((k) => row[k]));
+    const { matrix, vector } = normalEquations(
+      sub,
+      Array.from({ length: n }, (_, i) => w[i]),
+      r,
+    );
+    const step = multiplyInverse(matrix, vector);
+    if (!step) return Infinity;
+    const blocked = free.filter((k, j) => {
+      const lo = p.min?.[k];
+      const hi = p.max?.[k];
+      const v = params[k];
+      const at = (b: number | undefined) =>
+        b !== undefined && Math.abs(v - b) <= 1e-9 * Math.max(1, Math.abs(b));
+      return (at(lo) && step[j] < 0) || (at(hi) && step[j] > 0);
+    });
+    if (blocked.length === 0) {
+      const decrease = step.reduce((s, d, j) => s + d * vector[j], 0);
+      const dof = n - params.length;
+      const noise = dof > 0 ? ss / dof : ss;
+      return Math.sqrt(Math.max(0, decrease) / Math.max(1, free.length) / noise);
+    }
+    free = free.filter((k) => !blocked.includes(k));
+    if (free.length === 0) return 0;
+  }
+  return Infinity;
+}
+
+/** A⁻¹v, or null when A is singular. */
+function multiplyInverse(a: number[][], v: number[]): number[] | null {
+  const inv = invert(a);
+  if (inv.some((row) => row.some((x) => !Number.isFinite(x)))) return null;
+  return inv.map((row) => row.reduce((s, x, j) => s + x * v[j], 0));
 }
 
 /** Weighted nonlinear least squares by Levenberg–Marquardt. */
@@ -123,19 +192,37 @@ export function levenbergMarquardtFit(
   }
   const o = resolveOptions(options, problem.initial);
   const libWeights = Array.from({ length: n }, (_, i) => Math.sqrt(w[i]));
+  let scaleSs = 0;
+  for (let i = 0; i < n; i++) scaleSs += w[i] * problem.y[i] * problem.y[i];
+  scaleSs = Math.max(scaleSs, 1e-300);
   let params = [...problem.initial];
   let ss = sumSquares(problem, params, w);
+  const result = (converged: boolean, iterations: number, reason: string, offset: number) => {
+    const jac = jacobianAt(problem, params, o.step);
+    return {
+      params,
+      weightedSumSquares: ss,
+      covariance: covarianceOf(jac, w, ss),
+      relativeOffset: offset,
+      converged,
+      iterations,
+      reason,
+    };
+  };
   if (!Number.isFinite(ss)) {
     return {
       params,
       weightedSumSquares: ss,
       covariance: params.map(() => params.map(() => NaN)),
+      relativeOffset: NaN,
       converged: false,
       iterations: 0,
       reason: 'The model cannot be evaluated at the starting values.',
     };
   }
   let iterations = 0;
+  let stalls = 0;
+  let offset = Infinity;
   while (iterations < o.maxIterations) {
     const round = Math.min(o.roundIterations, o.maxIterations - iterations);
     const r = levenbergMarquardt({ x: problem.x, y: problem.y }, problem.model, {
@@ -151,28 +238,40 @@ export function levenbergMarquardtFit(
     iterations += Math.max(1, r.iterations);
     const next = r.parameterValues;
     const nextSs = sumSquares(problem, next, w);
-    if (!Number.isFinite(nextSs)) break;
-    const gain = ss - nextSs;
-    params = next;
-    const settled = gain <= o.relativeTolerance * ss || nextSs === 0;
-    ss = Math.min(ss, nextSs);
-    if (settled) {
-      return {
-        params,
-        weightedSumSquares: ss,
-        covariance: covarianceAt(problem, params, w, o.step, ss),
-        converged: true,
+    if (!Number.isFinite(nextSs)) {
+      return result(
+        false,
         iterations,
-        reason: 'The fit settled: a further round no longer lowered the residual.',
-      };
+        'The fit stepped to constants where the model cannot be evaluated; the last usable constants are kept.',
+        NaN,
+      );
     }
+    const gain = ss - nextSs;
+    if (nextSs <= ss) {
+      params = next;
+      ss = nextSs;
+    }
+    offset = relativeOffset(problem, params, jacobianAt(problem, params, o.step), w, ss, scaleSs);
+    if (offset <= o.offsetTolerance) {
+      return result(
+        true,
+        iterations,
+        `Converged: the remaining step is ${offset.toExponential(1)} of the constants' uncertainty (tolerance ${o.offsetTolerance}).`,
+        offset,
+      );
+    }
+    // a round that no longer lowers the residual, three times in a row, is a stall
+    stalls = gain <= o.relativeTolerance * ss ? stalls + 1 : 0;
+    if (stalls >= 3) break;
   }
-  return {
-    params,
-    weightedSumSquares: ss,
-    covariance: covarianceAt(problem, params, w, o.step, ss),
-    converged: false,
+  const why =
+    iterations >= o.maxIterations
+      ? `The fit used its ${o.maxIterations} iterations`
+      : `The fit stalled after ${iterations} iterations (further steps no longer lowered the residual)`;
+  return result(
+    false,
     iterations,
-    reason: `The fit stopped after ${iterations} iterations without settling; treat the constants with care.`,
-  };
+    `${why} without meeting its tolerance: the remaining step is ${Number.isFinite(offset) ? offset.toPrecision(2) : 'undetermined'} of the constants' uncertainty (tolerance ${o.offsetTolerance}); treat the constants with care.`,
+    offset,
+  );
 }

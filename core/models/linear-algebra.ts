@@ -26,7 +26,8 @@ export function normalEquations(
 export function invert(m: readonly number[][]): number[][] {
   const n = m.length;
   const a = m.map((row, i) => [...row, ...Array.from({ length: n }, (_, j) => (i === j ? 1 : 0))]);
-  const scale = Math.max(...m.map((row, i) => Math.abs(row[i])), 0);
+  let scale = 0;
+  for (let i = 0; i < n; i++) scale = Math.max(scale, Math.abs(m[i][i]));
   for (let c = 0; c < n; c++) {
     let piv = c;
     for (let r = c + 1; r < n; r++) if (Math.abs(a[r][c]) > Math.abs(a[piv][c])) piv = r;

@@ -56,9 +56,9 @@ export function nelderMead(
       simplex.sort((a, b) => a.v - b.v);
       const lo = simplex[0];
       const hi = simplex[n];
-      const size = Math.max(
-        ...simplex.slice(1).map((p) => Math.max(...p.x.map((v, j) => Math.abs(v - lo.x[j])))),
-      );
+      let size = 0;
+      for (const p of simplex.slice(1))
+        for (let j = 0; j < n; j++) size = Math.max(size, Math.abs(p.x[j] - lo.x[j]));
       if (Math.abs(hi.v - lo.v) <= vTol && size <= xTol) {
         converged = true;
         break;

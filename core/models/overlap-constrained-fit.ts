@@ -7,6 +7,7 @@
  * No standard errors are given here: the mismatch is not a likelihood with a known point count;
  * quote the band of the two-step fit (shifts, then the model) for uncertainty.
  */
+import { minOf } from '../data/extent';
 import { nelderMead } from './nelder-mead';
 import { modelLog10aT } from './shift-model-eval';
 import type { FitStatus } from './types';
@@ -55,7 +56,7 @@ export function fitModelToOverlap(
   const T = objective.temperaturesK;
   const Tr = objective.referenceK;
   if (T.length < 2) throw new RangeError('A model-constrained fit needs at least two isotherms');
-  const minC2 = Math.max(Tr - Math.min(...T), 0);
+  const minC2 = Math.max(Tr - minOf(T), 0);
   if (kind === 'wlf' && !(initial[1] > minC2)) {
     throw new RangeError(
       `initial C2 must exceed ${minC2.toFixed(2)} K (the WLF pole must lie below the coldest isotherm)`,

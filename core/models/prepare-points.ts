@@ -1,48 +1,71 @@
 import type { FitWarning, ShiftPoint } from './types';
 
-/** The points a shift-model fit uses, with statistical weights 1/σ². */
+/** A shift point left out of a fit on purpose, with the reason (not a problem: no warning). */
+export interface LeftOutPoint {
+  temperatureK: number;
+  reason: string;
+}
+
+/** The points a shift-model fit uses. */
 export interface PreparedPoints {
-  /** Index of each used point in the caller's array. */
+  /** Index of each used point in the caller's array (to pick their covariance). */
   index: number[];
   temperatureK: number[];
   log10aT: number[];
   /** σ used, decades. */
   sigma: number[];
-  /** Lowest and highest temperature among the usable points (the reference point included), K. */
+  /** Lowest and highest temperature among the points the fit rests on (the reference included), K. */
   rangeK: [number, number];
+  /** Exact or hand-set points left out of the fit, with the reason. */
+  leftOut: LeftOutPoint[];
   warnings: FitWarning[];
 }
+
+/** Within this distance of Tref a point with log10 aT = 0 is the reference isotherm (as the engine). */
+const REFERENCE_MATCH_K = 0.01;
 
 const celsius = (k: number): string => `${(k - 273.15).toFixed(1)} °C`;
 
 /**
- * Checks shift points before a fit. Points with a non-finite temperature or log10 aT are skipped
- * with a warning. The point at the reference temperature (log10 aT = 0 by definition) carries no
- * information and is left out quietly. Zero, negative, NaN or missing standard errors are replaced
- * by the median of the valid ones (or 1 when none is valid: an unweighted fit), with a warning.
+ * Checks shift points before a fit; messages name temperatures, never positions in the list.
+ * - A point with a non-finite temperature or log10 aT is skipped with a warning.
+ * - The reference isotherm (log10 aT = 0 within 0.01 K of Tref, the engine's match) is exact:
+ *   every model passes through it; it is left out quietly.
+ * - A locked point (a shift set by hand) is not a measurement: it is left out and listed.
+ * - A zero, negative, NaN or missing standard error on a measured point is replaced by the median
+ *   of the valid ones (1 when none is valid: an unweighted fit), with a warning.
  */
 export function preparePoints(points: readonly ShiftPoint[], referenceK: number): PreparedPoints {
   if (!Array.isArray(points)) throw new TypeError('points must be an array of shift points');
   if (!(referenceK > 0))
     throw new RangeError(`referenceK must be a positive temperature in K, got ${referenceK}`);
   const warnings: FitWarning[] = [];
+  const leftOut: LeftOutPoint[] = [];
   const kept: number[] = [];
-  const usable: number[] = [];
+  const anchors: number[] = [];
   points.forEach((p, i) => {
     if (!Number.isFinite(p.temperatureK) || !(p.temperatureK > 0)) {
       warnings.push({
         pointIndex: i,
-        message: `Point ${i + 1}: temperature is missing or not positive in K; skipped.`,
+        message:
+          'A shift factor without a usable temperature (missing or not positive in K) was skipped.',
       });
     } else if (!Number.isFinite(p.log10aT)) {
       warnings.push({
         pointIndex: i,
-        message: `Point ${i + 1} at ${celsius(p.temperatureK)}: shift factor is missing; skipped.`,
+        message: `The shift factor at ${celsius(p.temperatureK)} is missing; skipped.`,
       });
-    } else if (Math.abs(p.temperatureK - referenceK) < 1e-9 && Math.abs(p.log10aT) < 1e-12) {
-      usable.push(p.temperatureK); // aT(Tref) = 1 is exact: every model passes through it.
+    } else if (p.locked) {
+      leftOut.push({
+        temperatureK: p.temperatureK,
+        reason: 'shift fixed by hand: not a measurement',
+      });
+    } else if (
+      Math.abs(p.log10aT) < 1e-9 &&
+      Math.abs(p.temperatureK - referenceK) <= REFERENCE_MATCH_K
+    ) {
+      anchors.push(p.temperatureK); // aT(Tref) = 1 is exact: every model passes through it
     } else {
-      usable.push(p.temperatureK);
       kept.push(i);
     }
   });
@@ -63,17 +86,25 @@ export function preparePoints(points: readonly ShiftPoint[], referenceK: number)
     if (valid.length > 0) {
       warnings.push({
         pointIndex: i,
-        message: `Point ${i + 1} at ${celsius(points[i].temperatureK)}: standard error is ${s === undefined ? 'missing' : String(s)}; the median error ${fallback.toPrecision(3)} decades is used instead.`,
+        message: `The shift factor at ${celsius(points[i].temperatureK)} has ${s === undefined ? 'no' : `an unusable (${String(s)})`} standard error; the median error ${fallback.toPrecision(3)} decades is used instead.`,
       });
     }
     return fallback;
   });
+  const temperatureK = kept.map((i) => points[i].temperatureK);
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const T of [...temperatureK, ...anchors]) {
+    if (T < lo) lo = T;
+    if (T > hi) hi = T;
+  }
   return {
     index: kept,
-    temperatureK: kept.map((i) => points[i].temperatureK),
+    temperatureK,
     log10aT: kept.map((i) => points[i].log10aT),
     sigma,
-    rangeK: usable.length ? [Math.min(...usable), Math.max(...usable)] : [NaN, NaN],
+    rangeK: lo <= hi ? [lo, hi] : [NaN, NaN],
+    leftOut,
     warnings,
   };
 }

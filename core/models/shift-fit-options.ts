@@ -5,6 +5,8 @@ export interface ResolvedShiftFitOptions {
   referenceK: number;
   glassTransitionK: number | undefined;
   errorScaling: ErrorScaling;
+  covariance: readonly (readonly number[])[] | null;
+  diagonalReason: string | undefined;
 }
 
 /** Applies the documented defaults of ShiftFitOptions and checks them once (mljs checkOptions pattern). */
@@ -25,5 +27,13 @@ export function resolveShiftFitOptions(o: ShiftFitOptions): ResolvedShiftFitOpti
       `The errorScaling option must be 'residual' or 'reported', got ${String(errorScaling)}`,
     );
   }
-  return { referenceK: o.referenceK, glassTransitionK: o.glassTransitionK, errorScaling };
+  if (o.covariance != null && !Array.isArray(o.covariance))
+    throw new TypeError('The covariance option must be a square array of arrays (decades²)');
+  return {
+    referenceK: o.referenceK,
+    glassTransitionK: o.glassTransitionK,
+    errorScaling,
+    covariance: o.covariance ?? null,
+    diagonalReason: o.diagonalReason,
+  };
 }

@@ -11,6 +11,8 @@ export interface ShiftPoint {
   log10aT: number;
   /** Standard error of log10 aT, decades. Zero, NaN or missing values are guarded (see warnings). */
   stdErr?: number;
+  /** True when the shift was fixed by hand: not a measurement, so the fit leaves it out. */
+  locked?: boolean;
 }
 
 /** A problem with one input point that was handled, not fatal. `pointIndex` is 0-based. */
@@ -39,6 +41,16 @@ export interface ShiftResidual {
   residual: number;
   /** residual / stdErr used in the fit (dimensionless). */
   normalised: number;
+}
+
+/** How the shift points were weighted, and which were left out (exact or set by hand). */
+export interface ShiftFitWeighting {
+  /** 'full-covariance': generalised least squares with the engine's covariance; 'diagonal': each point by its own standard error. */
+  kind: 'full-covariance' | 'diagonal';
+  /** One sentence on the weighting (why diagonal, when it is). */
+  note: string;
+  /** Points left out on purpose (shifts fixed by hand), by temperature, with the reason. */
+  leftOut: { temperatureK: number; reason: string }[];
 }
 
 /** Which law, and its parameter vector in a fixed order (the order of the covariance matrix). */
@@ -85,8 +97,9 @@ export interface ShiftFitCommon extends FitStatus {
   residuals: ShiftResidual[];
   /** Number of points used (the point at the reference temperature, exact by definition, is not counted). */
   pointCount: number;
+
   degreesOfFreedom: number;
-  /** Weighted sum of squared residuals Σ (r/σ)². */
+  /** Generalised sum of squared residuals rᵀΣ⁻¹r (Σ (r/σ)² with diagonal weights). */
   chiSquare: number;
   /** chiSquare / degreesOfFreedom: ≈ 1 when the scatter matches the standard errors. */
   reducedChiSquare: number;
@@ -96,6 +109,7 @@ export interface ShiftFitCommon extends FitStatus {
   rmsResidual: number;
   /** Small-sample Akaike information criterion (from the weighted χ²); lower is better. */
   aicc: number;
+  weighting: ShiftFitWeighting;
   warnings: FitWarning[];
 }
 
@@ -134,4 +148,12 @@ export interface ShiftFitOptions {
    * @default 'residual'
    */
   errorScaling?: ErrorScaling;
+  /**
+   * Covariance of log10 aT between the points, decades², in the order of `points` (the shift
+   * engine's estimate). With it the fit is generalised least squares; rows of locked and reference
+   * points are not used. @default undefined (each point weighted by its own stdErr)
+   */
+  covariance?: readonly (readonly number[])[] | null;
+  /** Why no covariance is given, stated in the result's weighting note. @default a generic sentence */
+  diagonalReason?: string;
 }

@@ -10,6 +10,7 @@ import { resolveAnalysisOptions, type AnalysisOptions } from './options';
 import { applyMasks, checkExcluded } from './apply-masks';
 import { runShift } from './run-shift';
 import { fitShiftModels } from './fit-models';
+import { shiftCovarianceFor } from './shift-covariance';
 import { reduceToMasterCurve } from './reduce';
 import { runSpectrum } from './run-spectrum';
 import { PipelineError } from './errors';
@@ -58,7 +59,9 @@ export function buildMasterCurve(dataset: Dataset, options: AnalysisOptions = {}
   );
 
   progress(0.6, 'models');
-  const models = fitShiftModels(curves, settings, warnings);
+  const models = fitShiftModels(curves, settings, warnings, (ids) =>
+    shiftCovarianceFor(result, ids),
+  );
 
   progress(0.75, 'spectrum');
   const { prony, indicators } = runSpectrum(data, masterCurve, models, settings, warnings);

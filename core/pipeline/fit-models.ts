@@ -1,7 +1,10 @@
 /**
- * Step 2 of the pipeline: the shift-factor models (core/models) fitted to the included shifts,
- * weighted by their standard errors, each with its 95 % band over the fitted range. A model that
- * cannot be fitted (too few shifts, runaway constants) becomes a warning, not an error.
+ * Step 2 of the pipeline: the shift-factor models (core/models) fitted to the included shifts by
+ * generalised least squares with the shift engine's covariance (read through shiftCovarianceFor;
+ * without one, each shift is weighted by its own standard error and the fit says so), each with
+ * its 95 % band over the fitted range. Locked shifts are not measurements and are left out; the
+ * reference isotherm is exact. A model that cannot be fitted (too few shifts) becomes a warning,
+ * not an error; a fit that stops without converging gives a `not-converged` warning naming it.
  */
 import {
   fitArrhenius,
@@ -15,6 +18,7 @@ import {
 } from '../models';
 import type { ShiftFitCommon, ShiftPoint } from '../models/types';
 import type { ResolvedAnalysisOptions } from './options';
+import type { ShiftCovarianceFor } from './shift-covariance';
 import type { AnalysisCurve, AnalysisModels, AnalysisWarning, ModelFitStats } from './types';
 
 const BAND_POINTS = 61;
@@ -31,6 +35,16 @@ function stats(fit: ShiftFitCommon, ids: Map<number, string>): ModelFitStats {
   return {
     r2: finite(fit.rSquared),
     rmsResidualDecades: finite(fit.rmsResidual),
+    reducedChiSquare: finite(fit.reducedChiSquare),
+    weighting: {
+      kind: fit.weighting.kind,
+      note: fit.weighting.note,
+      leftOut: fit.weighting.leftOut.map((p) => ({
+        isothermId: ids.get(p.temperatureK) ?? '',
+        temperatureK: p.temperatureK,
+        reason: p.reason,
+      })),
+    },
     residuals: fit.residuals.map((r) => ({
       isothermId: ids.get(r.temperatureK) ?? '',
       temperatureK: r.temperatureK,
@@ -38,6 +52,7 @@ function stats(fit: ShiftFitCommon, ids: Map<number, string>): ModelFitStats {
     })),
     fittedRangeK: [lo, hi],
     converged: fit.converged,
+    convergence: fit.reason,
     band: {
       temperatureK: grid,
       // `+ 0` turns −0 into 0, so the analysis survives a JSON round trip unchanged
@@ -66,42 +81,62 @@ const param = (fit: ShiftFitCommon, i: number) => {
   };
 };
 
+const MODEL_NAME = { wlf: 'WLF', arrhenius: 'Arrhenius', polynomial: 'polynomial' } as const;
+
+/**
+ * @param covariance the shifts' covariance for the included curves with a shift, in their order
+ *   (from shiftCovarianceFor); without it the fits weight each shift by its own standard error
+ */
 export function fitShiftModels(
   curves: readonly AnalysisCurve[],
   s: ResolvedAnalysisOptions,
   warnings: AnalysisWarning[],
+  covariance?: (ids: string[]) => ShiftCovarianceFor,
 ): AnalysisModels {
   const used = curves.filter((c) => c.included && c.log10aT !== null);
+  const locked = new Set(Object.keys(s.lockedLog10aT));
   const points: ShiftPoint[] = used.map((c) => ({
     temperatureK: c.temperatureK,
     log10aT: c.log10aT as number,
     ...(c.log10aTStdErr !== null && { stdErr: c.log10aTStdErr }),
+    ...(locked.has(c.isothermId) && { locked: true }),
   }));
   const ids = new Map(used.map((c) => [c.temperatureK, c.isothermId]));
+  const cov = covariance
+    ? covariance(used.map((c) => c.isothermId))
+    : {
+        matrix: null,
+        reason: 'no covariance of the shifts was passed to the model fits',
+      };
   const opts = {
     referenceK: s.referenceTemperatureK,
     ...(s.glassTransitionK !== null && { glassTransitionK: s.glassTransitionK }),
+    covariance: cov.matrix,
+    diagonalReason: `${cov.reason}: each shift is weighted by its own standard error (weighted least squares)`,
   };
   const models: AnalysisModels = {};
   const fits: Parameters<typeof suggestShiftModel>[0] = {};
-  const attempt = <T extends ShiftFitCommon>(kind: string, f: () => T): T | undefined => {
+  const attempt = <T extends ShiftFitCommon>(
+    kind: keyof typeof MODEL_NAME,
+    f: () => T,
+  ): T | undefined => {
+    const name = MODEL_NAME[kind];
     try {
       const fit = f();
       for (const w of fit.warnings)
-        warnings.push({
-          code: `model-${kind}`,
-          message: `${kind.toUpperCase()} fit: ${w.message}`,
-        });
+        warnings.push({ code: `model-${kind}`, message: `${name} fit: ${w.message}`, model: kind });
       if (!fit.converged)
         warnings.push({
-          code: `model-${kind}`,
-          message: `The ${kind} fit did not converge: ${fit.reason}`,
+          code: 'not-converged',
+          message: `The ${name} fit of the shift factors did not converge: ${fit.reason}`,
+          model: kind,
         });
       return fit;
     } catch (e) {
       warnings.push({
         code: 'model-failed',
-        message: `The ${kind} model could not be fitted: ${e instanceof Error ? e.message : String(e)}`,
+        message: `The ${name} model could not be fitted: ${e instanceof Error ? e.message : String(e)}`,
+        model: kind,
       });
       return undefined;
     }

@@ -3,19 +3,23 @@
  * zero-shear viscosity and plateau modulus for melts; glassy and rubbery moduli and the tan δ
  * peak (position, and temperature at 1 Hz through the shift model) for solids. Each one is
  * computed only where the data support it; the note says when a value is a bound or extrapolated.
+ * Crossovers are reported only where the binned data confirm them inside the measured window;
+ * labels use G-symbols for shear and E-symbols for tension.
  */
 import type { Dataset } from '../data/types';
 import { quantitySymbol } from '../data/quantities';
 import type { PronySeries } from '../spectrum/prony-model';
 import { pronyLoss, pronyStorage } from '../spectrum/prony-model';
 import type { ReducedWindow } from '../spectrum/types';
-import { findCrossovers } from '../spectrum/crossover';
+import { confirmedCrossovers, findCrossovers } from '../spectrum/crossover';
+import { terminalZone } from '../spectrum/terminal-zone';
 import { logSpace } from '../spectrum/log-grid';
 import { modulusPlateaus, plateauModulus } from '../spectrum/plateaus';
 import { tanDeltaPeak, tanDeltaPeakTemperature } from '../spectrum/tan-delta-peak';
-import { fitViscosityCurve } from '../spectrum/viscosity-fit';
 import type { ShiftModelSpec } from '../models/types';
 import { toCelsius } from './temperature';
+import { binnedMaster } from './binned-master';
+import { zeroShearIndicators } from './zero-shear';
 import type {
   AnalysisIndicator,
   AnalysisMasterCurve,
@@ -53,6 +57,7 @@ export function computeIndicators(
   const out: AnalysisIndicator[] = [];
   const G = (q: 'storageModulus' | 'lossModulus' | 'complexModulus'): string =>
     quantitySymbol(q, dataset.deformation);
+  const M = dataset.deformation === 'shear' ? 'G' : 'E';
   const attempt = (what: string, f: () => void): void => {
     try {
       f();
@@ -73,57 +78,58 @@ export function computeIndicators(
     series.equilibriumModulusPa <= 1e-4 * g0 ||
     (oscillatory && pronyLoss(series, lowW) > pronyStorage(series, lowW));
 
-  if (oscillatory) {
+  const binned = oscillatory ? binnedMaster(mc) : null;
+  if (oscillatory && binned) {
     attempt('Crossover', () => {
       const w = logSpace(window.min, window.max, 50);
-      const { crossovers } = findCrossovers(
+      const { crossovers: all } = findCrossovers(
         w,
         w.map((x) => pronyStorage(series, x)),
         w.map((x) => pronyLoss(series, x)),
       );
+      const [storage, loss] = binned.bins.quantities;
+      const crossovers = confirmedCrossovers(all, {
+        log10x: binned.bins.log10x.subarray(binned.first, binned.last + 1),
+        storage: {
+          log10y: storage.log10y.subarray(binned.first, binned.last + 1),
+          count: storage.count.subarray(binned.first, binned.last + 1),
+        },
+        loss: {
+          log10y: loss.log10y.subarray(binned.first, binned.last + 1),
+          count: loss.count.subarray(binned.first, binned.last + 1),
+        },
+      });
       const c = crossovers.find((x) => x.direction === 'storage-rises') ?? crossovers[0];
       if (!c) return;
+      const dropped = all.length - crossovers.length;
       out.push(
         {
           key: 'crossoverFrequency',
           label: `crossover frequency (${G('storageModulus')} = ${G('lossModulus')})`,
           value: c.omegaRadPerS,
           unit: 'rad/s',
-          note: `at Tref, from the Prony series${crossovers.length > 1 ? `; ${crossovers.length} crossovers in the window` : ''}`,
+          note: `at Tref, from the Prony series, confirmed by the data on both sides${crossovers.length > 1 ? `; ${crossovers.length} crossovers in the window` : ''}${dropped > 0 ? `; ${dropped} crossing(s) of the series not shown by the data (at the window edge) left out` : ''}`,
         },
-        { key: 'crossoverModulus', label: 'crossover modulus', value: c.modulusPa, unit: 'Pa' },
+        {
+          key: 'crossoverModulus',
+          label: `crossover modulus (${G('storageModulus')} = ${G('lossModulus')})`,
+          value: c.modulusPa,
+          unit: 'Pa',
+        },
       );
     });
   }
-  if (oscillatory && melt) {
+  if (oscillatory && melt && binned) {
     attempt('Zero-shear viscosity', () => {
-      const visc = mc.quantities.complexViscosity;
-      const s = mc.quantities.storageModulus;
-      const l = mc.quantities.lossModulus;
-      const w: number[] = [];
-      const eta: number[] = [];
-      mc.reducedX.forEach((x, i) => {
-        if (mc.outlier[i]) return;
-        const v =
-          visc?.[i] ??
-          (s?.[i] != null && l?.[i] != null
-            ? Math.hypot(s[i] as number, l[i] as number) / x
-            : null);
-        if (v != null && v > 0 && Number.isFinite(v)) {
-          w.push(x);
-          eta.push(v);
-        }
-      });
-      if (w.length < 5) return;
-      const f = fitViscosityCurve(w, eta, 'cross');
-      if (!f.converged) throw new Error(f.reason);
-      out.push({
-        key: 'zeroShearViscosity',
-        label: 'zero-shear viscosity η0 (Cross fit of |η*|)',
-        value: f.zeroShearViscosityPaS,
-        unit: 'Pa·s',
-        note: `${f.extrapolated ? 'extrapolated beyond the lowest reduced frequency; ' : ''}${f.note}`,
-      });
+      const terminal = terminalZone(binned.bins, binned.first, binned.last, 'angularFrequency');
+      for (const i of zeroShearIndicators(
+        mc,
+        series,
+        terminal.reached,
+        dataset.deformation,
+        warnings,
+      ))
+        out.push(i);
     });
     attempt('Plateau modulus', () => {
       const p = plateauModulus(series, window);
@@ -144,7 +150,7 @@ export function computeIndicators(
       out.push(
         {
           key: 'glassyModulus',
-          label: 'glassy modulus (G0 of the Prony series)',
+          label: `glassy modulus ${M}0 (${M}e + Σ ${M.toLowerCase()}_i of the Prony series)`,
           value: p.glassyModulusPa,
           unit: 'Pa',
           note: p.glassyPlateauReached
@@ -153,7 +159,7 @@ export function computeIndicators(
         },
         {
           key: 'rubberyModulus',
-          label: 'rubbery (equilibrium) modulus Ge',
+          label: `rubbery (equilibrium) modulus ${M}e`,
           value: p.rubberyModulusPa,
           unit: 'Pa',
           note: p.rubberyPlateauReached
@@ -166,7 +172,7 @@ export function computeIndicators(
       const p = tanDeltaPeak(series, window);
       out.push({
         key: 'tanDeltaPeakFrequency',
-        label: 'tan δ peak, reduced frequency at Tref',
+        label: `tan δ peak (${G('lossModulus')}/${G('storageModulus')}), reduced frequency at Tref`,
         value: p.omegaRadPerS,
         unit: 'rad/s',
         note: `tan δ = ${p.tanDelta.toPrecision(3)}${p.atEdge ? '; at the edge of the window: the true peak lies outside it' : ''}`,

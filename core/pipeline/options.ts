@@ -4,6 +4,7 @@
  */
 import { z } from 'zod';
 import { QUANTITY_IDS, type DataWarning, type QuantityId } from '../data/types';
+import { extent } from '../data/extent';
 
 const quantityId = z.enum(QUANTITY_IDS as [QuantityId, ...QuantityId[]]);
 
@@ -43,6 +44,13 @@ export const analysisOptionsSchema = z.strictObject({
    * @default 2
    */
   pronyModesPerDecade: z.union([z.literal(0), z.literal(1), z.literal(2)]).optional(),
+  /**
+   * Equilibrium modulus Ge of the Prony series: 'auto' sets Ge = 0 when the master curve reaches
+   * the terminal zone of a liquid (G′ ~ ω², G″ ~ ω over the lowest decade; relaxation falling
+   * faster than 1/t over the last decade), else fits it; 'fit' always fits Ge ≥ 0; 'zero' forces
+   * Ge = 0. @default 'auto'
+   */
+  pronyEquilibrium: z.enum(['auto', 'fit', 'zero']).optional(),
   /** Glass transition temperature Tg, K: WLF constants are also re-referenced to it. @default none */
   glassTransitionK: z.number().positive().optional(),
   /** Isotherms left out of the master curve, by id (e.g. "T03"). @default [] */
@@ -78,6 +86,7 @@ export interface ResolvedAnalysisOptions {
   density: { referenceDensityKgPerM3: number; volumetricExpansionPerK: number } | null;
   models: ('wlf' | 'arrhenius' | 'polynomial')[];
   pronyModesPerDecade: 0 | 1 | 2;
+  pronyEquilibrium: 'auto' | 'fit' | 'zero';
   glassTransitionK: number | null;
   excludedIsothermIds: string[];
   maskedPoints: { file: string; row: number }[];
@@ -148,6 +157,7 @@ export function resolveAnalysisOptions(
     density: o.density ?? null,
     models: o.models ? [...new Set(o.models)] : [...DEFAULT_MODELS],
     pronyModesPerDecade: o.pronyModesPerDecade ?? DEFAULT_PRONY_MODES_PER_DECADE,
+    pronyEquilibrium: o.pronyEquilibrium ?? 'auto',
     glassTransitionK: o.glassTransitionK ?? null,
     excludedIsothermIds: o.excludedIsothermIds ?? [],
     maskedPoints: o.maskedPoints ?? [],
@@ -166,8 +176,7 @@ export function defaultReferenceK(temperaturesK: readonly number[]): number {
       'No isotherm left to pick a reference temperature from',
       'referenceTemperatureK',
     );
-  const lo = Math.min(...temperaturesK);
-  const hi = Math.max(...temperaturesK);
+  const [lo, hi] = extent(temperaturesK);
   const mid = (lo + hi) / 2;
   let best = temperaturesK[0];
   for (const t of temperaturesK) if (Math.abs(t - mid) < Math.abs(best - mid) - 1e-9) best = t;

@@ -61,7 +61,10 @@ export function reducedIsotherms(a: Analysis, q: QuantityId): ReducedIsotherm[] 
   const mc = a.masterCurve;
   const flagged = new Map<string, number[]>();
   mc.isothermId.forEach((id, i) => {
-    if (mc.outlier[i]) flagged.set(id, [...(flagged.get(id) ?? []), mc.reducedX[i]]);
+    if (!mc.outlier[i]) return;
+    const list = flagged.get(id);
+    if (list) list.push(mc.reducedX[i]);
+    else flagged.set(id, [mc.reducedX[i]]);
   });
   const out: ReducedIsotherm[] = [];
   for (const iso of a.dataset.isotherms) {

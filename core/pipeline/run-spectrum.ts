@@ -15,6 +15,8 @@ import type {
 } from './types';
 import { computeIndicators } from './indicators';
 
+const finite = (v: number): number | null => (Number.isFinite(v) ? v : null);
+
 const positive = (v: number | null | undefined): v is number =>
   typeof v === 'number' && Number.isFinite(v) && v > 0;
 
@@ -64,14 +66,18 @@ export function runSpectrum(
     return { prony: null, indicators: [] };
   }
   try {
-    const fit = fitProny(curve, { modesPerDecade: settings.pronyModesPerDecade });
+    const fit = fitProny(curve, {
+      modesPerDecade: settings.pronyModesPerDecade,
+      equilibrium: settings.pronyEquilibrium,
+    });
     if (!fit.converged)
       warnings.push({
-        code: 'prony-not-converged',
-        message: `The Prony fit did not converge: ${fit.reason}`,
+        code: 'not-converged',
+        model: 'prony',
+        message: `The Prony series fit did not converge: ${fit.reason}`,
       });
     for (const w of fit.warnings.filter((x) => x.pointIndex < 0))
-      warnings.push({ code: 'prony', message: `Prony fit: ${w.message}` });
+      warnings.push({ code: 'prony', message: `Prony fit: ${w.message}`, model: 'prony' });
     const errs = [fit.fitError.storageRms, fit.fitError.lossRms, fit.fitError.relaxationRms].filter(
       Number.isFinite,
     );
@@ -83,7 +89,16 @@ export function runSpectrum(
             ...(curve.storage ? (['storageModulus'] as const) : []),
             ...(curve.loss ? (['lossModulus'] as const) : []),
           ],
+      deformation: dataset.deformation,
       equilibriumModulusPa: fit.series.equilibriumModulusPa,
+      equilibrium: { ...fit.equilibrium },
+      terminalSlopes: {
+        storage: finite(fit.terminal.storageSlope),
+        loss: finite(fit.terminal.lossSlope),
+        relaxation: finite(fit.terminal.relaxationSlope),
+      },
+      pointCount: fit.pointCount,
+      binCount: fit.binCount,
       instantaneousModulusPa: fit.normalised.instantaneousModulusPa,
       tauS: [...fit.series.tauS],
       modulusPa: [...fit.series.modulusPa],

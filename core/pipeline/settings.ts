@@ -48,6 +48,8 @@ export const settingsSchema = z.strictObject({
   models: z.array(z.enum(['wlf', 'arrhenius', 'polynomial'])).optional(),
   /** 0 skips the Prony fit. @default 2 */
   pronyModesPerDecade: z.union([z.literal(0), z.literal(1), z.literal(2)]).optional(),
+  /** Equilibrium modulus of the Prony series: 'auto' (0 for a liquid in its terminal zone), 'fit' or 'zero'. @default 'auto' */
+  pronyEquilibrium: z.enum(['auto', 'fit', 'zero']).optional(),
   /** Glass transition temperature (°C or with unit). */
   glassTransition: temperature.optional(),
   /** Isotherms to leave out, by temperature (°C or with unit) or id ("T03"). @default [] */
@@ -188,6 +190,7 @@ export function settingsToAnalysisOptions(
   }
   if (s.models !== undefined) o.models = s.models;
   if (s.pronyModesPerDecade !== undefined) o.pronyModesPerDecade = s.pronyModesPerDecade;
+  if (s.pronyEquilibrium !== undefined) o.pronyEquilibrium = s.pronyEquilibrium;
   if (s.glassTransition !== undefined)
     o.glassTransitionK = settingTemperatureK(s.glassTransition, 'glassTransition', source);
   if (s.exclude?.length) {

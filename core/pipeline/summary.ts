@@ -3,7 +3,14 @@
  * Keys are documented in docs/cli.md; add keys, never rename or remove them.
  * Temperatures in °C unless the key ends in K; log quantities in decades.
  */
-import type { Analysis, AnalysisCurve, AnalysisWarning, ModelFitStats } from './types';
+import type {
+  Analysis,
+  AnalysisCurve,
+  AnalysisProny,
+  AnalysisWarning,
+  ModelFitStats,
+} from './types';
+import { pronySymbols } from '../spectrum/prony-symbols';
 import type { ResolvedAnalysisOptions } from './options';
 import { CONVENTIONS } from './conventions';
 import { roundKelvin, toCelsius } from './temperature';
@@ -22,6 +29,14 @@ interface SummaryFit {
   /** °C */
   fittedRange: [number, number];
   converged: boolean;
+  /** Why the fit stopped (converged or not). */
+  convergence: string;
+  /** 'full-covariance' (generalised least squares) or 'diagonal' (each shift's own error). */
+  weighting: 'full-covariance' | 'diagonal';
+  weightingNote: string;
+  /** Isotherms left out of the fit (shifts fixed by hand), with the reason. */
+  leftOut: { isothermId: string; temperature: number; reason: string }[];
+  reducedChiSquare: number | null;
 }
 
 export interface AnalysisSummary {
@@ -74,7 +89,17 @@ export interface AnalysisSummary {
   };
   prony: {
     fittedTo: string[];
+    /** 'shear' (terms are G-moduli) or 'tension' (E-moduli). */
+    deformation: string;
+    /** The symbols of this deformation: relaxation G(t)/E(t), equilibrium Ge/Ee, instantaneous G0/E0, term g_i/E_i. */
+    symbols: { relaxation: string; equilibrium: string; instantaneous: string; term: string };
+    /** Ge (shear) or Ee (tension), Pa. */
     equilibriumModulusPa: number;
+    /** 'fitted' or 'zero', and why. */
+    equilibrium: { mode: string; reason: string };
+    terminalSlopes: { storage: number | null; loss: number | null; relaxation: number | null };
+    pointCount: number;
+    binCount: number;
     instantaneousModulusPa: number;
     modesPerDecade: number;
     rmsRelativeError: number | null;
@@ -86,6 +111,16 @@ export interface AnalysisSummary {
   settings: ResolvedAnalysisOptions & { referenceTemperature: number };
 }
 
+function symbolsOf(mode: AnalysisProny['deformation']) {
+  const y = pronySymbols(mode);
+  return {
+    relaxation: y.relaxation,
+    equilibrium: y.equilibrium,
+    instantaneous: y.instantaneous,
+    term: y.term,
+  };
+}
+
 /** JSON has no −0: write 0 for the reference isotherm's shift. */
 const noNegativeZero = (v: number | null): number | null => (v === null ? null : v + 0);
 
@@ -95,6 +130,15 @@ function fitStats(m: ModelFitStats): SummaryFit {
     rmsResidualDecades: m.rmsResidualDecades,
     fittedRange: [toCelsius(m.fittedRangeK[0]), toCelsius(m.fittedRangeK[1])],
     converged: m.converged,
+    convergence: m.convergence,
+    weighting: m.weighting.kind,
+    weightingNote: m.weighting.note,
+    leftOut: m.weighting.leftOut.map((l) => ({
+      isothermId: l.isothermId,
+      temperature: toCelsius(l.temperatureK),
+      reason: l.reason,
+    })),
+    reducedChiSquare: m.reducedChiSquare,
   };
 }
 
@@ -176,7 +220,13 @@ export function analysisSummary(analysis: Analysis): AnalysisSummary {
     prony: p
       ? {
           fittedTo: [...p.fittedTo],
+          deformation: p.deformation,
+          symbols: symbolsOf(p.deformation),
           equilibriumModulusPa: p.equilibriumModulusPa,
+          equilibrium: { ...p.equilibrium },
+          terminalSlopes: { ...p.terminalSlopes },
+          pointCount: p.pointCount,
+          binCount: p.binCount,
           instantaneousModulusPa: p.instantaneousModulusPa,
           modesPerDecade: p.modesPerDecade,
           rmsRelativeError: p.rmsRelativeError,

@@ -25,6 +25,8 @@ export interface AnalysisWarning {
   column?: number;
   /** The isotherm the warning concerns. */
   isothermId?: string;
+  /** The model the warning concerns (e.g. `wlf`, `prony`, `carreau-yasuda`). */
+  model?: string;
 }
 
 /**
@@ -76,6 +78,20 @@ export interface ModelFitStats {
   /** Temperature range the model was fitted over, K. */
   fittedRangeK: [number, number];
   converged: boolean;
+  /** Why the fit stopped, in words (converged or not). */
+  convergence: string;
+  /** χ²/(degrees of freedom): ≈ 1 when the shifts scatter as their covariance says. */
+  reducedChiSquare: number | null;
+  /**
+   * How the shifts were weighted: generalised least squares with the engine's covariance
+   * ('full-covariance'), or each shift by its own standard error ('diagonal', with the reason),
+   * and which shifts were left out (fixed by hand) with the reason.
+   */
+  weighting: {
+    kind: 'full-covariance' | 'diagonal';
+    note: string;
+    leftOut: { isothermId: string; temperatureK: number; reason: string }[];
+  };
   band: ModelBand;
   /**
    * The model as core/models evaluates it (`shiftModelBand`, core/spectrum `predictQuantity`):
@@ -135,8 +151,21 @@ export interface AnalysisModels {
 export interface AnalysisProny {
   /** The quantities it was fitted to, e.g. storage and loss modulus, or relaxation modulus. */
   fittedTo: QuantityId[];
+  /**
+   * Shear (G(t) = Ge + Σ g_i e^(−t/τ_i)) or tension (E(t) = Ee + Σ E_i e^(−t/τ_i)): the terms are
+   * moduli of that deformation and must be entered as such (E ≈ 3G for a rubber).
+   */
+  deformation: DeformationMode;
+  /** Equilibrium modulus Ge (shear) or Ee (tension), Pa. */
   equilibriumModulusPa: number;
-  /** Instantaneous modulus G0 = Ge + Σ g_i, Pa. */
+  /** How the equilibrium modulus was set ('fitted' ≥ 0 or 'zero'), and why. */
+  equilibrium: { mode: 'fitted' | 'zero'; reason: string };
+  /** Log–log slopes of the storage and loss modulus over the lowest decade (relaxation: over the last decade), null where not measured. */
+  terminalSlopes: { storage: number | null; loss: number | null; relaxation: number | null };
+  /** Measured points the series rests on and the log-bins (rows) it was fitted to. */
+  pointCount: number;
+  binCount: number;
+  /** Instantaneous modulus G0 = Ge + Σ g_i (E0 in tension), Pa. */
   instantaneousModulusPa: number;
   tauS: number[];
   modulusPa: number[];

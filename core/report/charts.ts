@@ -6,6 +6,7 @@
 import type { Analysis } from '../pipeline/types';
 import type { QuantityId } from '../data/types';
 import { abscissaLabel, quantitySymbol } from '../data/quantities';
+import { extent } from '../data/extent';
 import { pronyLoss, pronyRelaxation, pronyStorage } from '../spectrum/prony-model';
 import type { ChartSeries, ChartSpec, LegendEntry } from './svg/chart-types';
 import { temperatureColour } from './svg/colour';
@@ -33,7 +34,7 @@ export function plottedQuantities(a: Analysis): QuantityId[] {
 
 function temperatureRange(a: Analysis): [number, number] {
   const ts = a.dataset.isotherms.map((i) => i.temperatureK);
-  return ts.length ? [Math.min(...ts), Math.max(...ts)] : [0, 0];
+  return ts.length ? extent(ts) : [0, 0];
 }
 
 const STYLE = [
@@ -92,12 +93,15 @@ export function masterCurveChart(a: Analysis, unit: ModulusUnit): ChartSpec {
   const [lo, hi] = temperatureRange(a);
   const mc = a.masterCurve;
   const series: ChartSeries[] = [];
-  const ids = [...new Set(mc.isothermId)];
-  for (const id of ids) {
-    const idx = mc.isothermId
-      .map((v, i) => (v === id && !mc.outlier[i] ? i : -1))
-      .filter((i) => i >= 0);
-    if (idx.length === 0) continue;
+  // indices of each isotherm's points in one pass (not one scan of the curve per isotherm)
+  const byId = new Map<string, number[]>();
+  mc.isothermId.forEach((id, i) => {
+    if (mc.outlier[i]) return;
+    const list = byId.get(id);
+    if (list) list.push(i);
+    else byId.set(id, [i]);
+  });
+  for (const [id, idx] of byId) {
     const colour = temperatureColour(mc.temperatureK[idx[0]], lo, hi);
     qs.forEach((q, k) => {
       const v = mc.quantities[q];
@@ -141,8 +145,7 @@ export function masterCurveChart(a: Analysis, unit: ModulusUnit): ChartSpec {
       tauS: a.prony.tauS,
       modulusPa: a.prony.modulusPa,
     };
-    const xmin = Math.min(...mc.reducedX);
-    const xmax = Math.max(...mc.reducedX);
+    const [xmin, xmax] = extent(mc.reducedX);
     const n = 120;
     const grid = Array.from({ length: n }, (_, i) => xmin * (xmax / xmin) ** (i / (n - 1)));
     const curves: [QuantityId, (x: number) => number][] =

@@ -6,8 +6,10 @@ import type { Analysis } from '../pipeline/types';
 import { CONVENTIONS } from '../pipeline/conventions';
 import { toCelsius, toKelvinText } from '../pipeline/temperature';
 import { formatFixed, formatNumber } from './format';
+import { quantitySymbol } from '../data/quantities';
 import type { TableSpec } from './html-table';
 import { modulusFactor, type ModulusUnit } from './output-units';
+import { pronySymbols } from '../spectrum/prony-symbols';
 
 const CONVENTION_NOTE = `Conventions: ${CONVENTIONS.horizontal}. ${CONVENTIONS.vertical}.`;
 
@@ -176,6 +178,7 @@ export function pronyTable(a: Analysis, unit: ModulusUnit): TableSpec | null {
   const p = a.prony;
   if (!p) return null;
   const f = modulusFactor(unit);
+  const y = pronySymbols(p.deformation);
   const rows = p.tauS.map((tau, i) => [
     String(i + 1),
     formatNumber(tau, 4),
@@ -183,19 +186,20 @@ export function pronyTable(a: Analysis, unit: ModulusUnit): TableSpec | null {
     formatNumber(p.modulusPa[i] / p.instantaneousModulusPa, 4),
   ]);
   rows.push([
-    '∞ (equilibrium)',
+    `${y.equilibrium} (equilibrium)`,
     '–',
     formatNumber(p.equilibriumModulusPa / f, 4),
     formatNumber(p.equilibriumModulusPa / p.instantaneousModulusPa, 4),
   ]);
   return {
     id: 'table-prony',
-    caption: `Prony series at Tref = ${toCelsius(a.referenceTemperatureK)} °C (G0 = ${formatNumber(p.instantaneousModulusPa / f)} ${unit})`,
-    head: ['i', 'τ_i (s)', `g_i (${unit})`, 'g_i / G0'],
+    caption: `Prony series, ${y.modeLabel}, at Tref = ${toCelsius(a.referenceTemperatureK)} °C (${y.instantaneous} = ${formatNumber(p.instantaneousModulusPa / f)} ${unit})`,
+    head: ['i', 'τ_i (s)', `${y.term} (${unit})`, `${y.term} / ${y.instantaneous}`],
     numeric: [1, 2, 3],
     rows,
     note:
-      `Generalised Maxwell model: G(t) = Ge + Σ g_i exp(−t/τ_i), G0 = Ge + Σ g_i; fitted to ${p.fittedTo.join(' and ')} with non-negative g_i, ` +
+      `Generalised Maxwell model in ${p.deformation}: ${y.formula}, ${y.instantaneous} = ${y.equilibrium} + Σ ${y.term}${p.deformation === 'tension' ? ' (tensile moduli: do not enter them as shear moduli; E = 2(1 + ν)G)' : ''}; ` +
+      `${y.equilibrium} ${p.equilibrium.mode === 'zero' ? 'set to 0' : 'fitted'} (${p.equilibrium.reason}); fitted to ${p.fittedTo.map((q) => quantitySymbol(q, p.deformation)).join(' and ')} with non-negative ${y.term}, ` +
       `${p.modesPerDecade} mode(s) per decade, RMS relative error ${p.rmsRelativeError === null ? '–' : `${formatFixed(p.rmsRelativeError * 100, 2)} %`}, ` +
       `reduced window ${formatNumber(p.reducedWindow[0], 3)} … ${formatNumber(p.reducedWindow[1], 3)}. ` +
       `Valid at Tref; at another temperature T use t/aT(T) with the shift model. ${CONVENTION_NOTE}`,

@@ -5,6 +5,7 @@
 import type { Analysis } from '../pipeline/types';
 import { quantitySymbol } from '../data/quantities';
 import { toCelsius } from '../pipeline/temperature';
+import { pronySymbols } from '../spectrum/prony-symbols';
 
 export const CAUTIONS: readonly string[] = [
   'Extrapolation: values outside the measured window of reduced frequency or time, or outside the temperature range the shift model was fitted to, are extrapolations and only estimates. WLF constants fitted above Tg do not hold below Tg.',
@@ -12,6 +13,15 @@ export const CAUTIONS: readonly string[] = [
   'Linear range: a master curve describes linear viscoelastic behaviour only; the data must come from within the linear viscoelastic range of the material.',
   'Confirm by testing: use these results as engineering estimates. Confirm critical values by tests on the actual material and follow the applicable codes, standards and licensed engineering practice.',
 ];
+
+/** How the model fits weighted the shifts, in words, from the first fitted model. */
+function weightingWords(a: Analysis): string {
+  const m = a.models.wlf ?? a.models.arrhenius ?? a.models.polynomial;
+  if (!m) return 'least squares';
+  return m.weighting.kind === 'full-covariance'
+    ? 'generalised least squares with the full covariance of the shifts from the shift engine (all shifts share the noise of the reference condition)'
+    : `weighted least squares (${m.weighting.note})`;
+}
 
 export function methodParagraphs(a: Analysis): string[] {
   const s = a.settings;
@@ -35,11 +45,11 @@ export function methodParagraphs(a: Analysis): string[] {
     );
   if (s.models.length)
     paragraphs.push(
-      `Shift-factor models (${s.models.join(', ')}) were fitted to log10 aT against temperature, weighted by the standard errors of the shifts; the bands are 95 % confidence bands of the predicted log10 aT.`,
+      `Shift-factor models (${s.models.join(', ')}) were fitted to log10 aT against temperature by ${weightingWords(a)}; the bands are 95 % confidence bands of the predicted log10 aT (delta method with the constants' covariance). Shifts fixed by hand are not measurements and were left out of these fits.`,
     );
   if (a.prony)
     paragraphs.push(
-      `A Prony series (generalised Maxwell model) with ${a.prony.modesPerDecade} relaxation time(s) per decade across the reduced window was fitted to the master curve by non-negative least squares on relative residuals.`,
+      `A Prony series (generalised Maxwell model, ${a.prony.deformation}: ${pronySymbols(a.prony.deformation).formula}) with ${a.prony.modesPerDecade} relaxation time(s) per decade across the reduced window (one more decade of short times for the fast tails) was fitted to the master curve, log-binned to ${a.prony.binCount} bin means (${a.prony.pointCount} points), by non-negative least squares on relative residuals weighted by each bin's standard error. ${a.prony.equilibrium.reason}`,
     );
   return paragraphs;
 }

@@ -71,6 +71,8 @@ export interface OffsetFit {
   theta: Float64Array;
   /** Standard error of each parameter (NaN when unknown). */
   stdErr: Float64Array;
+  /** Full covariance of the parameters (size × size, row-major), or null when not computed. */
+  covariance: Float64Array | null;
   included: Uint8Array;
   overlapsNothing: Uint8Array;
   disconnected: Uint8Array;
@@ -311,6 +313,7 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
     problem,
     theta,
     stdErr,
+    covariance: outcome.covariance,
     included,
     overlapsNothing,
     disconnected,

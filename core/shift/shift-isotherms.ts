@@ -13,6 +13,7 @@ import { runChecks } from './run-checks';
 import type {
   CurveShift,
   ResolvedShiftOptions,
+  ShiftCovariance,
   ShiftOptions,
   ShiftResult,
   ShiftWarning,
@@ -133,6 +134,23 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
     warnings,
     settings: s,
     fit: fit.info,
+    log10aTCovariance: aTCovariance(fit, active, curves),
+  };
+}
+
+/** The log10 aT block of the fit's covariance for the included isotherms, by id. */
+function aTCovariance(
+  fit: OffsetFit,
+  active: number[],
+  curves: CurveShift[],
+): ShiftCovariance | null {
+  const cov = fit.covariance;
+  if (!cov) return null;
+  const size = fit.stdErr.length;
+  const rows = active.map((k, c) => ({ k, c })).filter(({ k }) => curves[k].included);
+  return {
+    ids: rows.map(({ k }) => curves[k].id),
+    log10aT: rows.map(({ c: a }) => rows.map(({ c: b }) => cov[a * size + b])),
   };
 }
 

@@ -189,6 +189,18 @@ export interface FitInfo {
   warmStart: boolean;
 }
 
+/**
+ * Covariance of log10 aT between the included isotherms, decades², as the engine's sandwich
+ * estimate gives it (relative to the reference condition: zero rows for locked isotherms and the
+ * reference isotherm itself). The shift-model fits read it for generalised least squares.
+ */
+export interface ShiftCovariance {
+  /** Isotherm ids, in the order of the matrix rows and columns. */
+  ids: string[];
+  /** Symmetric matrix, decades². */
+  log10aT: number[][];
+}
+
 export interface ShiftResult {
   referenceK: number;
   /** Sign convention, repeated for every consumer of the JSON. */
@@ -202,6 +214,8 @@ export interface ShiftResult {
   warnings: ShiftWarning[];
   settings: ResolvedShiftOptions;
   fit: FitInfo;
+  /** Covariance of log10 aT of the included isotherms; null when it was not computed. */
+  log10aTCovariance: ShiftCovariance | null;
 }
 
 /** One point of the master curve: reduced abscissa and reduced quantities. */

@@ -58,3 +58,42 @@ export function findCrossovers(
   }
   return { crossovers, warnings };
 }
+
+/**
+ * Keeps the crossovers the measured data confirm: inside the window by at least `marginDecades`,
+ * and with the binned data's log G′ − log G″ of the right sign on both sides (at least two bins
+ * within `reachDecades` on each side). A series crossing at the window edge, where no data lie
+ * beyond, is dropped: the data cannot show it.
+ */
+export function confirmedCrossovers(
+  crossovers: readonly Crossover[],
+  bins: {
+    log10x: ArrayLike<number>;
+    storage: { log10y: ArrayLike<number>; count: ArrayLike<number> };
+    loss: { log10y: ArrayLike<number>; count: ArrayLike<number> };
+  },
+  reachDecades = 0.3,
+): Crossover[] {
+  return crossovers.filter((c) => {
+    const lc = Math.log10(c.omegaRadPerS);
+    let below = 0;
+    let nb = 0;
+    let above = 0;
+    let na = 0;
+    for (let j = 0; j < bins.log10x.length; j++) {
+      const lx = bins.log10x[j];
+      if (!(bins.storage.count[j] > 0 && bins.loss.count[j] > 0)) continue;
+      const d = bins.storage.log10y[j] - bins.loss.log10y[j];
+      if (lx < lc && lx >= lc - reachDecades) {
+        below += d;
+        nb++;
+      } else if (lx > lc && lx <= lc + reachDecades) {
+        above += d;
+        na++;
+      }
+    }
+    if (nb < 2 || na < 2) return false;
+    const rising = c.direction === 'storage-rises';
+    return rising ? below < 0 && above > 0 : below > 0 && above < 0;
+  });
+}

@@ -4,6 +4,7 @@
  * modulus = reduced modulus / bT, measured compliance = reduced compliance × bT,
  * |η*|(T, ω) = |G*_r(ω_r)| / (bT·ω). Every answer carries its extrapolation flags and cautions.
  */
+import { extent } from '../data/extent';
 import { checkShiftModelRange } from '../models/range-check';
 import { shiftModelBand } from '../models/shift-model-band';
 import type { ShiftModelSpec } from '../models/types';
@@ -148,13 +149,13 @@ export function predictQuantity(query: PredictionQuery, ctx: PredictionContext):
       `The reduced ${kind === 'time' ? 'time' : 'frequency'} ${reducedX.toPrecision(3)} ${kind === 'time' ? 's' : 'rad/s'} lies outside the measured master curve: the value is extrapolated from the Prony series.`,
     );
   }
-  cautions.push(...range.messages, ...STANDING_CAUTIONS);
+  for (const m of [...range.messages, ...STANDING_CAUTIONS]) cautions.push(m);
   let valueRange: [number, number] | undefined;
   if (Number.isFinite(band.stdErr) && band.stdErr > 0) {
     const vs = [band.lower95, band.upper95].map((l) =>
       valueAt(query.quantity, ctx, x, l, bT, creepOf),
     );
-    valueRange = [Math.min(value, ...vs), Math.max(value, ...vs)];
+    valueRange = extent([value, ...vs]);
   }
   return {
     quantity: query.quantity,

@@ -6,6 +6,7 @@
 import type { DemoMeasurements, DemoWritten } from './demo-types';
 import { headerLines, paPerUnit } from './demo-header';
 import { formatCelsius, formatSignificant } from './number-text';
+import { maxOf } from '../data/extent';
 
 /** "150 to 230 °C every 10 K" from ascending, evenly spaced set points. */
 export function setPointSpan(setPointsC: number[]): string {
@@ -63,7 +64,7 @@ function rampTable(m: DemoMeasurements): { head: string[]; rows: string[] } {
       formatSignificant(p.lossPa / p.primaryPa, 4),
     ]),
   );
-  const widths = cells.map((c, j) => Math.max(c.length, ...body.map((r) => r[j].length)) + 2);
+  const widths = cells.map((c, j) => Math.max(c.length, maxOf(body.map((r) => r[j].length))) + 2);
   const align = (r: string[]): string =>
     r.map((c, j) => (j === r.length - 1 ? c : c.padEnd(widths[j]))).join('');
   head.push(align(cells));

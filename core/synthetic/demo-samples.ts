@@ -3,6 +3,7 @@
  * samples/, and what the app can rebuild without reading any file. Pure: no file system here.
  */
 import type { Dataset, Isotherm, QuantityId } from '../data/types';
+import { maxOf, minOf } from '../data/extent';
 import type { DemoFile, DemoMeasurements, DemoScenario, DemoWritten } from './demo-types';
 import type { DemoTruth } from './demo-truth';
 import { demoTruth } from './demo-truth';
@@ -111,7 +112,7 @@ export function demoDataset(sample: DemoSample): Dataset {
     return sortedIsotherm({
       id: `T${String(k + 1).padStart(2, '0')}`,
       temperatureK: mean + 273.15,
-      temperatureSpreadK: Math.max(...temps) - Math.min(...temps),
+      temperatureSpreadK: maxOf(temps) - minOf(temps),
       x: iso.points.map((p) => p.xSI),
       quantities,
       mask: iso.points.map(() => true),

@@ -7,6 +7,7 @@
 import type { DemoMeasurements, DemoScenario, DemoWritten } from './demo-types';
 import { LOW_TORQUE_SHARE, demoShiftAt } from './demo-measure';
 import { GAS_CONSTANT_J_PER_MOL_K } from '../models/shift-laws';
+import { maxOf, minOf } from '../data/extent';
 
 /** Shift law as stored in truth.json (constants referred to the reference temperature). */
 export type DemoTruthLaw =
@@ -115,7 +116,7 @@ export function demoTruth(m: DemoMeasurements, written: DemoWritten): DemoTruth 
     return {
       setPointC: iso.setPointC,
       meanTemperatureC: mean,
-      spreadK: Math.max(...temps) - Math.min(...temps),
+      spreadK: maxOf(temps) - minOf(temps),
       points: iso.points.length,
       files: [...new Set(written.sources[k].map((src) => src.file))],
       log10aT: shift.log10aT,

@@ -2,6 +2,7 @@
 import type { Analysis } from '../../pipeline/types';
 import type { QuantityId } from '../../data/types';
 import { QUANTITY_IDS } from '../../data/types';
+import { quantitySymbol } from '../../data/quantities';
 import { conventionCommentLines } from '../../pipeline/conventions';
 import { toCelsius, toKelvinText } from '../../pipeline/temperature';
 import { csvDocument, csvNumber } from './csv-format';
@@ -34,6 +35,7 @@ export function masterCurveCsv(a: Analysis, unit: ModulusUnit = 'Pa'): string {
       `Thermoshift ${a.version} master curve — sample: ${a.sample.name}`,
       `reference temperature: ${toCelsius(a.referenceTemperatureK)} °C (${toKelvinText(a.referenceTemperatureK)} K); ${a.sample.deformation}, ${a.sample.testKind}`,
       `${xCol}: ${a.sample.abscissa === 'angularFrequency' ? 'aT·ω' : 't/aT'}; quantities reduced to Tref (moduli × bT)`,
+      `symbols (${a.sample.deformation}): ${qs.map((q) => `${COLUMN_STEM[q]} = ${quantitySymbol(q, a.sample.deformation)}`).join(', ')}`,
       ...conventionCommentLines(),
       'source_temperature_C and isotherm: where each point was measured; outlier = yes: flagged by the shift engine and left out of the fits',
     ],

@@ -5,7 +5,7 @@
  * bar at the right. Scales with the page via viewBox; no script, no external resource.
  */
 import type { ChartAxis, ChartSpec } from './chart-types';
-import { drawable, niceDomain, project, type Scale } from './scale';
+import { DomainAccumulator, drawable, project, type Scale } from './scale';
 import { linearTicks, logTicks, type Tick } from './ticks';
 import { lineSvg, markerSvg, pathData, round2 } from './marks';
 import { rampStops } from './colour';
@@ -15,8 +15,8 @@ import { formatNumber } from '../format';
 const MARGIN = { left: 66, right: 18, top: 34, bottom: 44 };
 const COLOUR_BAR_WIDTH = 64;
 
-function axisScale(axis: ChartAxis, values: number[], range: [number, number]): Scale {
-  return { kind: axis.kind, domain: axis.domain ?? niceDomain(values, axis.kind), range };
+function axisScale(axis: ChartAxis, acc: DomainAccumulator, range: [number, number]): Scale {
+  return { kind: axis.kind, domain: axis.domain ?? acc.nice(), range };
 }
 
 function ticksFor(s: Scale): Tick[] {
@@ -45,18 +45,28 @@ export function renderChart(spec: ChartSpec): string {
   const y0 = MARGIN.top + 16 * Math.max(0, legend.rows - 1);
   const y1 = spec.height - MARGIN.bottom;
   const bands = spec.bands ?? [];
-  const xs = [...spec.series.flatMap((s) => s.x), ...bands.flatMap((b) => b.x)];
-  const ys = [
-    ...spec.series.flatMap((s) =>
-      s.y.flatMap((v, i) => {
-        const e = s.yError?.[i];
-        return e ? [v - e, v + e] : [v];
-      }),
-    ),
-    ...bands.flatMap((b) => [...b.lower, ...b.upper]),
-  ];
-  const sx = axisScale(spec.x, xs, [x0, x1]);
-  const sy = axisScale(spec.y, ys, [y1, y0]);
+  // axis ranges in one pass over the values (10⁶ points make no intermediate arrays)
+  const ax = new DomainAccumulator(spec.x.kind);
+  const ay = new DomainAccumulator(spec.y.kind);
+  for (const s of spec.series)
+    for (let i = 0; i < s.x.length; i++) {
+      ax.add(s.x[i]);
+      const v = s.y[i];
+      const e = s.yError?.[i];
+      if (e) {
+        ay.add(v - e);
+        ay.add(v + e);
+      } else ay.add(v);
+    }
+  for (const b of bands) {
+    for (const x of b.x) ax.add(x);
+    for (let i = 0; i < b.lower.length; i++) {
+      ay.add(b.lower[i]);
+      ay.add(b.upper[i]);
+    }
+  }
+  const sx = axisScale(spec.x, ax, [x0, x1]);
+  const sy = axisScale(spec.y, ay, [y1, y0]);
   const id = escapeHtml(spec.id);
   const px = (v: number): number => project(sx, v);
   const py = (v: number): number => project(sy, v);
@@ -98,18 +108,36 @@ export function renderChart(spec: ChartSpec): string {
       );
   }
   for (const s of spec.series) {
-    const pts = s.x.map((x, i) => (ok(x, s.y[i]) ? { x: px(x), y: py(s.y[i]) } : null));
-    data.push(lineSvg(pathData(pts), s.colour, s.line));
+    const n = s.x.length;
+    const X = new Float64Array(n);
+    const Y = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+      const ok2 = ok(s.x[i], s.y[i]);
+      X[i] = ok2 ? px(s.x[i]) : NaN;
+      Y[i] = ok2 ? py(s.y[i]) : NaN;
+    }
+    if (s.line !== 'none') data.push(lineSvg(pathData(thinLine(X, Y)), s.colour, s.line));
     if (s.yError)
       s.x.forEach((x, i) => {
         const e = s.yError?.[i];
         if (!e || !ok(x, s.y[i]) || !drawable(sy, s.y[i] - e)) return;
-        const X = round2(px(x));
+        const Xe = round2(px(x));
         data.push(
-          `<line class="err" x1="${X}" x2="${X}" y1="${round2(py(s.y[i] - e))}" y2="${round2(py(s.y[i] + e))}" stroke="${s.colour}" stroke-width="1"/>`,
+          `<line class="err" x1="${Xe}" x2="${Xe}" y1="${round2(py(s.y[i] - e))}" y2="${round2(py(s.y[i] + e))}" stroke="${s.colour}" stroke-width="1"/>`,
         );
       });
-    pts.forEach((p) => p && data.push(markerSvg(s.marker, p.x, p.y, s.colour)));
+    // one marker per pixel and series: overlapping markers add nothing to the picture, and
+    // 10⁶ points would make a file of tens of megabytes
+    if (s.marker !== 'none') {
+      const drawn = new Set<number>();
+      for (let i = 0; i < n; i++) {
+        if (Number.isNaN(X[i])) continue;
+        const key = Math.round(X[i]) * 100003 + Math.round(Y[i]);
+        if (drawn.has(key)) continue;
+        drawn.add(key);
+        data.push(markerSvg(s.marker, X[i], Y[i], s.colour));
+      }
+    }
   }
   out.push(`<g class="data" clip-path="url(#${id}-clip)">${data.join('')}</g>`);
   out.push(
@@ -124,6 +152,52 @@ export function renderChart(spec: ChartSpec): string {
   if (spec.colourBar) out.push(colourBarSvg(id, spec.colourBar, x1 + 16, y0, y1));
   out.push('</svg>');
   return out.join('');
+}
+
+type Pt = { x: number; y: number } | null;
+
+/**
+ * The points of a line (projected; NaN = a gap), thinned for drawing: with more than 4000, per
+ * pixel column its first, lowest, highest and last point in order (min–max decimation), the same
+ * picture with at most four points a pixel. Gaps are kept.
+ */
+function thinLine(X: Float64Array, Y: Float64Array): Pt[] {
+  const n = X.length;
+  const out: Pt[] = [];
+  if (n < 4000) {
+    for (let i = 0; i < n; i++) out.push(Number.isNaN(X[i]) ? null : { x: X[i], y: Y[i] });
+    return out;
+  }
+  let start = -1;
+  let column = NaN;
+  const flush = (end: number): void => {
+    if (start < 0) return;
+    let lo = start;
+    let hi = start;
+    for (let i = start; i < end; i++) {
+      if (Y[i] < Y[lo]) lo = i;
+      if (Y[i] > Y[hi]) hi = i;
+    }
+    const keep = [...new Set([start, Math.min(lo, hi), Math.max(lo, hi), end - 1])];
+    for (const i of keep) out.push({ x: X[i], y: Y[i] });
+    start = -1;
+  };
+  for (let i = 0; i < n; i++) {
+    if (Number.isNaN(X[i])) {
+      flush(i);
+      out.push(null);
+      column = NaN;
+      continue;
+    }
+    const c = Math.floor(X[i]);
+    if (c !== column) {
+      flush(i);
+      column = c;
+      start = i;
+    }
+  }
+  flush(n);
+  return out;
 }
 
 /** Legend entries laid out left to right, wrapping onto further rows 16 px apart. */

@@ -30,24 +30,43 @@ export function drawable(scale: Scale, value: number): boolean {
  * frame the data), for linear scales padded by 4 % on each side. Falls back to [1, 10] or [0, 1]
  * when there is nothing to show.
  */
-export function niceDomain(values: readonly number[], kind: 'linear' | 'log'): [number, number] {
-  const ok = values.filter((v) => Number.isFinite(v) && (kind === 'linear' || v > 0));
-  if (ok.length === 0) return kind === 'log' ? [1, 10] : [0, 1];
-  let lo = Math.min(...ok);
-  let hi = Math.max(...ok);
-  if (kind === 'log') {
-    let a = Math.floor(Math.log10(lo) + 1e-9);
-    let b = Math.min(308, Math.ceil(Math.log10(hi) - 1e-9)); // 1e309 overflows to Infinity
-    a = Math.max(-307, a);
-    if (b <= a) b = a + 1;
-    if (b - a > 24) a = b - 24; // keep a readable axis for absurd ranges
-    return [10 ** a, 10 ** b];
+export function niceDomain(values: ArrayLike<number>, kind: 'linear' | 'log'): [number, number] {
+  const acc = new DomainAccumulator(kind);
+  for (let i = 0; i < values.length; i++) acc.add(values[i]);
+  return acc.nice();
+}
+
+/** Collects the range of drawable values one by one (no array of every value is built). */
+export class DomainAccumulator {
+  private lo = Infinity;
+  private hi = -Infinity;
+  constructor(readonly kind: 'linear' | 'log') {}
+
+  add(v: number): void {
+    if (!Number.isFinite(v) || (this.kind === 'log' && !(v > 0))) return;
+    if (v < this.lo) this.lo = v;
+    if (v > this.hi) this.hi = v;
   }
-  if (hi === lo) {
-    const pad = Math.abs(lo) > 0 ? Math.abs(lo) * 0.1 : 1;
-    lo -= pad;
-    hi += pad;
+
+  /** The nice domain of everything added (see niceDomain). */
+  nice(): [number, number] {
+    let lo = this.lo;
+    let hi = this.hi;
+    if (!(hi >= lo)) return this.kind === 'log' ? [1, 10] : [0, 1];
+    if (this.kind === 'log') {
+      let a = Math.floor(Math.log10(lo) + 1e-9);
+      let b = Math.min(308, Math.ceil(Math.log10(hi) - 1e-9)); // 1e309 overflows to Infinity
+      a = Math.max(-307, a);
+      if (b <= a) b = a + 1;
+      if (b - a > 24) a = b - 24; // keep a readable axis for absurd ranges
+      return [10 ** a, 10 ** b];
+    }
+    if (hi === lo) {
+      const pad = Math.abs(lo) > 0 ? Math.abs(lo) * 0.1 : 1;
+      lo -= pad;
+      hi += pad;
+    }
+    const pad = (hi - lo) * 0.04;
+    return [lo - pad, hi + pad];
   }
-  const pad = (hi - lo) * 0.04;
-  return [lo - pad, hi + pad];
 }

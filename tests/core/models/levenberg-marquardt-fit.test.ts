@@ -101,7 +101,41 @@ describe('levenbergMarquardtFit()', () => {
       { maxIterations: 1, roundIterations: 1 },
     );
     expect(fit.converged).toBe(false);
-    expect(fit.reason).toMatch(/without settling/);
+    expect(fit.reason).toMatch(/without meeting its tolerance/);
+  });
+
+  /** A noisy exponential decay (seeded): a fit with a real, non-zero residual. */
+  const noisyDecay = () => {
+    let u = 7;
+    const x = Array.from({ length: 30 }, (_, i) => i * 0.3);
+    const y = x.map((t) => {
+      u = (u * 16807) % 2147483647; // Park & Miller minimal standard generator
+      return 3 * Math.exp(-0.7 * t) + 0.02 * (u / 2147483647 - 0.5);
+    });
+    return {
+      x,
+      y,
+      model:
+        ([a, k]: number[]) =>
+        (t: number) =>
+          a * Math.exp(-k * t),
+      initial: [1, 0.2],
+    };
+  };
+
+  it('levenbergMarquardtFit() says converged only with the Bates–Watts relative offset under its tolerance (Bates & Watts, Technometrics 23, 1981)', () => {
+    const fit = levenbergMarquardtFit(noisyDecay());
+    expect(fit.converged).toBe(true);
+    expect(fit.relativeOffset).toBeLessThanOrEqual(1e-3);
+    expect(fit.reason).toMatch(/^Converged/);
+  });
+
+  it('levenbergMarquardtFit() reports a stall that misses its tolerance as converged=false with the reason', () => {
+    // 1e-14 is below what the finite-difference Jacobian can resolve: the rounds stop improving
+    const fit = levenbergMarquardtFit(noisyDecay(), { offsetTolerance: 1e-14 });
+    expect(fit.converged).toBe(false);
+    expect(fit.reason).toMatch(/stalled|used its/);
+    expect(fit.reason).toMatch(/without meeting its tolerance/);
   });
 
   it('levenbergMarquardtFit() rejects bad calls, naming the parameter', () => {

@@ -7,6 +7,8 @@ describe('resolveShiftFitOptions()', () => {
       referenceK: 300,
       glassTransitionK: undefined,
       errorScaling: 'residual',
+      covariance: null,
+      diagonalReason: undefined,
     });
     expect(
       resolveShiftFitOptions({ referenceK: 300, errorScaling: 'reported', glassTransitionK: 250 })

@@ -283,4 +283,24 @@ describe('buildMasterCurve()', () => {
       /pronyModesPerDecade/,
     );
   });
+
+  // A lab's complaint: after excluding one isotherm, three fits warned "Point 4 at 190.0 °C:
+  // standard error is 0" — the reference isotherm, whose zero error is exact, under an index.
+  it('buildMasterCurve() gives no warning about the reference isotherm or a locked shift after an exclusion, and names no point index', () => {
+    // Tref given 0.004 K off the isotherm at 100 °C (a measured mean), one isotherm excluded,
+    // one shift locked
+    const a = buildMasterCurve(make({ seed: 4 }).dataset, {
+      referenceTemperatureK: 373.154,
+      excludedIsothermIds: ['T06'],
+      lockedLog10aT: { T08: -2.6 },
+      pronyModesPerDecade: 0,
+    });
+    const text = a.warnings.map((w) => w.message).join('\n');
+    expect(text).not.toMatch(/standard error/);
+    expect(text).not.toMatch(/\bPoint \d/);
+    for (const m of [a.models.wlf!, a.models.arrhenius!, a.models.polynomial!]) {
+      expect(m.weighting.kind).toBe('full-covariance');
+      expect(m.weighting.leftOut.map((l) => l.isothermId)).toEqual(['T08']);
+    }
+  });
 });

@@ -82,4 +82,56 @@ describe('fitShiftModels()', () => {
     expect(m).toEqual({});
     expect(w.filter((x) => x.code === 'model-failed')).toHaveLength(3);
   });
+
+  it('fitShiftModels() uses the covariance it is given (generalised least squares) and says so', () => {
+    const s = resolveAnalysisOptions({ referenceTemperatureK: TREF, models: ['arrhenius'] }, temps);
+    const c = curves((T) => arrheniusLog10aT(T, 80e3, TREF));
+    // shared reference noise: 1e-4 on every pair of non-reference shifts, 2e-4 on the diagonal
+    const cov = (ids: string[]) => ({
+      matrix: ids.map((a, i) =>
+        ids.map((b, j) => (a === 'T04' || b === 'T04' ? 0 : i === j ? 2e-4 : 1e-4)),
+      ),
+      reason: '',
+    });
+    const m = fitShiftModels(c, s, [], cov);
+    expect(m.arrhenius!.weighting.kind).toBe('full-covariance');
+    const d = fitShiftModels(c, s, []);
+    expect(d.arrhenius!.weighting.kind).toBe('diagonal');
+    expect(d.arrhenius!.weighting.note).toMatch(/no covariance/);
+  });
+
+  it('fitShiftModels() leaves a shift fixed by hand out of the fits, listed by isotherm, with no warning', () => {
+    const w: AnalysisWarning[] = [];
+    const s = resolveAnalysisOptions(
+      { referenceTemperatureK: TREF, models: ['arrhenius'], lockedLog10aT: { T06: -0.9 } },
+      temps,
+    );
+    const c = curves((T) => arrheniusLog10aT(T, 80e3, TREF));
+    c[5] = { ...c[5], log10aT: -0.9, log10aTStdErr: 0 };
+    const m = fitShiftModels(c, s, w);
+    expect(w).toEqual([]);
+    expect(m.arrhenius!.weighting.leftOut).toEqual([
+      {
+        isothermId: 'T06',
+        temperatureK: 393.15,
+        reason: 'shift fixed by hand: not a measurement',
+      },
+    ]);
+    expectRelClose(m.arrhenius!.activationEnergyKJPerMol, 80, 1e-9, 'the lock does not pull Ea');
+  });
+
+  it('fitShiftModels() gives a not-converged warning naming the model when a fit stops short', () => {
+    const w: AnalysisWarning[] = [];
+    const s = resolveAnalysisOptions({ referenceTemperatureK: TREF, models: ['wlf'] }, temps);
+    // straight in T: WLF's C2 runs away to its bound, the fit does not converge
+    fitShiftModels(
+      curves((T) => -0.01 * (T - TREF)),
+      s,
+      w,
+    );
+    const nc = w.filter((x) => x.code === 'not-converged');
+    expect(nc).toHaveLength(1);
+    expect(nc[0].model).toBe('wlf');
+    expect(nc[0].message).toMatch(/^The WLF fit of the shift factors did not converge/);
+  });
 });

@@ -1,9 +1,9 @@
 import { describe, it, expect } from 'vitest';
 import { computeIndicators } from '../../../core/pipeline/indicators';
 import type { Dataset } from '../../../core/data/types';
-import type { AnalysisMasterCurve, AnalysisWarning } from '../../../core/pipeline/types';
+import type { AnalysisWarning } from '../../../core/pipeline/types';
 import type { PronySeries } from '../../../core/spectrum/prony-model';
-import { pronyLoss, pronyStorage } from '../../../core/spectrum/prony-model';
+import { pronyMasterCurve } from '../../helpers/prony-master';
 import { expectRelClose } from '../../helpers/assert-close';
 
 const dataset = {
@@ -13,19 +13,7 @@ const dataset = {
 } as Dataset;
 const window = { abscissa: 'angularFrequency' as const, min: 1e-3, max: 1e3 };
 
-function masterOf(p: PronySeries): AnalysisMasterCurve {
-  const x = Array.from({ length: 61 }, (_, i) => 1e-3 * 10 ** (i / 10));
-  return {
-    reducedX: x,
-    quantities: {
-      storageModulus: x.map((w) => pronyStorage(p, w)),
-      lossModulus: x.map((w) => pronyLoss(p, w)),
-    },
-    isothermId: x.map(() => 'T01'),
-    temperatureK: x.map(() => 400),
-    outlier: x.map(() => false),
-  };
-}
+const masterOf = (p: PronySeries) => pronyMasterCurve(p);
 
 describe('computeIndicators()', () => {
   it('computeIndicators() finds the crossover of one Maxwell element at ω = 1/τ with G′ = G″ = g/2 (Ferry 1980, ch. 3)', () => {
@@ -67,5 +55,27 @@ describe('computeIndicators()', () => {
     expect(ind.tanDeltaPeakFrequency.value).toBeGreaterThan(1e-3);
     expect(ind.tanDeltaPeakTemperature1Hz.unit).toBe('°C');
     expect(ind.zeroShearViscosity).toBeUndefined(); // a solid: its G'' > G' transition is no terminal zone
+  });
+
+  it('computeIndicators() labels a tensile solid with E-symbols (E0, Ee, E″/E′) and a shear one with G-symbols', () => {
+    const p: PronySeries = {
+      equilibriumModulusPa: 1e6,
+      tauS: [1e-4, 1e-3, 1e-2, 1e-1, 1],
+      modulusPa: [2e8, 2e8, 2e8, 2e8, 2e8],
+    };
+    for (const [deformation, m] of [
+      ['tension', 'E'],
+      ['shear', 'G'],
+    ] as const) {
+      const ind = Object.fromEntries(
+        computeIndicators({ ...dataset, deformation }, masterOf(p), p, window, {}, []).map((i) => [
+          i.key,
+          i,
+        ]),
+      );
+      expect(ind.glassyModulus.label).toContain(`${m}0`);
+      expect(ind.rubberyModulus.label).toContain(`${m}e`);
+      expect(ind.tanDeltaPeakFrequency.label).toContain(`${m}''/${m}'`);
+    }
   });
 });

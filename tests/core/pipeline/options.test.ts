@@ -16,6 +16,7 @@ describe('resolveAnalysisOptions()', () => {
       density: null,
       models: DEFAULT_MODELS,
       pronyModesPerDecade: 2,
+      pronyEquilibrium: 'auto',
       glassTransitionK: null,
       excludedIsothermIds: [],
       maskedPoints: [],

@@ -15,7 +15,10 @@ import { pronyInstantaneous } from '../../../core/spectrum/prony-model';
 
 export const FIXTURE_TRUTH = { c1: 8.86, c2K: 101.6, referenceK: 373.15 };
 
-export function fixtureAnalysis(kind: 'oscillatory' | 'relaxation' = 'oscillatory'): Analysis {
+export function fixtureAnalysis(
+  kind: 'oscillatory' | 'relaxation' = 'oscillatory',
+  deformation: 'shear' | 'tension' = 'shear',
+): Analysis {
   const prony = smoothProny({
     tauMinS: 1e-6,
     tauMaxS: 1e4,
@@ -26,7 +29,7 @@ export function fixtureAnalysis(kind: 'oscillatory' | 'relaxation' = 'oscillator
   const temperaturesK = [343.15, 353.15, 363.15, 373.15, 383.15, 393.15, 403.15];
   const { dataset, truth } = syntheticIsotherms({
     testKind: kind,
-    deformation: 'shear',
+    deformation,
     referenceK: FIXTURE_TRUTH.referenceK,
     temperaturesK,
     components: [{ prony, law: { kind: 'wlf', c1: FIXTURE_TRUTH.c1, c2K: FIXTURE_TRUTH.c2K } }],
@@ -85,6 +88,13 @@ export function fixtureAnalysis(kind: 'oscillatory' | 'relaxation' = 'oscillator
         residuals: [],
         fittedRangeK: [343.15, 403.15],
         converged: true,
+        convergence: 'fixture: not a fit',
+        reducedChiSquare: 1,
+        weighting: {
+          kind: 'full-covariance',
+          note: 'generalised least squares with the full covariance of the shifts',
+          leftOut: [],
+        },
         band: {
           temperatureK: grid,
           log10aT: mid,
@@ -103,7 +113,12 @@ export function fixtureAnalysis(kind: 'oscillatory' | 'relaxation' = 'oscillator
     },
     prony: {
       fittedTo: kind === 'oscillatory' ? ['storageModulus', 'lossModulus'] : ['relaxationModulus'],
+      deformation,
       equilibriumModulusPa: prony.equilibriumModulusPa,
+      equilibrium: { mode: 'fitted', reason: 'fixture: the true spectrum' },
+      terminalSlopes: { storage: 0.1, loss: 0.3, relaxation: null },
+      pointCount: 100,
+      binCount: 80,
       instantaneousModulusPa: pronyInstantaneous(prony),
       tauS: prony.tauS,
       modulusPa: prony.modulusPa,

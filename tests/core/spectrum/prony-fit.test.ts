@@ -175,7 +175,10 @@ describe('fitProny()', () => {
     expect(resolvePronyFitOptions()).toEqual({
       modesPerDecade: 2,
       extendDecades: 0,
-      fitEquilibrium: true,
+      extendFastDecades: 1,
+      equilibrium: 'auto',
+      binsPerDecade: 20,
+      maxGapDecades: 1,
       maxIterations: undefined,
     });
   });
@@ -188,5 +191,35 @@ describe('fitProny()', () => {
       /modesPerDecade/,
     );
     expect(() => fitProny({ x: [1], storage: [1] })).toThrow(/two usable/);
+  });
+
+  // Issue 9: no size limit but memory. 10⁶ points are log-binned (20 a decade) before the fit;
+  // one absurd point at 1e-300 rad/s neither stretches the τ grid nor enters the fit.
+  it('fitProny() fits 10⁶ points through its bins, and one absurd point does not stretch the τ grid', () => {
+    const truth = inventedWlfProny();
+    const rng = seededRandom(31);
+    const n = 1_000_000;
+    const x = new Float64Array(n);
+    const storage = new Float64Array(n);
+    const loss = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+      const w = 10 ** (-4 + 8 * rng.uniform());
+      x[i] = w;
+      storage[i] = pronyStorage(truth, w) * Math.exp(0.02 * rng.normal());
+      loss[i] = pronyLoss(truth, w) * Math.exp(0.02 * rng.normal());
+    }
+    x[0] = 1e-300;
+    const f = fitProny({ x, storage, loss });
+    expect(f.converged).toBe(true);
+    expect(f.binCount).toBeLessThanOrEqual(2 * 20 * 8 + 2); // two quantities, 8 decades
+    expect(f.window.min).toBeGreaterThan(9e-5);
+    // τ from 1/ωmax (one decade further for the fast tails) to 1/ωmin: 9 decades, 2 a decade
+    expect(f.series.tauS.length).toBeLessThanOrEqual(2 * 9 + 1);
+    expect(f.warnings.map((w) => w.message).join(' ')).toMatch(
+      /1 point\(s\) lie more than 1 decade\(s\) from the rest/,
+    );
+    // the fit error is measured against every point: the 2 % noise itself
+    expectAbsClose(f.fitError.storageRms, 0.02, 0.002, '2 % noise, 2 modes a decade');
+    expectAbsClose(f.fitError.lossRms, 0.02, 0.002, '2 % noise');
   });
 });

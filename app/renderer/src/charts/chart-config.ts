@@ -197,8 +197,9 @@ export function fittedWindow(spec: PlotSpec): PlotWindow | undefined {
       if (e) ys.push(p.y - e, p.y + e);
     });
   for (const b of spec.bands) {
-    xs.push(...b.x);
-    ys.push(...b.lower, ...b.upper);
+    for (const v of b.x) xs.push(v);
+    for (const v of b.lower) ys.push(v);
+    for (const v of b.upper) ys.push(v);
   }
   const x = paddedRange(spec.x.kind, xs);
   const y = paddedRange(spec.y.kind, ys);

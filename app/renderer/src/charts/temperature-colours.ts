@@ -3,6 +3,7 @@
  * core/report/svg/colour.ts (cold blue → hot brick red) over the dataset's temperature range.
  */
 import { rampStops, temperatureColour } from '../../../../core/report/svg/colour';
+import { extent } from '../../../../core/data/extent';
 
 export interface TemperatureScale {
   colour(temperatureK: number): string;
@@ -13,8 +14,7 @@ export interface TemperatureScale {
 }
 
 export function temperatureScale(temperaturesK: readonly number[]): TemperatureScale {
-  const minK = temperaturesK.length ? Math.min(...temperaturesK) : 0;
-  const maxK = temperaturesK.length ? Math.max(...temperaturesK) : 0;
+  const [minK, maxK] = temperaturesK.length ? extent(temperaturesK) : [0, 0];
   const stops = rampStops(9)
     .map((s) => `${s.colour} ${(s.offset * 100).toFixed(0)}%`)
     .join(', ');

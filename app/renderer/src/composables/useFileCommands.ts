@@ -176,7 +176,7 @@ export function useFileCommands(
           const content = f.build(a, o);
           return content === null ? [] : [{ name: f.name, content }];
         });
-        entries.push(...(options.figures?.() ?? []));
+        for (const figure of options.figures?.() ?? []) entries.push(figure);
         const stem = fileStem(a.sample.name);
         const zip = zipFiles(stem, entries, new Date());
         const written = await access.saveFile({

@@ -26,6 +26,7 @@ const celsius = (k: number): Rounded => {
   const c = toCelsius(k);
   return { value: c, digits: Math.max(1, Math.floor(Math.log10(Math.abs(c) || 1)) + 3) };
 };
+import { pronySymbols } from '../../../../core/spectrum/prony-symbols';
 
 export interface PlainTable {
   header: string[];
@@ -110,6 +111,8 @@ export function modelTable(a: Analysis): PlainTable {
       sig(m.r2, 4),
       sig(m.rmsResidualDecades, 2),
       `${toCelsius(m.fittedRangeK[0]).toFixed(1)} … ${toCelsius(m.fittedRangeK[1]).toFixed(1)}`,
+      m.weighting.kind === 'full-covariance' ? 'shift covariance (GLS)' : 'own s.e. only',
+      m.converged ? 'yes' : 'no',
     ]),
   );
   return {
@@ -125,6 +128,8 @@ export function modelTable(a: Analysis): PlainTable {
       'R²',
       'RMS residual (decades)',
       'fitted range (°C)',
+      'weighting',
+      'converged',
     ],
     rows,
   };
@@ -135,11 +140,17 @@ export function pronyTable(a: Analysis, units: DisplayUnits = SI_DISPLAY): Plain
   if (!p) return { header: [], rows: [] };
   const g0 = p.instantaneousModulusPa;
   const g = (pa: number): Rounded => sig(toDisplay(pa, 'Pa', units).value);
+  const y = pronySymbols(p.deformation);
   return {
-    header: ['mode', 'τ_i (s)', `g_i (${units.modulus})`, 'g_i / G0'],
+    header: [
+      'mode',
+      'τ_i (s)',
+      `${y.term} (${units.modulus}, ${p.deformation})`,
+      `${y.term} / ${y.instantaneous}`,
+    ],
     rows: [
       [
-        'equilibrium',
+        `${y.equilibrium} (equilibrium)`,
         null,
         g(p.equilibriumModulusPa),
         sig(g0 > 0 ? p.equilibriumModulusPa / g0 : null),

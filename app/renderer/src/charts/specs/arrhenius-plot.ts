@@ -11,6 +11,7 @@ import { formatWithError } from '../../format/numbers';
 import type { PlotSeries, PlotSpec } from '../plot-spec';
 import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';
 import { MODEL_COLOURS, MODEL_NAMES, TG_COLOUR, verticalLine } from './shift-plot';
+import { extent } from '../../../../../core/data/extent';
 
 export function arrheniusSpec(a: Analysis, states?: readonly IsothermState[]): PlotSpec {
   const p = arrheniusPlot(a);
@@ -55,11 +56,13 @@ export function arrheniusSpec(a: Analysis, states?: readonly IsothermState[]): P
     });
   }
   if (p.glassTransition !== null) {
-    const ys = [...p.points.map((q) => q.lnAT), ...bands.flatMap((b) => [...b.lower, ...b.upper])];
+    const [lo, hi] = extent([
+      0,
+      ...p.points.map((q) => q.lnAT),
+      ...bands.flatMap((b) => [...b.lower, ...b.upper]),
+    ]);
     const label = `Tg = ${toCelsius(1000 / p.glassTransition).toFixed(1)} °C`;
-    series.push(
-      verticalLine('tg', label, p.glassTransition, Math.min(...ys, 0), Math.max(...ys, 0)),
-    );
+    series.push(verticalLine('tg', label, p.glassTransition, lo, hi));
     legend.push({ label, colour: TG_COLOUR, style: 'dashed' });
   }
   const ea = p.activationEnergy;

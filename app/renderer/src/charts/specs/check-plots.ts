@@ -23,6 +23,7 @@ import type { PlotSeries, PlotSpec } from '../plot-spec';
 import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';
 import { celsiusText, inDisplay, unitOf, xAxisLabel, xText } from './plot-labels';
 import { plotQuantities, QUANTITY_STYLE } from './measured-plot';
+import { extent } from '../../../../../core/data/extent';
 
 function checkSeries(
   a: Analysis,
@@ -120,7 +121,7 @@ export function overlapResidualsPlot(
     for (const r of overlapResiduals(a, q)) {
       if (!r.x.length) continue;
       const marks = stateMarks(byState.get(r.isothermId));
-      xs.push(...r.x.map((x) => x * fx));
+      for (const x of r.x) xs.push(x * fx);
       series.push({
         id: `${r.isothermId}:${q}:residuals`,
         label: `${celsiusText(r.temperatureK)} ${quantitySymbol(q, m)}${marks.suffix}`,
@@ -133,14 +134,15 @@ export function overlapResidualsPlot(
     }
   });
   if (!series.length) return null;
+  const [x0, x1] = extent(xs);
   series.unshift({
     id: 'zero',
     label: 'zero',
     colour: '#9aa3a0',
     style: 'line',
     points: [
-      { x: Math.min(...xs), y: 0 },
-      { x: Math.max(...xs), y: 0 },
+      { x: x0, y: 0 },
+      { x: x1, y: 0 },
     ],
   });
   return {

@@ -17,6 +17,7 @@ import type { PlotSeries, PlotSpec } from '../plot-spec';
 import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';
 import { celsiusText, inDisplay, valueText, xAxisLabel, xText, yAxisLabel } from './plot-labels';
 import { plotQuantities, QUANTITY_STYLE } from './measured-plot';
+import { plotThinner } from './thin-series';
 
 export const PRONY_COLOUR = '#1e2326';
 
@@ -61,39 +62,42 @@ export function masterPlot(
   const interconverted = view === 'relaxation' && a.sample.abscissa === 'angularFrequency';
   const fx = interconverted ? 1 : abscissaFactor(a.sample.abscissa, units);
   const series: PlotSeries[] = [];
-  if (!interconverted)
-    qs.forEach((q, k) => {
-      for (const r of reducedIsotherms(a, q)) {
-        const marks = stateMarks(byState.get(r.isothermId));
-        const base = {
-          colour: scale.colour(r.temperatureK),
-          style: QUANTITY_STYLE[k % 2],
-          isothermId: r.isothermId,
-        };
-        const label = `${celsiusText(r.temperatureK)} ${quantitySymbol(q, mode)}`;
-        const pts = (keep: (i: number) => boolean): PlotSeries['points'] =>
-          r.x.flatMap((x, i) =>
-            keep(i) && r.y[i] > 0 ? [{ x: x * fx, y: inDisplay(q, r.y[i], units) }] : [],
-          );
-        series.push({
-          ...base,
-          id: `${r.isothermId}:${q}`,
-          label: label + marks.suffix,
-          points: pts((i) => !r.outlier[i]),
-          ...(marks.faint && { faint: true, note: marks.note }),
-        });
-        const out = pts((i) => r.outlier[i]);
-        if (out.length)
-          series.push({
-            ...base,
-            id: `${r.isothermId}:${q}:outliers`,
-            label: `${label} (outliers)`,
-            points: out,
-            faint: true,
-            note: 'Flagged by the shift engine as outliers and left out of the fit.',
-          });
-      }
+  // every isotherm's reduced columns first, so the thinner sees the whole plot before any point
+  const columns = interconverted
+    ? []
+    : qs.flatMap((q, k) => reducedIsotherms(a, q).map((r) => ({ q, k, r, x: r.x, y: r.y })));
+  const thinner = plotThinner(columns, 'log', 'log');
+  for (const { q, k, r } of columns) {
+    const marks = stateMarks(byState.get(r.isothermId));
+    const base = {
+      colour: scale.colour(r.temperatureK),
+      style: QUANTITY_STYLE[k % 2],
+      isothermId: r.isothermId,
+    };
+    const label = `${celsiusText(r.temperatureK)} ${quantitySymbol(q, mode)}`;
+    const kept = thinner.keep(r.x, r.y);
+    const pts = (outlier: boolean): PlotSeries['points'] =>
+      kept.flatMap((i) =>
+        r.outlier[i] === outlier ? [{ x: r.x[i] * fx, y: inDisplay(q, r.y[i], units) }] : [],
+      );
+    series.push({
+      ...base,
+      id: `${r.isothermId}:${q}`,
+      label: label + marks.suffix,
+      points: pts(false),
+      ...(marks.faint && { faint: true, note: marks.note }),
     });
+    const out = pts(true);
+    if (out.length)
+      series.push({
+        ...base,
+        id: `${r.isothermId}:${q}:outliers`,
+        label: `${label} (outliers)`,
+        points: out,
+        faint: true,
+        note: 'Flagged by the shift engine as outliers and left out of the fit.',
+      });
+  }
   const legend: PlotSpec['legend'] = interconverted
     ? []
     : qs.map((q, k) => ({
@@ -135,7 +139,7 @@ export function masterPlot(
           : `Master curve of ${quantitySymbol('relaxationModulus', mode)}${interconverted ? ' (from the Prony series)' : ''}`;
   return {
     id: VIEW_ID[view],
-    title: `${what} at Tref = ${toCelsius(a.referenceTemperatureK).toFixed(1)} °C`,
+    title: `${what} at Tref = ${toCelsius(a.referenceTemperatureK).toFixed(1)} °C${thinner.note()}`,
     x: { kind: 'log', label: xAxisLabel(abscissa, true, units) },
     y: {
       kind: 'log',

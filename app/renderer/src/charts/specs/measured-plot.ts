@@ -11,6 +11,7 @@ import type { PlotSeries, PlotSpec, SeriesStyle } from '../plot-spec';
 import { celsiusText, inDisplay, valueText, xAxisLabel, xText, yAxisLabel } from './plot-labels';
 import { quantitySymbol } from '../../../../../core/data/quantities';
 import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';
+import { plotThinner } from './thin-series';
 
 /** The two quantities drawn for a kind of test (first solid discs, second rings). */
 export function plotQuantities(dataset: Dataset): QuantityId[] {
@@ -41,6 +42,13 @@ export function measuredPlot(
   const byId = statesById(states);
   const fx = abscissaFactor(dataset.abscissa, units);
   const series: PlotSeries[] = [];
+  const thinner = plotThinner(
+    dataset.isotherms.flatMap((iso) =>
+      qs.flatMap((q) => (iso.quantities[q] ? [{ x: iso.x, y: iso.quantities[q] }] : [])),
+    ),
+    'log',
+    'log',
+  );
   for (const iso of dataset.isotherms) {
     const colour = scale.colour(iso.temperatureK);
     const marks = stateMarks(
@@ -54,8 +62,8 @@ export function measuredPlot(
       if (!v) return;
       const used: PlotSeries['points'] = [];
       const off: PlotSeries['points'] = [];
-      iso.x.forEach((x, i) => {
-        if (!(v[i] > 0) || !(x > 0)) return;
+      for (const i of thinner.keep(iso.x, v)) {
+        const x = iso.x[i];
         const src = iso.source[i];
         const point = {
           x: x * fx,
@@ -64,7 +72,7 @@ export function measuredPlot(
         };
         const isMasked = !iso.mask[i] || masked.has(`${src.file}\u0000${src.row}`);
         (isMasked ? off : used).push(point);
-      });
+      }
       const base = { colour, style: QUANTITY_STYLE[k % 2], isothermId: iso.id };
       const label = `${celsiusText(iso.temperatureK)} ${quantitySymbol(q, dataset.deformation)}${marks.suffix}`;
       series.push({
@@ -88,7 +96,7 @@ export function measuredPlot(
   const quantityOf = (s: PlotSeries): QuantityId => s.id.split(':')[1] as QuantityId;
   return {
     id: 'measured',
-    title: 'Measured isotherms',
+    title: `Measured isotherms${thinner.note()}`,
     x: { kind: 'log', label: xAxisLabel(dataset.abscissa, false, units) },
     y: { kind: 'log', label: yAxisLabel(qs, dataset.deformation, false, units) },
     series,

@@ -8,6 +8,7 @@ import { toCelsius } from '../../../../../core/pipeline/temperature';
 import { formatFixed } from '../../../../../core/report/format';
 import type { PlotSeries, PlotSpec } from '../plot-spec';
 import { MODEL_COLOURS, MODEL_NAMES } from './shift-plot';
+import { maxOf, minOf } from '../../../../../core/data/extent';
 
 const STYLES = { wlf: 'disc', arrhenius: 'ring', polynomial: 'disc' } as const;
 
@@ -20,7 +21,7 @@ export function modelResidualsPlot(a: Analysis): PlotSpec {
     const m = a.models[kind];
     if (!m || m.residuals.length === 0) continue;
     const rs = [...m.residuals].sort((p, q) => p.temperatureK - q.temperatureK);
-    ts.push(...rs.map((r) => toCelsius(r.temperatureK)));
+    for (const r of rs) ts.push(toCelsius(r.temperatureK));
     series.push({
       id: `residuals:${kind}`,
       label: `${MODEL_NAMES[kind]} (RMS ${formatFixed(m.rmsResidualDecades, 3)} decades)`,
@@ -42,8 +43,8 @@ export function modelResidualsPlot(a: Analysis): PlotSpec {
       colour: '#9aa3a0',
       style: 'line',
       points: [
-        { x: Math.min(...ts), y: 0 },
-        { x: Math.max(...ts), y: 0 },
+        { x: minOf(ts), y: 0 },
+        { x: maxOf(ts), y: 0 },
       ],
     });
   return {

@@ -10,6 +10,7 @@ import { toCelsius } from '../../../../../core/pipeline/temperature';
 import { formatWithError } from '../../format/numbers';
 import type { PlotBand, PlotSeries, PlotSpec } from '../plot-spec';
 import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';
+import { maxOf, minOf } from '../../../../../core/data/extent';
 
 export const MODEL_COLOURS = {
   wlf: '#23676b',
@@ -94,8 +95,8 @@ export function shiftPlot(a: Analysis, states?: readonly IsothermState[]): PlotS
   const tg = a.settings.glassTransitionK;
   if (tg !== null) {
     const all = [...ys, ...bands.flatMap((b) => [...b.lower, ...b.upper])];
-    const lo = all.length ? Math.min(...all) : -1;
-    const hi = all.length ? Math.max(...all) : 1;
+    const lo = all.length ? minOf(all) : -1;
+    const hi = all.length ? maxOf(all) : 1;
     const label = `Tg = ${toCelsius(tg).toFixed(1)} °C`;
     series.push(verticalLine('tg', label, toCelsius(tg), lo, hi));
     legend.push({ label, colour: TG_COLOUR, style: 'dashed' });

@@ -13,6 +13,7 @@ import { formatSig } from '../../format/numbers';
 import type { PlotSeries, PlotSpec } from '../plot-spec';
 import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';
 import { celsiusText, inDisplay, unitOf } from './plot-labels';
+import { plotThinner } from './thin-series';
 
 /** null when the data are not oscillatory (no phase angle). */
 export function vgpPlot(
@@ -23,7 +24,13 @@ export function vgpPlot(
   if (a.sample.testKind !== 'oscillatory') return null;
   const scale = datasetScale(a.dataset);
   const byState = statesById(states);
-  const series: PlotSeries[] = vanGurpPalmenSeries(a).map((v) => {
+  const all = vanGurpPalmenSeries(a);
+  const thinner = plotThinner(
+    all.map((v) => ({ x: v.complexModulusPa, y: v.phaseAngleDeg })),
+    'log',
+    'linear',
+  );
+  const series: PlotSeries[] = all.map((v) => {
     const marks = stateMarks(byState.get(v.isothermId));
     return {
       id: `${v.isothermId}:vgp`,
@@ -32,8 +39,8 @@ export function vgpPlot(
       style: 'disc',
       ...(marks.faint && { faint: true, note: marks.note }),
       isothermId: v.isothermId,
-      points: v.complexModulusPa.map((g, i) => ({
-        x: inDisplay('complexModulus', g, units),
+      points: thinner.keep(v.complexModulusPa, v.phaseAngleDeg).map((i) => ({
+        x: inDisplay('complexModulus', v.complexModulusPa[i], units),
         y: v.phaseAngleDeg[i],
       })),
     };
@@ -44,7 +51,7 @@ export function vgpPlot(
   const unit = unitOf('complexModulus', units);
   return {
     id: 'van-gurp-palmen',
-    title: 'van Gurp–Palmen plot (no shift needed)',
+    title: `van Gurp–Palmen plot (no shift needed)${thinner.note()}`,
     x: { kind: 'log', label: `${prefix}${sym} (${unit})` },
     y: { kind: 'linear', label: 'phase angle δ (°)' },
     series,

@@ -1,0 +1,30 @@
+import { describe, expect, it } from 'vitest';
+import { mount } from '@vue/test-utils';
+import ModelsView from '../../../app/renderer/src/components/ModelsView.vue';
+import { fixtureAnalysis } from '../../core/report/analysis-fixture';
+
+// Tensile terms shown as shear terms are off by about three (E ≈ 3G for a rubber, DOMAIN.md §1):
+// the Models view prints the deformation next to the Prony terms and uses its symbols.
+describe('ModelsView', () => {
+  it.each([
+    ['shear', 'G(t) = Ge + Σ g_i exp(−t/τ_i)', 'E(t)'],
+    ['tension', 'E(t) = Ee + Σ E_i exp(−t/τ_i)', 'G(t)'],
+  ] as const)(
+    'ModelsView of %s data shows the Prony series with its own symbols',
+    (mode, formula, other) => {
+      const w = mount(ModelsView, { props: { analysis: fixtureAnalysis('oscillatory', mode) } });
+      const summary = w.find('[data-role="prony-summary"]').text();
+      expect(summary).toContain(`Prony series in ${mode}`);
+      expect(summary).toContain(formula);
+      expect(w.text()).not.toContain(other);
+      if (mode === 'tension') expect(summary).toMatch(/do not enter them as shear terms/);
+    },
+  );
+
+  it('ModelsView says how each model was weighted and whether it converged', () => {
+    const w = mount(ModelsView, { props: { analysis: fixtureAnalysis() } });
+    expect(w.find('[data-role="model-fit-note"]').text()).toMatch(
+      /^WLF: generalised least squares with the covariance of the shifts; converged\./,
+    );
+  });
+});
