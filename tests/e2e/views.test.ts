@@ -355,7 +355,7 @@ describe('the views of the demo', () => {
     expect(svg).toContain('(MPa)');
     expect(svg).toContain('aT·f (Hz)');
     await show({ tab: 'models', view: 'tables' });
-    expect(await page.innerText('.models-view')).toMatch(/g_i \(MPa\)/);
+    expect(await page.innerText('.models-view')).toMatch(/g_i \(MPa, shear\)/);
     await shot('view-demo-units-MPa-Hz');
     const saved = page.waitForEvent('download');
     await page.click('[data-role="save"]');

@@ -111,8 +111,6 @@ export function modelTable(a: Analysis): PlainTable {
       sig(m.r2, 4),
       sig(m.rmsResidualDecades, 2),
       `${toCelsius(m.fittedRangeK[0]).toFixed(1)} … ${toCelsius(m.fittedRangeK[1]).toFixed(1)}`,
-      m.weighting.kind === 'full-covariance' ? 'shift covariance (GLS)' : 'own s.e. only',
-      m.converged ? 'yes' : 'no',
     ]),
   );
   return {
@@ -128,8 +126,6 @@ export function modelTable(a: Analysis): PlainTable {
       'R²',
       'RMS residual (decades)',
       'fitted range (°C)',
-      'weighting',
-      'converged',
     ],
     rows,
   };
