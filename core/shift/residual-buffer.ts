@@ -20,6 +20,7 @@ export class ResidualBuffer {
     this.g = new Float64Array(cap);
     this.bin = new Float64Array(cap);
     this.lam = new Float64Array(cap);
+    this.tau = new Float64Array(cap);
   }
 
   owner = new Int32Array(0);
@@ -32,6 +33,8 @@ export class ResidualBuffer {
   g = new Float64Array(0);
   bin = new Float64Array(0);
   lam = new Float64Array(0);
+  /** Edge taper τ of each residual (residuals.ts). */
+  tau = new Float64Array(0);
 
   reset(): void {
     this.size = 0;
@@ -41,7 +44,7 @@ export class ResidualBuffer {
     const need = this.size + extra;
     if (need <= this.r.length) return;
     let cap = this.r.length;
-    while (cap < need) cap *= 4;
+    while (cap < need) cap *= 2;
     const grow = <T extends Int32Array | Float64Array>(a: T): T => {
       const b = new (a.constructor as { new (n: number): T })(cap);
       b.set(a.subarray(0, this.size));
@@ -57,5 +60,6 @@ export class ResidualBuffer {
     this.g = grow(this.g);
     this.bin = grow(this.bin);
     this.lam = grow(this.lam);
+    this.tau = grow(this.tau);
   }
 }

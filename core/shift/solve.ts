@@ -10,9 +10,11 @@
 import type { FitProblem } from './problem';
 import { parameterCount } from './problem';
 import type { ResidualBuffer } from './residual-buffer';
-import { offsetCovariance } from './covariance';
+import type { OffsetUncertainty } from './covariance';
+import { offsetUncertainty, support } from './covariance';
 import type { LinearConstraint } from './kkt';
 import { addPrior, kktStep, projectOntoConstraints } from './kkt';
+import { parameterLayout } from './layout';
 import type { NormalSink } from './normal-equations';
 import { normalAt } from './normal-walk';
 import type { RobustLoss } from './types';
@@ -36,8 +38,8 @@ export interface SolveSettings {
   /** Reused residual storage (optional). */
   buffer?: ResidualBuffer;
   /**
-   * Compute the covariance at the optimum (the costly part: a sandwich over every residual).
-   * Off for a pass that is followed by another one. @default true
+   * Compute the uncertainty at the optimum (a sandwich over every residual). Off for a pass that
+   * is followed by another one. @default true
    */
   covariance?: boolean;
 }
@@ -47,23 +49,30 @@ export interface SolveOutcome {
   converged: boolean;
   iterations: number;
   reason: string;
-  /**
-   * Covariance over the full parameter vector (zeros for fixed ones); null if singular or not
-   * asked for (see offsetCovariance()).
-   */
-  covariance: Float64Array | null;
+  /** Standard errors and covariance at θ; null if singular or not asked for (covariance.ts). */
+  uncertainty: OffsetUncertainty | null;
   /** Weighted residual variance, decades². */
   residualVariance: number;
+  /** Residuals (compared entries) at θ. */
   residualCount: number;
   objective: number;
 }
 
 /** Largest change of any offset in one iteration, decades. */
 const MAX_STEP_DECADES = 0.5;
-/** Relative decrease of the objective below which the fit has converged. */
-const REL_TOL = 1e-7;
-/** Rejected steps in a row after which no further decrease is possible. */
-const MAX_REJECTIONS = 4;
+/** Marquardt damping at the start, and its bounds (relative to the diagonal of the curvature). */
+const LAMBDA_START = 1e-4;
+const LAMBDA_MIN = 1e-12;
+/**
+ * Damping beyond which no step is possible any more: the steps are then gradient steps a
+ * millionth of a Gauss–Newton step long, so rejecting them means the fit has stalled.
+ */
+const LAMBDA_MAX = 1e6;
+/**
+ * Up to this damping a step is still essentially the Gauss–Newton step (at most half as long), so
+ * a step below the tolerance there means the optimum is reached.
+ */
+const LAMBDA_TRUSTED = 1;
 
 export function solveOffsets(
   p: FitProblem,
@@ -78,84 +87,87 @@ export function solveOffsets(
   const cons = s.constraints.filter((c) => free.some((i) => c.coef[i] !== 0));
   const nc = cons.length;
   projectOntoConstraints(theta, free, cons);
-  const evaluate = (t: Float64Array, matrix: boolean): NormalSink => {
-    return addPrior(normalAt(p, t, s.loss, s.scale, matrix), t, s.prior, s.scale);
-  };
-  let cur = evaluate(theta, true);
-  // A point that leaves the overlaps keeps costing the mean loss per point at the start, so the
-  // score (normalised by the N0 points at the start) cannot improve merely because fewer points
-  // are compared.
-  const n0 = cur.count;
-  const lostLoss = n0 > 0 ? cur.lossSum / n0 : 0;
-  const score = (k: NormalSink): number =>
-    n0 > 0 ? (k.lossSum + lostLoss * Math.max(0, n0 - k.count)) / n0 : k.objective();
-  let lambda = 1e-6;
+  const layout = parameterLayout(p, cons.map(support));
+  // ρ̄: the mean loss per compared residual at the start, charged for every residual that is not
+  // compared (normal-equations.ts), so the score neither jumps when a point enters or leaves an
+  // overlap nor improves because curves are pushed apart.
+  const probe = normalAt(p, theta, s.loss, s.scale, false);
+  const base = probe.tapered > 0 ? probe.lossSum / probe.tapered : 0;
+  const norm = probe.tapered > 0 ? probe.tapered : 1;
+  const evaluate = (t: Float64Array): NormalSink =>
+    addPrior(normalAt(p, t, s.loss, s.scale, true, layout, base), t, s.prior, s.scale);
+  let cur = evaluate(theta);
+  const score = (k: NormalSink): number => (k.lossSum - base * k.tapered) / norm;
+  let lambda = LAMBDA_START;
   let iterations = 0;
   let converged = m === 0;
-  let reason = m === 0 ? 'nothing to fit' : 'iteration limit';
-  while (!converged && iterations < s.maxIterations) {
+  let stalled = false;
+  let reason = m === 0 ? 'nothing to fit' : `iteration limit (${s.maxIterations})`;
+  let previousStep = Infinity;
+  while (!converged && !stalled && iterations < s.maxIterations) {
     iterations++;
     let accepted = false;
-    let rejections = 0;
-    while (!accepted && rejections < MAX_REJECTIONS) {
-      const step = kktStep(cur, free, cons, theta, lambda);
+    while (!accepted && !converged && !stalled) {
+      const step = kktStep(cur, s.fixed, cons, theta, lambda);
       if (!step) {
         lambda *= 10;
-        rejections++;
+        if (lambda > LAMBDA_MAX) {
+          stalled = true;
+          reason = 'stalled: the normal equations are singular';
+        }
         continue;
       }
-      const trial = Float64Array.from(theta);
       let maxStep = 0;
-      for (let k = 0; k < m; k++) maxStep = Math.max(maxStep, Math.abs(step[k]));
+      for (const i of free) maxStep = Math.max(maxStep, Math.abs(step[i]));
       // Trust region: no shift moves by more than MAX_STEP_DECADES in one iteration.
       const shrink = maxStep > MAX_STEP_DECADES ? MAX_STEP_DECADES / maxStep : 1;
-      for (let k = 0; k < m; k++) trial[free[k]] += shrink * step[k];
       maxStep *= shrink;
-      if (maxStep < s.toleranceDecades) {
-        converged = true;
-        reason = 'step below tolerance';
-        break;
-      }
-      const next = evaluate(trial, true);
-      const before = score(cur);
-      const after = score(next);
-      if (after <= before) {
+      const trusted = lambda <= LAMBDA_TRUSTED;
+      const trial = Float64Array.from(theta);
+      for (const i of free) trial[i] += shrink * step[i];
+      const next = evaluate(trial);
+      if (score(next) <= score(cur)) {
         theta.set(trial);
         cur = next;
-        lambda = Math.max(lambda / 10, 1e-12);
         accepted = true;
-        if (maxStep < s.toleranceDecades) {
+        // With linear convergence (steps shrinking by a factor q) the optimum is still about
+        // step·q/(1 − q) away: the fit stops only when that, too, is below the tolerance.
+        const q = maxStep / previousStep;
+        const remaining = q < 1 ? (maxStep * q) / (1 - q) : 0;
+        previousStep = trusted ? maxStep : Infinity;
+        if (trusted && maxStep < s.toleranceDecades && remaining < s.toleranceDecades) {
           converged = true;
           reason = 'step below tolerance';
-        } else if (before - after <= REL_TOL * before) {
-          converged = true;
-          reason = 'objective change below tolerance';
         }
+        lambda = Math.max(lambda / 10, LAMBDA_MIN);
       } else {
-        lambda *= 4;
-        rejections++;
-        if (maxStep < 3 * s.toleranceDecades) {
+        // Linear interpolation makes the mismatch piecewise smooth: within a few tolerances of
+        // the optimum a Gauss–Newton step can fail to lower it, which is the optimum at the
+        // resolution asked for.
+        if (trusted && maxStep < 3 * s.toleranceDecades) {
           converged = true;
           reason = 'rejected step below 3× tolerance';
           break;
         }
+        lambda *= 10;
+        previousStep = Infinity;
+        if (lambda > LAMBDA_MAX) {
+          stalled = true;
+          reason = `stalled: no step lowered the mismatch (last step ${maxStep.toPrecision(2)} decades)`;
+        }
       }
     }
-    if (!accepted && !converged) {
-      converged = true;
-      reason = 'no further decrease';
-    }
   }
-  const dof = Math.max(1, cur.count - m + nc);
+  const dof = Math.max(1, cur.residuals - m + nc);
   const residualVariance = cur.weightedSquares / dof;
   return {
     theta,
     converged,
     iterations,
     reason,
-    covariance: s.covariance === false ? null : offsetCovariance(p, theta, s, residualVariance),
+    uncertainty: s.covariance === false ? null : offsetUncertainty(p, theta, s, residualVariance),
     residualVariance,
-    residualCount: cur.count,
+    residualCount: cur.residuals,
     objective: cur.objective(),
   };
 }

@@ -9,7 +9,9 @@ import type { ResidualBuffer } from './residual-buffer';
 export class StatsSink {
   readonly curveSq: Float64Array;
   readonly curveW: Float64Array;
-  residuals: Float64Array = new Float64Array(0);
+  /** Standardised residuals seen so far (grown as needed; `residuals` trims). */
+  private z: Float64Array = new Float64Array(1024);
+  private size = 0;
   /** entrySum[k][d][e], entryCount[k][d][e]. */
   readonly entrySum: Float64Array[][];
   readonly entryCount: Float64Array[][];
@@ -24,9 +26,23 @@ export class StatsSink {
     this.entryCount = p.curves.map((c) => c.map((s) => new Float64Array(s.lx.length)));
   }
 
+  /** All standardised residuals consumed, z = r·√w (noise of one point). */
+  get residuals(): Float64Array {
+    return this.z.subarray(0, this.size);
+  }
+
+  /** Adds the residuals of `buf` (call once per filled buffer, e.g. per pair). */
   consume(buf: ResidualBuffer): this {
     const { r: R, w: W, bin: BIN, owner: OW, other: OT, driver: DR, entry: EN } = buf;
-    this.residuals = new Float64Array(buf.size);
+    if (this.size + buf.size > this.z.length) {
+      let cap = this.z.length;
+      while (cap < this.size + buf.size) cap *= 2;
+      const grown = new Float64Array(cap);
+      grown.set(this.z.subarray(0, this.size));
+      this.z = grown;
+    }
+    const Z = this.z;
+    let at = this.size;
     for (let m = 0; m < buf.size; m++) {
       const r = R[m];
       const b = BIN[m];
@@ -40,10 +56,11 @@ export class StatsSink {
       this.sq += q;
       this.w += b;
       const z = r * Math.sqrt(W[m]);
-      this.residuals[m] = z;
+      Z[at++] = z;
       this.entrySum[owner][DR[m]][EN[m]] += z;
       this.entryCount[owner][DR[m]][EN[m]] += 1;
     }
+    this.size = at;
     return this;
   }
 

@@ -189,6 +189,19 @@ export interface FitInfo {
   warmStart: boolean;
 }
 
+/**
+ * Covariance of the shifts of the included isotherms, for fits that weight them together (e.g.
+ * generalised least squares of WLF or Arrhenius constants on log10 aT). Relative to Tref, like
+ * the standard errors: rows and columns of locked isotherms and of an isotherm measured at Tref
+ * are 0. Its diagonal is log10aTStdErr².
+ */
+export interface ShiftCovariance {
+  /** Isotherm ids of the rows and columns: every included isotherm, in `curves` order. */
+  ids: string[];
+  /** Covariance of log10 aT, decades², ids.length × ids.length. */
+  log10aT: number[][];
+}
+
 export interface ShiftResult {
   referenceK: number;
   /** Sign convention, repeated for every consumer of the JSON. */
@@ -199,6 +212,12 @@ export interface ShiftResult {
   /** RMS of all residuals after shifting, decades. */
   rmsResidualDecades: number | null;
   checks: ShiftChecks;
+  /**
+   * Covariance of log10 aT between the included isotherms; null when it cannot be determined or
+   * when more than COVARIANCE_MAX_ISOTHERMS (1000) are included (its size grows as their number
+   * squared; the standard errors are given at any size).
+   */
+  covariance: ShiftCovariance | null;
   warnings: ShiftWarning[];
   settings: ResolvedShiftOptions;
   fit: FitInfo;

@@ -26,7 +26,7 @@ describe('offsetStdErrors()', () => {
   const out = solveOffsets(p, truth.log10aT, settings);
 
   it('offsetStdErrors() equals the square root of the full covariance diagonal', () => {
-    expect(out.covariance).toBeNull(); // not asked for
+    expect(out.uncertainty).toBeNull(); // not asked for
     const cov = offsetCovariance(p, out.theta, settings, out.residualVariance)!;
     const some = [0, 3, 9];
     const se = offsetStdErrors(p, out.theta, settings, out.residualVariance, some);
