@@ -3,6 +3,7 @@ export * from './isotherm-set';
 export * from './creep-set';
 export * from './spectrum-shapes';
 export * from './wander';
+export * from './sweep-file';
 export * from './number-text';
 export type * from './demo-types';
 export * from './demo-scenarios';
