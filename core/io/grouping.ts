@@ -90,10 +90,13 @@ const MIN_SWEEP_POINTS = 3;
  */
 const DISTINCT_SPREADS = 3;
 
-interface Sweep {
-  points: number[];
-  meanK: number;
-  sdK: number;
+interface Sweeps {
+  /** Sweep of every point. */
+  of: Int32Array;
+  count: number;
+  size: Int32Array;
+  meanK: Float64Array;
+  sdK: Float64Array;
 }
 
 /**
@@ -101,48 +104,51 @@ interface Sweep {
  * where the frequency or time turns back (a new sweep starts) or the temperature jumps by more
  * than the tolerance; in a wide table, one sweep per file and temperature column.
  */
-function sweepsOf(p: GroupingInput, toleranceK: number): Sweep[] {
-  const lists: number[][] = [];
-  const open = new Map<string, { list: number[]; dir: number }>();
-  let run: { list: number[]; dir: number } | null = null;
+function sweepsOf(p: GroupingInput, toleranceK: number): Sweeps {
+  const of = new Int32Array(p.n);
+  const wide = new Map<string, number>();
+  let count = 0;
+  let prev = -1;
+  let dir = 0;
   for (let i = 0; i < p.n; i++) {
     const f = p.file[i];
     if (p.layouts[f] === 'wide') {
       const key = `${f}:${p.temperatureK[i]}`;
-      let s = open.get(key);
-      if (!s) {
-        s = { list: [], dir: 0 };
-        open.set(key, s);
-        lists.push(s.list);
+      let id = wide.get(key);
+      if (id === undefined) {
+        id = count++;
+        wide.set(key, id);
       }
-      s.list.push(i);
+      of[i] = id;
       continue;
     }
-    const prev: number = run && run.list.length > 0 ? run.list[run.list.length - 1] : -1;
-    let fresh = run === null || prev < 0 || p.file[prev] !== f;
+    let fresh = prev < 0 || p.file[prev] !== f;
     if (!fresh) {
-      const dx = p.x[i] - p.x[prev];
-      const dir = Math.sign(dx);
+      const step = Math.sign(p.x[i] - p.x[prev]);
       fresh =
         Math.abs(p.temperatureK[i] - p.temperatureK[prev]) > toleranceK ||
-        dir === 0 ||
-        (run!.dir !== 0 && dir !== run!.dir);
-      if (!fresh && run!.dir === 0) run!.dir = dir;
+        step === 0 ||
+        (dir !== 0 && step !== dir);
+      if (!fresh && dir === 0) dir = step;
     }
     if (fresh) {
-      run = { list: [], dir: 0 };
-      lists.push(run.list);
+      count++;
+      dir = 0;
     }
-    run!.list.push(i);
+    of[i] = count - 1;
+    prev = i;
   }
-  return lists.map((points) => {
-    let sum = 0;
-    for (const i of points) sum += p.temperatureK[i];
-    const meanK = sum / points.length;
-    let sq = 0;
-    for (const i of points) sq += (p.temperatureK[i] - meanK) ** 2;
-    return { points, meanK, sdK: Math.sqrt(sq / points.length) };
-  });
+  const size = new Int32Array(count);
+  const meanK = new Float64Array(count);
+  const sdK = new Float64Array(count);
+  for (let i = 0; i < p.n; i++) {
+    size[of[i]]++;
+    meanK[of[i]] += p.temperatureK[i];
+  }
+  for (let k = 0; k < count; k++) meanK[k] /= size[k];
+  for (let i = 0; i < p.n; i++) sdK[of[i]] += (p.temperatureK[i] - meanK[of[i]]) ** 2;
+  for (let k = 0; k < count; k++) sdK[k] = Math.sqrt(sdK[k] / size[k]);
+  return { of, count, size, meanK, sdK };
 }
 
 /**
@@ -154,34 +160,53 @@ function sweepsOf(p: GroupingInput, toleranceK: number): Sweep[] {
  * tolerance-wide bands).
  */
 export function groupPoints(p: GroupingInput, toleranceK: number): PointGroups {
-  const sweeps = sweepsOf(p, toleranceK).sort((a, b) => a.meanK - b.meanK);
-  const complete = (s: Sweep) => s.points.length >= MIN_SWEEP_POINTS;
+  const sw = sweepsOf(p, toleranceK);
+  const byMean = Int32Array.from({ length: sw.count }, (_, k) => k).sort(
+    (a, b) => sw.meanK[a] - sw.meanK[b] || a - b,
+  );
+  const complete = (k: number) => sw.size[k] >= MIN_SWEEP_POINTS;
   // Clusters: runs of neighbouring sweeps (by mean temperature) that are not told apart.
-  const clusters: Sweep[][] = [];
-  for (let k = 0; k < sweeps.length; k++) {
-    const s = sweeps[k];
-    const prev = k > 0 ? sweeps[k - 1] : null;
-    const gap = prev ? s.meanK - prev.meanK : Infinity;
+  const clusterOf = new Int32Array(sw.count);
+  const clusterSize: number[] = [];
+  const clusterMean: number[] = [];
+  for (let r = 0; r < sw.count; r++) {
+    const k = byMean[r];
+    const j = r > 0 ? byMean[r - 1] : -1;
+    const gap = j >= 0 ? sw.meanK[k] - sw.meanK[j] : Infinity;
     const apart =
-      prev === null ||
-      (complete(s) && complete(prev) && gap > 0 && gap > DISTINCT_SPREADS * (s.sdK + prev.sdK)) ||
+      j < 0 ||
+      (complete(k) && complete(j) && gap > 0 && gap > DISTINCT_SPREADS * (sw.sdK[k] + sw.sdK[j])) ||
       gap > toleranceK;
-    if (apart) clusters.push([s]);
-    else clusters[clusters.length - 1].push(s);
+    if (apart) {
+      clusterSize.push(0);
+      clusterMean.push(sw.meanK[k]);
+    }
+    clusterOf[k] = clusterSize.length - 1;
+    clusterSize[clusterSize.length - 1]++;
   }
+  // Points of each cluster, by counting sort (file order kept inside a cluster).
+  const clusters = clusterSize.length;
+  const start = new Int32Array(clusters + 1);
+  for (let i = 0; i < p.n; i++) start[clusterOf[sw.of[i]] + 1]++;
+  for (let c = 0; c < clusters; c++) start[c + 1] += start[c];
+  const points = new Int32Array(p.n);
+  const fill = start.slice(0, clusters);
+  for (let i = 0; i < p.n; i++) points[fill[clusterOf[sw.of[i]]]++] = i;
   const group = new Int32Array(p.n);
   const cut: boolean[] = [];
   const minK: number[] = [];
   let separateSweeps = 0;
   let cutFromRamps = 0;
-  clusters.forEach((cluster, c) => {
-    const points = cluster.flatMap((s) => s.points);
-    const temps = Float64Array.from(points, (i) => p.temperatureK[i]).sort();
+  for (let c = 0; c < clusters; c++) {
+    const members = points.subarray(start[c], start[c + 1]);
+    const temps = new Float64Array(members.length);
+    for (let k = 0; k < members.length; k++) temps[k] = p.temperatureK[members[k]];
+    temps.sort();
     const bands = groupTemperatures(temps, toleranceK);
-    if (cluster.length === 1 && bands.length === 1) {
-      const near = (o: Sweep[] | undefined) =>
-        o !== undefined && Math.abs(o[0].meanK - cluster[0].meanK) <= toleranceK;
-      if (near(clusters[c - 1]) || near(clusters[c + 1])) separateSweeps++;
+    if (clusterSize[c] === 1 && bands.length === 1) {
+      const near = (o: number) =>
+        o >= 0 && o < clusters && Math.abs(clusterMean[o] - clusterMean[c]) <= toleranceK;
+      if (near(c - 1) || near(c + 1)) separateSweeps++;
     }
     const base = cut.length;
     for (const b of bands) {
@@ -189,8 +214,9 @@ export function groupPoints(p: GroupingInput, toleranceK: number): PointGroups {
       minK.push(b.minK);
       if (b.cut) cutFromRamps++;
     }
-    for (const i of points) group[i] = base + bandIndex(bands, p.temperatureK[i]);
-  });
+    if (bands.length === 1) for (const i of members) group[i] = base;
+    else for (const i of members) group[i] = base + bandIndex(bands, p.temperatureK[i]);
+  }
   const count = cut.length;
   return {
     group,

@@ -18,37 +18,45 @@ export function reduceToMasterCurve(
 ): AnalysisMasterCurve {
   const byId = new Map(curves.map((c) => [c.isothermId, c]));
   const present = QUANTITY_IDS.filter((q) => dataset.isotherms.some((i) => i.quantities[q]));
-  const rows: { x: number; id: string; T: number; v: number[]; outlier: boolean }[] = [];
+  // Columns in typed arrays and one index sort: a master curve of 10⁶ points is built without an
+  // object per point.
+  let total = 0;
+  const used: { iso: Dataset['isotherms'][number]; aT: number; bT: number }[] = [];
   for (const iso of dataset.isotherms) {
     const c = byId.get(iso.id);
     if (!c || !c.included || c.log10aT === null) continue;
-    const aT = 10 ** c.log10aT;
-    const bT = 10 ** (c.log10bT ?? 0);
-    const outliers = new Set(outlierPoints[iso.id] ?? []);
-    iso.x.forEach((x, i) => {
-      if (!iso.mask[i]) return;
-      rows.push({
-        x: reducedAbscissa(abscissa, x, aT),
-        id: iso.id,
-        T: iso.temperatureK,
-        outlier: outliers.has(i),
-        v: present.map((q) => {
-          const arr = iso.quantities[q];
-          return arr ? arr[i] * reductionFactor(q, aT, bT) : NaN;
-        }),
-      });
+    used.push({ iso, aT: 10 ** c.log10aT, bT: 10 ** (c.log10bT ?? 0) });
+    for (let i = 0; i < iso.x.length; i++) if (iso.mask[i]) total++;
+  }
+  const x = new Float64Array(total);
+  const owner = new Int32Array(total);
+  const point = new Int32Array(total);
+  let m = 0;
+  used.forEach(({ iso, aT }, u) => {
+    for (let i = 0; i < iso.x.length; i++) {
+      if (!iso.mask[i]) continue;
+      x[m] = reducedAbscissa(abscissa, iso.x[i], aT);
+      owner[m] = u;
+      point[m++] = i;
+    }
+  });
+  // Stable: equal abscissae keep isotherm and point order, as the sort of the rows did.
+  const order = Int32Array.from({ length: total }, (_, k) => k).sort((a, b) => x[a] - x[b] || a - b);
+  const outliers = used.map(({ iso }) => new Set(outlierPoints[iso.id] ?? []));
+  const quantities: AnalysisMasterCurve['quantities'] = {};
+  for (const q of present) {
+    const factors = used.map(({ aT, bT }) => reductionFactor(q, aT, bT));
+    quantities[q] = Array.from(order, (k) => {
+      const arr = used[owner[k]].iso.quantities[q];
+      const v = arr ? arr[point[k]] * factors[owner[k]] : NaN;
+      return Number.isFinite(v) ? v : null;
     });
   }
-  rows.sort((a, b) => a.x - b.x);
-  const quantities: AnalysisMasterCurve['quantities'] = {};
-  present.forEach((q, k) => {
-    quantities[q] = rows.map((r) => (Number.isFinite(r.v[k]) ? r.v[k] : null));
-  });
   return {
-    reducedX: rows.map((r) => r.x),
+    reducedX: Array.from(order, (k) => x[k]),
     quantities,
-    isothermId: rows.map((r) => r.id),
-    temperatureK: rows.map((r) => r.T),
-    outlier: rows.map((r) => r.outlier),
+    isothermId: Array.from(order, (k) => used[owner[k]].iso.id),
+    temperatureK: Array.from(order, (k) => used[owner[k]].iso.temperatureK),
+    outlier: Array.from(order, (k) => outliers[owner[k]].has(point[k])),
   };
 }

@@ -132,55 +132,66 @@ export class SandwichSink {
 
   /**
    * Σ_p c_p c_pᵀ / n_p in envelope storage (positions of `layout`): for each measured entry p of
-   * curve i, c_p = Σ_j b_pj (u_i − u_j) (and the same for v), n_p its point count.
+   * curve i, c_p = Σ_j b_pj (u_i − u_j) (and the same for v), n_p its point count. The products
+   * of one curve's entries are summed in a small dense matrix over the curve and its partners
+   * first, then scattered once.
    */
   meat(layout: ParameterLayout): Float64Array {
     const out = new Float64Array(layout.env.size);
     const n = this.n;
     const joint = this.p.joint;
-    const maxLen = 2 * (this.list.length + 2);
-    const idx = new Int32Array(maxLen);
-    const val = new Float64Array(maxLen);
     for (let curve = 0; curve < n; curve++) {
       const deg = this.ptr[curve + 1] - this.ptr[curve];
       if (deg === 0) continue;
       const partners = this.list.subarray(this.ptr[curve], this.ptr[curve + 1]);
+      // Local coordinates: 0 = the curve, 1..deg = its partners; v offsets after them.
+      const dim = joint ? 2 * (deg + 1) : deg + 1;
+      const local = new Float64Array(dim * dim);
+      const c = new Float64Array(dim);
       this.p.curves[curve].forEach((series, d) => {
         const h = this.bh[curve][d];
         const v = this.bv[curve][d];
         const counts = series.w;
         for (let e = 0; e < counts.length; e++) {
-          let len = 0;
           let selfH = 0;
           let selfV = 0;
+          let any = false;
           for (let q = 0; q < deg; q++) {
             const bh = h[e * deg + q];
             const bv = v ? v[e * deg + q] : 0;
-            if (bh === 0 && bv === 0) continue;
+            c[1 + q] = -bh;
             selfH += bh;
-            idx[len] = partners[q];
-            val[len++] = -bh;
-            if (v) {
+            if (joint) {
+              c[deg + 2 + q] = -bv;
               selfV += bv;
-              idx[len] = n + partners[q];
-              val[len++] = -bv;
             }
+            if (bh !== 0 || bv !== 0) any = true;
           }
-          if (len === 0) continue;
-          idx[len] = curve;
-          val[len++] = selfH;
-          if (joint) {
-            idx[len] = n + curve;
-            val[len++] = selfV;
-          }
+          if (!any) continue;
+          c[0] = selfH;
+          if (joint) c[deg + 1] = selfV;
           const inv = 1 / counts[e];
-          for (let a = 0; a < len; a++) {
-            const va = val[a] * inv;
-            // Lower triangle only: each unordered pair of parameters once.
-            for (let b = 0; b <= a; b++) out[slotIn(layout, idx[a], idx[b])] += va * val[b];
+          for (let a = 0; a < dim; a++) {
+            const ca = c[a] * inv;
+            if (ca === 0) continue;
+            const row = a * dim;
+            for (let b = 0; b <= a; b++) local[row + b] += ca * c[b];
           }
         }
       });
+      const param = (k: number): number =>
+        k === 0
+          ? curve
+          : k <= deg
+            ? partners[k - 1]
+            : k === deg + 1
+              ? n + curve
+              : n + partners[k - deg - 2];
+      for (let a = 0; a < dim; a++)
+        for (let b = 0; b <= a; b++) {
+          const val = local[a * dim + b];
+          if (val !== 0) out[slotIn(layout, param(a), param(b))] += val;
+        }
     }
     return out;
   }
