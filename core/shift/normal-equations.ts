@@ -34,16 +34,8 @@ export class NormalSink {
   readonly g: Float64Array;
   /** Where the parameters sit in `a` (null without the matrix). */
   readonly layout: ParameterLayout | null;
-  /** Σ τ·ρ(z) over the residuals, τ the edge taper (residuals.ts). */
+  /** Σ ρ(z) over the residuals. */
   lossSum = 0;
-  /** Σ τ: the residuals counted with their edge taper. */
-  tapered = 0;
-  /**
-   * Loss charged for each residual that is not compared (ρ̄, the mean loss per residual at the
-   * start of a fit): the objective is Σ τ·ρ + (1 − τ)·ρ̄, continuous as points enter or leave an
-   * overlap, and a fit cannot lower it by pushing curves apart. Enters the gradient through τ′.
-   */
-  baseLoss = 0;
   weightedSquares = 0;
   /** Measured points compared (an entry averaged from c points counts c times). */
   count = 0;
@@ -70,7 +62,7 @@ export class NormalSink {
   }
 
   consume(buf: ResidualBuffer): this {
-    const { r: R, w: W, g: G, bin: BIN, tau: TAU, owner: OW, other: OT, driver: DR } = buf;
+    const { r: R, w: W, g: G, bin: BIN, owner: OW, other: OT, driver: DR } = buf;
     const l = this.layout!;
     const a = this.a;
     const grad = this.g;
@@ -94,12 +86,10 @@ export class NormalSink {
         rho = robustRho(code, z, c);
         psiOverZ = robustWeight(code, z, c);
       }
-      const tau = TAU[m];
-      this.lossSum += tau * rho;
-      this.tapered += tau;
+      this.lossSum += rho;
       this.count += BIN[m];
       this.residuals++;
-      const wt = tau * w * psiOverZ;
+      const wt = w * psiOverZ;
       this.weightedSquares += wt * r * r;
       if (!this.withMatrix) continue;
       const i = OW[m];

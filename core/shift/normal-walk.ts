@@ -2,6 +2,12 @@
  * The normal equations straight from the merge walk, without storing residuals: the inner loop of
  * every Levenberg–Marquardt iteration. Same residuals, weights and derivatives as residuals.ts
  * (see there for the formulas); kept separate because this loop dominates the run time.
+ *
+ * During one round of the refinement the points compared are frozen (comparedSets): a point that
+ * would move just past the end of the other curve is compared with that curve's end segment
+ * extended, instead of dropping out. Otherwise the mismatch would jump whenever a point enters or
+ * leaves an overlap — with every isotherm on the same frequency grid and small shifts between
+ * neighbours, the end points sit right at that edge — and the refinement would stall there.
  */
 import type { ParameterLayout } from './layout';
 import type { FitProblem } from './problem';
@@ -10,7 +16,6 @@ import { NormalSink } from './normal-equations';
 import { lowerBound as lowerBoundImport, upperBound as upperBoundImport } from './series';
 import type { RobustLoss } from './types';
 import { addPairCross as crossImport, addPairOuter as outerImport } from './pair-scatter';
-import { EDGE_TAPER_DECADES } from './residuals';
 
 // Local bindings (see residuals.ts).
 const lowerBound = lowerBoundImport;
@@ -35,7 +40,10 @@ function walkInto(
   d: number,
   theta: ArrayLike<number>,
   sink: NormalSink,
+  first: number,
+  end: number,
 ): void {
+  if (end <= first) return;
   const a = p.curves[owner][d];
   const b = p.curves[other][d];
   const n = p.curves.length;
@@ -55,18 +63,10 @@ function walkInto(
   const ay = a.y;
   const aw = a.w;
   const aInvW = a.invW;
-  const first = lowerBound(ax, bx[0] - shift);
-  const end = upperBound(ax, bx[last] - shift);
-  if (end <= first) return;
   const sigma = p.sigma;
   const huber = sink.isHuber;
   const c = sink.scale;
-  const base = sink.baseLoss;
-  const lo = bx[0];
-  const hi = bx[last];
-  const invTaper = 1 / EDGE_TAPER_DECADES;
   let lossSum = 0;
-  let tapered = 0;
   let count = 0;
   let wsq = 0;
   let gr = 0;
@@ -86,15 +86,6 @@ function walkInto(
     const r = ay[e] + yOff - (by[k] + slope * dq);
     const z = r * Math.sqrt(w);
     const az = Math.abs(z);
-    // Edge taper τ (residuals.ts) and its derivative along q.
-    const fromLo = (q - lo) * invTaper;
-    const fromHi = (hi - q) * invTaper;
-    let tau = 1;
-    let dTau = 0;
-    if (fromLo < 1 || fromHi < 1) {
-      tau = fromLo < fromHi ? fromLo : fromHi;
-      dTau = fromLo < fromHi ? invTaper : -invTaper;
-    }
     // Gradient weight ψ(z)/z; curvature the same inside Huber's corner and for Cauchy (the
     // iteratively reweighted least-squares step, which never increases either loss: both are
     // majorised by the reweighted quadratic, Huber 1981, Robust Statistics, §7.8), and
@@ -112,20 +103,17 @@ function walkInto(
       psi = sink.weight(z);
       curv = psi;
     }
-    lossSum += tau * rho;
-    tapered += tau;
+    lossSum += rho;
     count += aw[e];
-    const wt = tau * w * psi;
-    const wc = tau * w * curv;
+    const wt = w * psi;
+    const wc = w * curv;
     wsq += wt * r * r;
     const g = alpha - sigma * slope;
-    // ∂q/∂h_owner = σ: the taper's share of the gradient (its curvature is left out).
     // The weight depends on the offset too (through λ): ∂w/∂h_owner = −w²·∂f/∂λ·σ/h with
-    // f = 1/c₀ + (1−λ)²/c₁ + λ²/c₂, which adds −½·τ·ψ/z·w²·r²·∂f/∂λ·σ/h. Without it the computed
+    // f = 1/c₀ + (1−λ)²/c₁ + λ²/c₂, which adds −½·ψ/z·w²·r²·∂f/∂λ·σ/h. Without it the computed
     // gradient vanishes a little away from the optimum and the refinement stalls short of it.
     const dfdLam = 2 * (lam * bInvW[k + 1] - lam1 * bInvW[k]);
-    gr +=
-      wt * g * r + dTau * sigma * (rho - base) - 0.5 * wt * w * r * r * dfdLam * sigma * bInvH[k];
+    gr += wt * g * r - 0.5 * wt * w * r * r * dfdLam * sigma * bInvH[k];
     // The curvature takes the noise-damped slope: the squared slope of a noisy segment overstates
     // it (by the slope's noise variance), which would shorten every step and slow the
     // convergence to a crawl on dense data; the gradient keeps the exact slope, so the optimum is
@@ -139,7 +127,6 @@ function walkInto(
     }
   }
   sink.lossSum += lossSum;
-  sink.tapered += tapered;
   sink.count += count;
   sink.residuals += end - first;
   sink.weightedSquares += wsq;
@@ -162,26 +149,55 @@ function walkInto(
   }
 }
 
-/** Normal equations (or only the objective) at θ over all candidate pairs and drivers. */
+/**
+ * The points compared at θ, frozen for one round of the refinement: per candidate pair, driver
+ * and direction (owner i, then owner j) the range [first, end) of the owner's entries inside the
+ * other curve's range, or an empty range for both directions when the pair's overlap holds fewer
+ * than minOverlapPoints entries. Layout: ((pair·drivers + d)·2 + direction)·2.
+ */
+export function comparedSets(p: FitProblem, theta: ArrayLike<number>): Int32Array {
+  const nd = p.alpha.length;
+  const out = new Int32Array(p.pairs.length * nd * 2);
+  for (let q = 0; q < p.pairs.length; q += 2) {
+    const i = p.pairs[q];
+    const j = p.pairs[q + 1];
+    for (let d = 0; d < nd; d++) {
+      if (pairOverlap(p, i, j, d, theta) < p.minOverlapPoints) continue;
+      const at = ((q / 2) * nd + d) * 4;
+      const shift = p.sigma * (theta[i] - theta[j]);
+      const a = p.curves[i][d].lx;
+      const b = p.curves[j][d].lx;
+      out[at] = lowerBound(a, b[0] - shift);
+      out[at + 1] = upperBound(a, b[b.length - 1] - shift);
+      out[at + 2] = lowerBound(b, a[0] + shift);
+      out[at + 3] = upperBound(b, a[a.length - 1] + shift);
+    }
+  }
+  return out;
+}
+
+/**
+ * Normal equations (or only the objective) at θ over all candidate pairs and drivers, comparing
+ * the points of `sets` (comparedSets at the start of the round).
+ */
 export function normalAt(
   p: FitProblem,
   theta: ArrayLike<number>,
   loss: RobustLoss,
   scale: number,
   withMatrix: boolean,
-  layout: ParameterLayout | null = null,
-  baseLoss = 0,
+  layout: ParameterLayout | null,
+  sets: Int32Array,
 ): NormalSink {
   const sink = new NormalSink(p, loss, scale, withMatrix, layout);
-  sink.baseLoss = baseLoss;
   const nd = p.alpha.length;
   for (let q = 0; q < p.pairs.length; q += 2) {
     const i = p.pairs[q];
     const j = p.pairs[q + 1];
     for (let d = 0; d < nd; d++) {
-      if (pairOverlap(p, i, j, d, theta) < p.minOverlapPoints) continue;
-      walkInto(p, i, j, d, theta, sink);
-      walkInto(p, j, i, d, theta, sink);
+      const at = ((q / 2) * nd + d) * 4;
+      walkInto(p, i, j, d, theta, sink, sets[at], sets[at + 1]);
+      walkInto(p, j, i, d, theta, sink, sets[at + 2], sets[at + 3]);
     }
   }
   return sink;

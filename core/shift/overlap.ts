@@ -81,6 +81,6 @@ export function overlapMismatch(prepared: PreparedOverlap, log10aT: ArrayLike<nu
   prepared.hasPartner.forEach((h, k) => {
     if (h && !touched[k]) penalty += NO_OVERLAP_PENALTY;
   });
-  const mean = sink.tapered > 0 ? (2 * sink.lossSum) / sink.tapered : 0;
+  const mean = sink.residuals > 0 ? (2 * sink.lossSum) / sink.residuals : 0;
   return mean + penalty;
 }

@@ -8,13 +8,15 @@
  * up to eleven isotherms): isotherms far apart in temperature overlap little or not at all, and
  * comparing every pair would make the work grow as the square of their number. An isotherm that
  * overlaps none of those neighbours is paired with the nearest one further out that it overlaps,
- * on each side.
+ * on each side, up to EXTENDED_POSITIONS away (so a set in which nothing overlaps is recognised in
+ * time proportional to its size).
  */
 import { temperatureOrder } from './layout';
 import type { FitProblem } from './problem';
 import { countInRange } from './series';
 
 export const NEIGHBOUR_POSITIONS = 10;
+export const EXTENDED_POSITIONS = 50;
 
 function canOverlap(p: FitProblem, i: number, j: number): boolean {
   let shared = 0;
@@ -47,12 +49,12 @@ export function candidatePairs(p: FitProblem, positions = NEIGHBOUR_POSITIONS): 
   for (let r = 0; r < n; r++) {
     const i = order[r];
     if (partnered[i]) continue;
-    for (let t = r + positions + 1; t < n; t++)
+    for (let t = r + positions + 1; t < Math.min(n, r + EXTENDED_POSITIONS + 1); t++)
       if (canOverlap(p, i, order[t])) {
         add(i, order[t]);
         break;
       }
-    for (let t = r - positions - 1; t >= 0; t--)
+    for (let t = r - positions - 1; t >= Math.max(0, r - EXTENDED_POSITIONS); t--)
       if (canOverlap(p, i, order[t])) {
         add(i, order[t]);
         break;

@@ -20,7 +20,6 @@ export class ResidualBuffer {
     this.g = new Float64Array(cap);
     this.bin = new Float64Array(cap);
     this.lam = new Float64Array(cap);
-    this.tau = new Float64Array(cap);
   }
 
   owner = new Int32Array(0);
@@ -33,8 +32,6 @@ export class ResidualBuffer {
   g = new Float64Array(0);
   bin = new Float64Array(0);
   lam = new Float64Array(0);
-  /** Edge taper τ of each residual (residuals.ts). */
-  tau = new Float64Array(0);
 
   reset(): void {
     this.size = 0;
@@ -60,6 +57,5 @@ export class ResidualBuffer {
     this.g = grow(this.g);
     this.bin = grow(this.bin);
     this.lam = grow(this.lam);
-    this.tau = grow(this.tau);
   }
 }

@@ -24,15 +24,6 @@ const upperBound = upperBoundImport;
  * points midway between the other curve's points (generalised least squares removes it).
  * g = ∂r/∂h_owner; the interpolant is (1 − λ)·y_other[k] + λ·y_other[k + 1].
  */
-/**
- * Points compared within this distance of the end of the other curve's range count only in part:
- * τ = distance / EDGE_TAPER_DECADES, 1 further in. A point that enters or leaves an overlap then
- * changes the mismatch continuously, so the refinement sees no jumps (decades; a fiftieth of a
- * decade is well below the spacing of sparse data and about a tenth of typical shifts between
- * neighbouring isotherms).
- */
-export const EDGE_TAPER_DECADES = 0.02;
-
 /** Entries of `a` whose abscissa shifted by `shift` falls within b's range. */
 function overlapCount(a: FitSeries, b: FitSeries, shift: number): number {
   const lo = b.lx[0] - shift;
@@ -99,14 +90,12 @@ function walk(
   if (end <= first) return;
   buf.reserve(end - first);
   let m = buf.size;
-  const invTaper = 1 / EDGE_TAPER_DECADES;
   const {
     r: R,
     w: W,
     g: G,
     bin: BIN,
     lam: LAM,
-    tau: TAU,
     owner: OW,
     other: OT,
     driver: DR,
@@ -127,7 +116,6 @@ function walk(
     G[m] = alpha - sigma * gs;
     BIN[m] = a.w[e];
     LAM[m] = lam;
-    TAU[m] = Math.min(1, (q - lo) * invTaper, (hi - q) * invTaper);
     OW[m] = owner;
     OT[m] = other;
     DR[m] = d;

@@ -73,7 +73,6 @@ export class SandwichSink {
       entry: EN,
       knot: KN,
       lam: LAM,
-      tau: TAU,
     } = buf;
     const n = this.n;
     const nd = this.p.alpha.length;
@@ -112,7 +111,7 @@ export class SandwichSink {
       const e = EN[m] * ownStride + ownSlot;
       const k = KN[m] * othStride + othSlot;
       const lam = LAM[m];
-      const wt = TAU[m] * w * robustWeight(code, r * Math.sqrt(w), scale);
+      const wt = w * robustWeight(code, r * Math.sqrt(w), scale);
       // Score contribution wt·r·∇r with ∇r = g (u_owner − u_other) [+ β (v_owner − v_other)].
       // r = e_owner − (1 − λ) e_k − λ e_k+1 + …; a knot of `other` enters with the opposite sign,
       // and (u_owner − u_other) = −(u_other − u_owner), so both knots get +coef in their own frame.

@@ -16,7 +16,7 @@ import type { LinearConstraint } from './kkt';
 import { addPrior, kktStep, projectOntoConstraints } from './kkt';
 import { parameterLayout } from './layout';
 import type { NormalSink } from './normal-equations';
-import { normalAt } from './normal-walk';
+import { comparedSets, normalAt } from './normal-walk';
 import type { RobustLoss } from './types';
 
 export type { LinearConstraint } from './kkt';
@@ -88,23 +88,93 @@ export function solveOffsets(
   const nc = cons.length;
   projectOntoConstraints(theta, free, cons);
   const layout = parameterLayout(p, cons.map(support));
-  // ρ̄: the mean loss per compared residual at the start, charged for every residual that is not
-  // compared (normal-equations.ts), so the score neither jumps when a point enters or leaves an
-  // overlap nor improves because curves are pushed apart.
-  const probe = normalAt(p, theta, s.loss, s.scale, false);
-  const base = probe.tapered > 0 ? probe.lossSum / probe.tapered : 0;
-  const norm = probe.tapered > 0 ? probe.tapered : 1;
-  const evaluate = (t: Float64Array): NormalSink =>
-    addPrior(normalAt(p, t, s.loss, s.scale, true, layout, base), t, s.prior, s.scale);
+  const evaluate = (t: Float64Array, sets: Int32Array): NormalSink =>
+    addPrior(normalAt(p, t, s.loss, s.scale, true, layout, sets), t, s.prior, s.scale);
+  // Rounds: the points compared are frozen within one (normal-walk.ts) and worked out afresh at
+  // its optimum; the fit ends when a round starts and ends with the same points compared.
+  let sets = comparedSets(p, theta);
+  let iterations = 0;
+  let outcome: RoundOutcome = {
+    converged: m === 0,
+    reason: m === 0 ? 'nothing to fit' : `iteration limit (${s.maxIterations})`,
+    iterations: 0,
+    cur: evaluate(theta, sets),
+  };
+  for (let round = 1; m > 0; round++) {
+    const before = Float64Array.from(theta);
+    outcome = refineRound(theta, s, free, cons, s.maxIterations - iterations, (t) =>
+      evaluate(t, sets),
+    );
+    iterations += outcome.iterations;
+    if (!outcome.converged) break;
+    const next = comparedSets(p, theta);
+    if (sameSets(next, sets)) break;
+    let moved = 0;
+    for (const i of free) moved = Math.max(moved, Math.abs(theta[i] - before[i]));
+    sets = next;
+    outcome.cur = evaluate(theta, sets);
+    if (round >= MAX_ROUNDS) {
+      if (moved >= s.toleranceDecades) {
+        outcome.converged = false;
+        outcome.reason = `the points compared still changed after ${MAX_ROUNDS} rounds (last round moved ${moved.toPrecision(2)} decades)`;
+      }
+      break;
+    }
+    if (iterations >= s.maxIterations) {
+      outcome.converged = false;
+      outcome.reason = `iteration limit (${s.maxIterations})`;
+      break;
+    }
+  }
+  const { converged, reason, cur } = outcome;
+  const dof = Math.max(1, cur.residuals - m + nc);
+  const residualVariance = cur.weightedSquares / dof;
+  return {
+    theta,
+    converged,
+    iterations,
+    reason,
+    uncertainty: s.covariance === false ? null : offsetUncertainty(p, theta, s, residualVariance),
+    residualVariance,
+    residualCount: cur.residuals,
+    objective: cur.objective(),
+  };
+}
+
+/** Rounds of frozen compared points before the fit stops (normally 1–2 suffice). */
+const MAX_ROUNDS = 4;
+
+function sameSets(a: Int32Array, b: Int32Array): boolean {
+  for (let k = 0; k < a.length; k++) if (a[k] !== b[k]) return false;
+  return true;
+}
+
+interface RoundOutcome {
+  converged: boolean;
+  reason: string;
+  iterations: number;
+  /** Normal equations at the final θ. */
+  cur: NormalSink;
+}
+
+/** Levenberg–Marquardt iterations on one frozen set of compared points; updates θ in place. */
+function refineRound(
+  theta: Float64Array,
+  s: SolveSettings,
+  free: number[],
+  cons: LinearConstraint[],
+  maxIterations: number,
+  evaluate: (t: Float64Array) => NormalSink,
+): RoundOutcome {
   let cur = evaluate(theta);
-  const score = (k: NormalSink): number => (k.lossSum - base * k.tapered) / norm;
+  const score = (k: NormalSink): number => k.lossSum;
   let lambda = LAMBDA_START;
   let iterations = 0;
-  let converged = m === 0;
+  let converged = false;
   let stalled = false;
-  let reason = m === 0 ? 'nothing to fit' : `iteration limit (${s.maxIterations})`;
+  let reason = `iteration limit (${s.maxIterations})`;
   let previousStep = Infinity;
-  while (!converged && !stalled && iterations < s.maxIterations) {
+  while (!converged && !stalled && iterations < maxIterations) {
     iterations++;
     let accepted = false;
     while (!accepted && !converged && !stalled) {
@@ -158,16 +228,5 @@ export function solveOffsets(
       }
     }
   }
-  const dof = Math.max(1, cur.residuals - m + nc);
-  const residualVariance = cur.weightedSquares / dof;
-  return {
-    theta,
-    converged,
-    iterations,
-    reason,
-    uncertainty: s.covariance === false ? null : offsetUncertainty(p, theta, s, residualVariance),
-    residualVariance,
-    residualCount: cur.residuals,
-    objective: cur.objective(),
-  };
+  return { converged, reason, iterations, cur };
 }

@@ -18,17 +18,14 @@ const aTs = (r: ShiftResult): (number | null)[] => r.curves.map((c) => c.log10aT
 
 describe('shiftIsotherms() on creep data', () => {
   // The bounds of issue 3 for relaxation data, applied to creep: 0.02 decades at 2 % noise;
-  // 0.05 decades at 8 % noise with 30 %-noise early points on two isotherms — here 0.055: about
-  // one seed in forty exceeds 0.05 with this engine and with the previous one alike (40 seeds,
-  // WLF / Arrhenius: previous engine max 0.048 / 0.052, this one 0.052 / 0.055, mean 0.029 for
-  // both), and seed 2 of these five is one of them.
+  // 0.05 decades at 8 % noise with 30 %-noise early points on two isotherms.
   const row = (c: CreepCase, noise: number, disturbed: boolean, tol: number) =>
     [c.name, noise * 100, disturbed ? ' + disturbed early points' : '', tol, c] as const;
   it.each([
     row(CREEP_WLF, 0.02, false, 0.02),
     row(CREEP_ARRHENIUS, 0.02, false, 0.02),
-    row(CREEP_WLF, 0.08, true, 0.055),
-    row(CREEP_ARRHENIUS, 0.08, true, 0.055),
+    row(CREEP_WLF, 0.08, true, 0.05),
+    row(CREEP_ARRHENIUS, 0.08, true, 0.05),
   ])(
     'shiftIsotherms() recovers log10 aT of %s (%s %% noise%s) within %s decades',
     (_name, noisePercent, disturbedText, tol, c) => {
