@@ -166,8 +166,12 @@ export function defaultReferenceK(temperaturesK: readonly number[]): number {
       'No isotherm left to pick a reference temperature from',
       'referenceTemperatureK',
     );
-  const lo = Math.min(...temperaturesK);
-  const hi = Math.max(...temperaturesK);
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const t of temperaturesK) {
+    lo = Math.min(lo, t);
+    hi = Math.max(hi, t);
+  }
   const mid = (lo + hi) / 2;
   let best = temperaturesK[0];
   for (const t of temperaturesK) if (Math.abs(t - mid) < Math.abs(best - mid) - 1e-9) best = t;
