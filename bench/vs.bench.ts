@@ -103,6 +103,26 @@ function timed(command: string, args: string[]): ProcessRun {
   };
 }
 
+/** `thermoshift build PATH --tref 190 --vertical density … --json --quiet` plus `extra`. */
+function buildArgs(path: string, extra: string[]): string[] {
+  return [
+    join(ROOT, 'bin/thermoshift.mjs'),
+    'build',
+    path,
+    '--tref',
+    String(REFERENCE_C),
+    '--vertical',
+    'density',
+    '--density',
+    String(DENSITY),
+    '--expansion',
+    String(EXPANSION),
+    ...extra,
+    '--json',
+    '--quiet',
+  ];
+}
+
 function fastest(runs: number, make: () => ProcessRun): ProcessRun {
   let best: ProcessRun | null = null;
   for (let i = 0; i < runs; i++) {
@@ -204,22 +224,10 @@ export async function run(): Promise<void> {
       const path = join(dir, `vs-${c.label.replace(/[^0-9a-zA-Z]+/g, '-')}.csv`);
       writeFileSync(path, file.text);
       const ts = fastest(repeat, () =>
-        timed(process.execPath, [
-          join(ROOT, 'bin/thermoshift.mjs'),
-          'build',
-          path,
-          '--tref',
-          String(REFERENCE_C),
-          '--vertical',
-          'density',
-          '--density',
-          String(DENSITY),
-          '--expansion',
-          String(EXPANSION),
-          ...(groupTolerance ? ['--group-tolerance', groupTolerance] : []),
-          '--json',
-          '--quiet',
-        ]),
+        timed(
+          process.execPath,
+          buildArgs(path, groupTolerance ? ['--group-tolerance', groupTolerance] : []),
+        ),
       );
       const py = fastest(repeat, () =>
         timed(PYTHON, [
@@ -315,31 +323,21 @@ function big(dir: string): void {
     const file = vsFile(c);
     const path = join(dir, `big-${c.isotherms}.csv`);
     writeFileSync(path, file.text);
-    const ts = timed(process.execPath, [
-      join(ROOT, 'bin/thermoshift.mjs'),
-      'build',
-      path,
-      '--tref',
-      String(REFERENCE_C),
-      '--vertical',
-      'density',
-      '--density',
-      String(DENSITY),
-      '--expansion',
-      String(EXPANSION),
-      ...extra,
-      '--json',
-      '--quiet',
-    ]);
+    const ts = timed(process.execPath, buildArgs(path, extra));
     let summary = `exit ${ts.status}: ${ts.stderr.split('\n').slice(-4).join(' ').slice(0, 160)}`;
     if (ts.status === 0) {
       const s = JSON.parse(ts.stdout) as ThermoshiftSummary;
+      // Over the isotherms that got a shift (a few may overlap nothing).
+      const shifted = s.curves.filter((cv) => cv.log10aT !== null);
       const err = maxError(
-        s.curves.map((cv) => ({ temperatureC: cv.temperature, log10aT: cv.log10aT })),
-        file.temperaturesC,
-        file.log10aT,
+        shifted.map((cv) => ({ temperatureC: cv.temperature, log10aT: cv.log10aT })),
+        shifted.map((cv) => cv.temperature),
+        shifted.map(
+          (cv) =>
+            file.log10aT[file.temperaturesC.findIndex((t) => Math.abs(t - cv.temperature) < 0.01)],
+        ),
       );
-      summary = `${s.curves.length} isotherms, max |Δlog10 aT| ${f(err, 4)}; ${countCodes(s.warnings.map((w) => w.code))}`;
+      summary = `${s.curves.length} isotherms (${shifted.length} shifted), max |Δlog10 aT| ${f(err, 4)}; ${countCodes(s.warnings.map((w) => w.code))}`;
     }
     console.log(
       `${c.label.padEnd(24)} whole process ${f(ts.seconds)} s, peak ${f(ts.peakMB, 0)} MB${extra.length ? ` (${extra.join(' ')})` : ''}; ${summary}`,

@@ -66,13 +66,25 @@ export interface EnvelopeFactor {
 
 /**
  * A = L D Lᵀ without pivoting (the matrices here are positive definite). A pivot at or below
- * `relativeTiny` × the largest diagonal entry marks the matrix singular.
+ * `relativeTiny` × the largest diagonal entry marks the matrix singular. `inPlace` overwrites `a`
+ * with the factor instead of copying it.
  */
-export function ldlFactor(e: Envelope, a: Float64Array, relativeTiny = 1e-13): EnvelopeFactor {
-  const ld = Float64Array.from(a);
-  const { n, first, start } = e;
+/** Largest |diagonal entry| of `a`. */
+function diagonalScale(e: Envelope, a: Float64Array): number {
   let scale = 0;
-  for (let r = 0; r < n; r++) scale = Math.max(scale, Math.abs(a[start[r] + r - first[r]]));
+  for (let r = 0; r < e.n; r++) scale = Math.max(scale, Math.abs(a[diagonalSlot(e, r)]));
+  return scale;
+}
+
+export function ldlFactor(
+  e: Envelope,
+  a: Float64Array,
+  relativeTiny = 1e-13,
+  inPlace = false,
+): EnvelopeFactor {
+  const scale = diagonalScale(e, a);
+  const ld = inPlace ? a : Float64Array.from(a);
+  const { n, first, start } = e;
   const tiny = scale * relativeTiny;
   let singular = n > 0 && !(scale > 0);
   for (let i = 0; i < n; i++) {
@@ -153,9 +165,7 @@ export function inverseDiagonals(
   const l0 = Float64Array.from(h);
   const l1 = new Float64Array(e.size);
   for (let k = 0; k < e.size; k++) l1[k] = -b[k];
-  let scale = 0;
-  for (let r = 0; r < n; r++) scale = Math.max(scale, Math.abs(h[start[r] + r - first[r]]));
-  const tiny = scale * 1e-13;
+  const tiny = diagonalScale(e, h) * 1e-13;
   for (let i = 0; i < n; i++) {
     const fi = first[i];
     const si = start[i] - fi;

@@ -82,8 +82,8 @@ export interface ConstrainedSystem {
   layout: ParameterLayout;
   /** 1 at the envelope positions of fixed parameters. */
   fixedAt: Uint8Array;
-  /** The matrix H that was factored (envelope storage). */
-  h: Float64Array;
+  /** The matrix H that was factored (envelope storage); null unless asked to keep it. */
+  h: Float64Array | null;
   factor: EnvelopeFactor;
   /** Constraint vectors over the free parameters, in envelope positions. */
   c: Float64Array[];
@@ -103,6 +103,7 @@ export function constrainedSystem(
   fixed: Uint8Array,
   cons: LinearConstraint[],
   lambda: number,
+  keepMatrix = false,
 ): ConstrainedSystem | null {
   const layout = sink.layout!;
   const { env, pos } = layout;
@@ -141,7 +142,7 @@ export function constrainedSystem(
       const s0 = env.start[r] - f;
       for (let col = f; col <= r; col++) if (v[col] !== 0) h[s0 + col] += rho * v[r] * v[col];
     }
-  const factor = ldlFactor(env, h);
+  const factor = ldlFactor(env, h, 1e-13, !keepMatrix);
   if (factor.singular) return null;
   const y = c.map((v) => ldlSolve(factor, v));
   let s: LuFactors | null = null;
@@ -152,7 +153,7 @@ export function constrainedSystem(
     s = luFactor(sm, nc);
     if (s.singular) return null;
   }
-  return { layout, fixedAt, h, factor, c, y, s, rho };
+  return { layout, fixedAt, h: keepMatrix ? h : null, factor, c, y, s, rho };
 }
 
 function dot(a: ArrayLike<number>, b: ArrayLike<number>): number {
@@ -233,7 +234,7 @@ export function sandwichOf(
   cons: LinearConstraint[],
   meat: Float64Array,
 ): Sandwich | null {
-  const sys = constrainedSystem(sink, fixed, cons, 0);
+  const sys = constrainedSystem(sink, fixed, cons, 0, true);
   if (!sys) return null;
   const { env, pos } = sys.layout;
   const n = env.n;
@@ -244,7 +245,7 @@ export function sandwichOf(
     const s0 = env.start[r] - f;
     for (let c = f; c <= r; c++) if (fixedAt[r] || fixedAt[c]) b[s0 + c] = 0;
   }
-  const inv = inverseDiagonals(env, sys.h, b);
+  const inv = inverseDiagonals(env, sys.h!, b);
   if (!inv) return null;
   const nc = sys.c.length;
   // T = H⁻¹ B Y, G = Yᵀ B Y, and the nc × nc products with S⁻¹.

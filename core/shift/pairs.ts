@@ -36,10 +36,17 @@ function canOverlap(p: FitProblem, i: number, j: number): boolean {
 export function candidatePairs(p: FitProblem, positions = NEIGHBOUR_POSITIONS): Int32Array {
   const n = p.curves.length;
   const order = temperatureOrder(p);
-  const keys: number[] = [];
+  // Pairs as keys min·n + max in a growing typed array, sorted (and made unique) at the end.
+  let keys = new Float64Array(Math.max(16, n * Math.min(positions, n)));
+  let count = 0;
   const partnered = new Uint8Array(n);
   const add = (a: number, b: number) => {
-    keys.push(Math.min(a, b) * n + Math.max(a, b));
+    if (count === keys.length) {
+      const grown = new Float64Array(2 * keys.length);
+      grown.set(keys);
+      keys = grown;
+    }
+    keys[count++] = Math.min(a, b) * n + Math.max(a, b);
     partnered[a] = 1;
     partnered[b] = 1;
   };
@@ -60,13 +67,13 @@ export function candidatePairs(p: FitProblem, positions = NEIGHBOUR_POSITIONS): 
         break;
       }
   }
-  const sorted = [...new Set(keys)].sort((a, b) => a - b);
-  const out = new Int32Array(2 * sorted.length);
-  sorted.forEach((key, q) => {
-    out[2 * q] = Math.floor(key / n);
-    out[2 * q + 1] = key % n;
-  });
-  return out;
+  const sorted = keys.subarray(0, count).sort();
+  const out: number[] = [];
+  for (let q = 0; q < count; q++) {
+    if (q > 0 && sorted[q] === sorted[q - 1]) continue;
+    out.push(Math.floor(sorted[q] / n), sorted[q] % n);
+  }
+  return Int32Array.from(out);
 }
 
 /** Connected groups of curves over the candidate pairs (union–find), as a group label per curve. */

@@ -2,8 +2,8 @@ import { readFileSync } from 'node:fs';
 import { describe, it, expect } from 'vitest';
 import { bandIndex, groupTemperatures } from '../../../core/io/grouping';
 import { importFiles } from '../../../core/io';
-import { sweepFileText, syntheticIsotherms } from '../../../core/synthetic';
-import { ARRHENIUS_MELT, MELT } from '../shift/fixtures';
+import { sweepFileText } from '../../../core/synthetic';
+import { inventedMelt } from '../shift/fixtures';
 
 const c = (t: number) => t + 273.15;
 
@@ -42,22 +42,11 @@ describe('groupTemperatures()', () => {
 
 describe('groupPoints() through importFiles()', () => {
   // Invented melt measured as a lab exports it: complete sweeps one after another (core/synthetic).
-  const sweeps = (temperaturesK: number[], wanderK: number, pointsPerDecade = 5) =>
-    sweepFileText(
-      syntheticIsotherms({
-        testKind: 'oscillatory',
-        deformation: 'shear',
-        referenceK: 463.15,
-        temperaturesK,
-        components: [{ prony: MELT, law: ARRHENIUS_MELT }],
-        xMin: 0.1,
-        xMax: 100,
-        pointsPerDecade,
-        relativeNoise: 0.02,
-        seed: 4,
-      }).dataset,
-      { wanderK, seed: 9 },
-    );
+  const sweeps = (temperaturesK: number[], wanderK: number) =>
+    sweepFileText(inventedMelt({ temperaturesK, pointsPerDecade: 5, seed: 4 }).dataset, {
+      wanderK,
+      seed: 9,
+    });
 
   it('groupPoints() keeps 200 complete sweeps 0.4 K apart separate with the default 1 K tolerance', () => {
     const temps = Array.from({ length: 200 }, (_, k) => c(190 + 0.4 * k));

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import type { Dataset } from '../../../core/data/types';
-import { buildProblem } from '../../../core/shift/build-problem';
 import { candidatePairs, NEIGHBOUR_POSITIONS } from '../../../core/shift/pairs';
 import { startingOffsets } from '../../../core/shift/start';
+import { horizontalProblem as problem } from './fixtures';
 
 /** Isotherms of G′ = G″ = level·ω^0.5 at the given temperatures (invented, noise-free). */
 function powerLaw(levels: number[], temperaturesK: number[]): Dataset {
@@ -28,16 +28,6 @@ function powerLaw(levels: number[], temperaturesK: number[]): Dataset {
     metadata: {},
   };
 }
-
-const problem = (d: Dataset) =>
-  buildProblem(d, {
-    active: d.isotherms.map((_, k) => k),
-    drivers: ['storageModulus', 'lossModulus'],
-    fixedLog10bT: null,
-    joint: false,
-    minOverlapPoints: 4,
-    maxPointsPerDecade: 40,
-  });
 
 const pairList = (pairs: Int32Array) =>
   Array.from({ length: pairs.length / 2 }, (_, q) => [pairs[2 * q], pairs[2 * q + 1]]);
