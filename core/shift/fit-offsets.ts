@@ -17,6 +17,7 @@ import { offsetUncertainty } from './covariance';
 import { solveOffsets } from './solve';
 import { startingOffsets } from './start';
 import { StatsSink } from './stats-sink';
+import { studentTQuantile } from '../models/student-t';
 import type { FitInfo, ResolvedShiftOptions, RobustLoss } from './types';
 
 /** Cauchy tuning constant for 95 % efficiency under normal errors (Holland & Welsch 1977). */
@@ -102,6 +103,23 @@ function robustScale(loss: RobustLoss, residuals: ArrayLike<number>): number {
   const sigma = MAD_TO_SIGMA * medianAbs(residuals);
   const k = loss === 'cauchy' ? CAUCHY_K : HUBER_K;
   return Math.max(MIN_SCALE_DECADES, Number.isFinite(sigma) ? k * sigma : MIN_SCALE_DECADES);
+}
+
+/**
+ * Chance that noise alone makes any entry of a data set look like an outlier (normal errors):
+ * the threshold grows with the number of entries compared, as a Bonferroni bound (Miller,
+ * Simultaneous Statistical Inference, 2nd ed., 1981, §1.3), so 10⁵ good entries are not left with
+ * a handful of false flags (at 4 standard deviations about six would be).
+ */
+const FALSE_FLAG_CHANCE = 0.01;
+
+/** The threshold in robust standard deviations: at least `threshold`, more for many entries. */
+function outlierThresholdFor(threshold: number, stats: StatsSink): number {
+  let entries = 0;
+  for (const byDriver of stats.entryCount)
+    for (const c of byDriver) for (const v of c) if (v > 0) entries++;
+  if (entries === 0) return threshold;
+  return Math.max(threshold, studentTQuantile(1 - FALSE_FLAG_CHANCE / (2 * entries), Infinity));
 }
 
 /** Residual statistics of `problem` at θ, walked pair by pair. */
@@ -276,7 +294,8 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
     const sigma = MAD_TO_SIGMA * medianAbs(stats.residuals);
     // Points within OUTLIER_FLOOR_DECADES·threshold of the others are never flagged: on very clean
     // data the robust spread is tiny and interpolation alone would otherwise flag good points.
-    const limit = input.outlierThreshold * Math.max(sigma, OUTLIER_FLOOR_DECADES);
+    const limit =
+      outlierThresholdFor(input.outlierThreshold, stats) * Math.max(sigma, OUTLIER_FLOOR_DECADES);
     let flagged = 0;
     problem.curves.forEach((curve, k) =>
       curve.forEach((s, d) => {

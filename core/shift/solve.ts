@@ -102,7 +102,7 @@ export function solveOffsets(
   };
   for (let round = 1; m > 0; round++) {
     const before = Float64Array.from(theta);
-    outcome = refineRound(theta, s, free, cons, s.maxIterations - iterations, (t) =>
+    outcome = refineRound(theta, s, free, cons, s.maxIterations - iterations, outcome.cur, (t) =>
       evaluate(t, sets),
     );
     iterations += outcome.iterations;
@@ -164,9 +164,11 @@ function refineRound(
   free: number[],
   cons: LinearConstraint[],
   maxIterations: number,
+  /** The normal equations at θ with this round's compared points. */
+  start: NormalSink,
   evaluate: (t: Float64Array) => NormalSink,
 ): RoundOutcome {
-  let cur = evaluate(theta);
+  let cur = start;
   const score = (k: NormalSink): number => k.lossSum;
   let lambda = LAMBDA_START;
   let iterations = 0;
