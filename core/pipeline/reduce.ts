@@ -41,7 +41,9 @@ export function reduceToMasterCurve(
     }
   });
   // Stable: equal abscissae keep isotherm and point order, as the sort of the rows did.
-  const order = Int32Array.from({ length: total }, (_, k) => k).sort((a, b) => x[a] - x[b] || a - b);
+  const order = Int32Array.from({ length: total }, (_, k) => k).sort(
+    (a, b) => x[a] - x[b] || a - b,
+  );
   const outliers = used.map(({ iso }) => new Set(outlierPoints[iso.id] ?? []));
   const quantities: AnalysisMasterCurve['quantities'] = {};
   for (const q of present) {
