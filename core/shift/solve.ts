@@ -1,11 +1,13 @@
 /**
- * Joint refinement of all offsets: Levenberg–Marquardt on the IRLS normal equations (Marquardt,
- * J. SIAM 11, 1963), with fixed (locked) parameters removed and linear equality constraints
- * (the reference: aT(Tref) = 1, bT(Tref) = 1) kept exactly through the KKT system (kkt.ts). The
+ * Joint refinement of all offsets: Levenberg–Marquardt on the reweighted normal equations
+ * (Marquardt, J. SIAM 11, 1963), with fixed (locked) parameters held and linear equality
+ * constraints (the reference: aT(Tref) = 1, bT(Tref) = 1) kept exactly through the KKT system
+ * (kkt.ts), in rounds of frozen compared points (normal-walk.ts). It reports converged only when
+ * its tolerance was met; an iteration limit or a stall is converged: false with the reason. The
  * covariance of the offsets is s²·M B M, M the top-left block of the inverse KKT matrix without
  * damping (the curvature of the objective at the optimum), B the propagated point noise
- * (sandwich.ts) and s² the weighted residual variance; errors are relative to the constraints,
- * i.e. to the reference temperature.
+ * (sandwich.ts) and s² the weighted residual variance over the residuals compared (bins, on
+ * dense curves); errors are relative to the constraints, i.e. to the reference temperature.
  */
 import type { FitProblem } from './problem';
 import { parameterCount } from './problem';
