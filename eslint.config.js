@@ -84,5 +84,20 @@ export default tseslint.config(
       ],
     },
   },
+  // Spreading a large array into Math.max/min overflows the call stack (10⁶ points): loop instead.
+  {
+    files: ['core/shift/**/*.ts', 'core/io/**/*.ts', 'core/pipeline/**/*.ts'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        {
+          selector:
+            "CallExpression[callee.object.name='Math'][callee.property.name=/^(max|min)$/] > SpreadElement",
+          message:
+            'Math.max/min(...array) overflows the call stack on large data sets: use a loop.',
+        },
+      ],
+    },
+  },
   prettier,
 );

@@ -105,7 +105,7 @@ export function addSampleOptions(cmd: Command): Command {
     )
     .option(
       '--group-tolerance <K>',
-      'measured temperatures closer than this many kelvin form one isotherm (default 1)',
+      'measured temperatures closer than this many kelvin form one isotherm, unless they are separate steady sweeps (default 1)',
     )
     .option(
       '--column <COL=ROLE[:UNIT]>',

@@ -1,6 +1,7 @@
 import type { Isotherm, PointSource, QuantityId } from '../data/types';
 import { QUANTITY_IDS } from '../data/types';
-import { bandIndex, groupTemperatures } from './grouping';
+import type { GroupingSummary } from './grouping';
+import { groupingSummary, groupPoints } from './grouping';
 import type { PointRecords } from './records';
 
 /** Points of all files together; `file` indexes the file list. */
@@ -50,9 +51,10 @@ function sameValues(p: MergedPoints, a: number, b: number): boolean {
 }
 
 /**
- * Groups points into isotherms (groupTemperatures), sorts each by x, drops repeated x (warning),
- * and leaves out groups with fewer than two distinct x values (warning). Isotherms come back
- * sorted by temperature, ids T01, T02 …; problems go to `report`.
+ * Groups points into isotherms (groupPoints: steady sweeps, else temperature bands), sorts each by
+ * x, drops repeated x (warning), and leaves out groups with fewer than two distinct x values
+ * (warning). Isotherms come back sorted by temperature, ids T01, T02 …, with how they were formed;
+ * problems go to `report`. `layouts`: per file (default long).
  */
 export function assembleIsotherms(
   p: MergedPoints,
@@ -60,18 +62,16 @@ export function assembleIsotherms(
   toleranceK: number,
   xWord: string,
   report: (fileIndex: number, row: number, message: string) => void,
-): Isotherm[] {
+  layouts: readonly ('long' | 'perIsotherm' | 'wide')[] = files.map(() => 'long'),
+): { isotherms: Isotherm[]; grouping: GroupingSummary } {
   const src = (i: number): PointSource => ({ file: files[p.file[i]], row: p.row[i] });
   const warn = (i: number, message: string) => report(p.file[i], p.row[i], message);
-  const sorted = p.temperatureK.slice().sort();
-  const bands = groupTemperatures(sorted, toleranceK);
-  // Counting sort of the points by band, keeping file order inside a band.
-  const band = new Int32Array(p.n);
+  const groups = groupPoints({ ...p, layouts }, toleranceK);
+  const bands = groups.cut.map((cut, b) => ({ cut, minK: groups.minK[b] }));
+  // Counting sort of the points by group, keeping file order inside a group.
+  const band = groups.group;
   const start = new Int32Array(bands.length + 1);
-  for (let i = 0; i < p.n; i++) {
-    band[i] = bandIndex(bands, p.temperatureK[i]);
-    start[band[i] + 1]++;
-  }
+  for (let i = 0; i < p.n; i++) start[band[i] + 1]++;
   for (let b = 0; b < bands.length; b++) start[b + 1] += start[b];
   const order = new Int32Array(p.n);
   const fill = start.slice(0, bands.length);
@@ -79,6 +79,7 @@ export function assembleIsotherms(
   const reportedCut = new Set<number>();
   const isotherms: Isotherm[] = [];
   for (let b = 0; b < bands.length; b++) {
+    if (start[b + 1] === start[b]) continue;
     let idx = order.subarray(start[b], start[b + 1]);
     let ascending = true;
     for (let k = 1; k < idx.length && ascending; k++) ascending = p.x[idx[k]] >= p.x[idx[k - 1]];
@@ -117,7 +118,11 @@ export function assembleIsotherms(
   }
   isotherms.sort((a, c) => a.temperatureK - c.temperatureK);
   isotherms.forEach((iso, k) => (iso.id = `T${String(k + 1).padStart(2, '0')}`));
-  return isotherms;
+  const g = groups.summary;
+  return {
+    isotherms,
+    grouping: groupingSummary(g.toleranceK, isotherms.length, g.separateSweeps, g.cutFromRamps),
+  };
 }
 
 function buildIsotherm(p: MergedPoints, keep: number[], src: (i: number) => PointSource): Isotherm {

@@ -79,12 +79,13 @@ export function importFiles(files: SourceFile[], options?: ImportOptions): Impor
   const names = files.map((f) => f.name);
   const merged = mergeRecords(reads.map((r) => r.records));
   const abscissa = first.plan.abscissa;
-  const isotherms = assembleIsotherms(
+  const { isotherms, grouping } = assembleIsotherms(
     merged,
     names,
     o.groupingToleranceK,
     abscissa === 'time' ? 'time' : 'frequency',
     (f, row, message) => reads[f].sink.add(row, 0, message),
+    reads.map((r) => r.plan.layout),
   );
   if (isotherms.length === 0) {
     throw new ImportError(
@@ -127,6 +128,7 @@ export function importFiles(files: SourceFile[], options?: ImportOptions): Impor
     warnings: reads.flatMap((r) => r.sink.finish()),
     files: reads.map((r) => ({ ...r.report, deformation })),
     groups,
+    grouping,
     derived: QUANTITY_IDS.filter((q) => derived.has(q)),
     abscissa,
     units: Object.fromEntries(present.map((q) => [q, quantityUnit(q)])),

@@ -4,7 +4,7 @@ export type { ImportErrorCode } from './import-error';
 export { resolveImportOptions } from './options';
 export { COLUMN_ROLES } from './roles';
 export { groupTemperatures } from './grouping';
-export type { TemperatureBand } from './grouping';
+export type { GroupingSummary, TemperatureBand } from './grouping';
 export { temperatureFromFileName } from './file-name';
 export type {
   ColumnMapping,

@@ -1,3 +1,4 @@
+import type { GroupingSummary } from './grouping';
 import type {
   AbscissaKind,
   DataWarning,
@@ -39,7 +40,8 @@ export interface ColumnMapping {
 /** Import options. Every field is optional; `resolveImportOptions()` fills the defaults. */
 export interface ImportOptions {
   /**
-   * Measured temperatures closer than this are one isotherm, K (see docs/import.md, "Grouping").
+   * Measured temperatures closer than this are one isotherm, K, unless they are complete sweeps at
+   * steady, distinct temperatures (see docs/import.md, "Grouping").
    * @default 1
    */
   groupingToleranceK?: number;
@@ -153,6 +155,8 @@ export interface ImportResult {
   warnings: DataWarning[];
   files: FileReport[];
   groups: IsothermGroupReport[];
+  /** How the points were formed into isotherms (steady sweeps, temperature bands, ramps cut). */
+  grouping: GroupingSummary;
   /** Quantities computed from others (see `deriveQuantities`), not read from the files. */
   derived: QuantityId[];
   abscissa: AbscissaKind;

@@ -13,10 +13,10 @@ export interface ShiftCovarianceFor {
 }
 
 export function shiftCovarianceFor(
-  result: Pick<ShiftResult, 'log10aTCovariance'> | null | undefined,
+  result: Pick<ShiftResult, 'covariance'> | null | undefined,
   isothermIds: readonly string[],
 ): ShiftCovarianceFor {
-  const cov = result?.log10aTCovariance;
+  const cov = result?.covariance;
   if (!cov)
     return {
       matrix: null,

@@ -59,6 +59,8 @@ export function buildProblem(dataset: Dataset, spec: ProblemSpec): FitProblem {
       );
     });
   });
+  const temps = spec.active.map((k) => dataset.isotherms[k].temperatureK);
+  const order = Int32Array.from(spec.active.keys()).sort((a, b) => temps[a] - temps[b] || a - b);
   const problem: FitProblem = {
     sigma: spec.sigma ?? (dataset.abscissa === 'time' ? -1 : 1),
     alpha: Float64Array.from(spec.drivers, alphaOf),
@@ -66,6 +68,7 @@ export function buildProblem(dataset: Dataset, spec: ProblemSpec): FitProblem {
     joint: spec.joint,
     curves,
     pairs: new Int32Array(0),
+    order,
     minOverlapPoints: spec.minOverlapPoints,
   };
   problem.pairs = candidatePairs(problem);

@@ -9,7 +9,7 @@ import type { Dataset } from '../data/types';
 import { quantityValues } from './drivers';
 import { buildProblem } from './build-problem';
 import type { FitProblem } from './problem';
-import { residualsAt } from './residuals';
+import { forEachPair } from './residuals';
 import { ResidualBuffer } from './residual-buffer';
 import { noiseLevel } from './noise';
 import { StatsSink } from './stats-sink';
@@ -29,7 +29,7 @@ export const DISAGREE_DECADES = 0.1;
 export const DISAGREE_Z = 5;
 
 export function noiseOfProblem(p: FitProblem, included: Uint8Array): number {
-  const curves: { lx: Float64Array; y: Float64Array }[] = [];
+  const curves: { lx: Float64Array; y: Float64Array; w: Float64Array }[] = [];
   p.curves.forEach((c, k) => {
     if (included[k]) c.forEach((s) => curves.push(s));
   });
@@ -75,7 +75,8 @@ export function vanGurpPalmenDispersion(
     sigma: 1,
   });
   const theta = Float64Array.from(use, (k) => log10bT(k));
-  const stats = new StatsSink(p).consume(residualsAt(p, theta, buffer));
+  const stats = new StatsSink(p);
+  forEachPair(p, theta, (b) => stats.consume(b), buffer);
   if (stats.residuals.length === 0) return null;
   const rmsDeg = stats.rms();
   const robust = MAD_TO_SIGMA * medianAbs(stats.residuals);

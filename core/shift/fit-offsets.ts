@@ -6,16 +6,18 @@
  */
 import type { FitProblem } from './problem';
 import { overlapGroups } from './pairs';
-import { residualsAt } from './residuals';
+import { forEachPair } from './residuals';
 import { ResidualBuffer } from './residual-buffer';
 import type { ReferenceWeights } from './reference';
 import { referenceWeights } from './reference';
 import { HUBER_K, MAD_TO_SIGMA, medianAbs } from './robust';
 import type { LinearConstraint, SolveSettings } from './solve';
-import { offsetCovariance } from './covariance';
+import type { OffsetUncertainty } from './covariance';
+import { offsetUncertainty } from './covariance';
 import { solveOffsets } from './solve';
 import { startingOffsets } from './start';
 import { StatsSink } from './stats-sink';
+import { studentTQuantile } from '../models/student-t';
 import type { FitInfo, ResolvedShiftOptions, RobustLoss } from './types';
 
 /** Cauchy tuning constant for 95 % efficiency under normal errors (Holland & Welsch 1977). */
@@ -71,8 +73,8 @@ export interface OffsetFit {
   theta: Float64Array;
   /** Standard error of each parameter (NaN when unknown). */
   stdErr: Float64Array;
-  /** Full covariance of the parameters (size × size, row-major), or null when not computed. */
-  covariance: Float64Array | null;
+  /** Standard errors and covariance of the last pass; null when undetermined. */
+  uncertainty: OffsetUncertainty | null;
   included: Uint8Array;
   overlapsNothing: Uint8Array;
   disconnected: Uint8Array;
@@ -103,11 +105,28 @@ function robustScale(loss: RobustLoss, residuals: ArrayLike<number>): number {
   return Math.max(MIN_SCALE_DECADES, Number.isFinite(sigma) ? k * sigma : MIN_SCALE_DECADES);
 }
 
-/** Standardised residuals z = r·√w (the noise of one point) of a filled buffer. */
-function standardised(buf: ResidualBuffer): Float64Array {
-  const z = new Float64Array(buf.size);
-  for (let m = 0; m < buf.size; m++) z[m] = buf.r[m] * Math.sqrt(buf.w[m]);
-  return z;
+/**
+ * Chance that noise alone makes any entry of a data set look like an outlier (normal errors):
+ * the threshold grows with the number of entries compared, as a Bonferroni bound (Miller,
+ * Simultaneous Statistical Inference, 2nd ed., 1981, §1.3), so 10⁵ good entries are not left with
+ * a handful of false flags (at 4 standard deviations about six would be).
+ */
+const FALSE_FLAG_CHANCE = 0.01;
+
+/** The threshold in robust standard deviations: at least `threshold`, more for many entries. */
+function outlierThresholdFor(threshold: number, stats: StatsSink): number {
+  let entries = 0;
+  for (const byDriver of stats.entryCount)
+    for (const c of byDriver) for (const v of c) if (v > 0) entries++;
+  if (entries === 0) return threshold;
+  return Math.max(threshold, studentTQuantile(1 - FALSE_FLAG_CHANCE / (2 * entries), Infinity));
+}
+
+/** Residual statistics of `problem` at θ, walked pair by pair. */
+function statsAt(problem: FitProblem, theta: Float64Array, buf: ResidualBuffer): StatsSink {
+  const stats = new StatsSink(problem);
+  forEachPair(problem, theta, (b) => stats.consume(b), buf);
+  return stats;
 }
 
 function chooseMainGroup(
@@ -118,10 +137,12 @@ function chooseMainGroup(
 ): number {
   const size = new Map<number, number>();
   groups.forEach((g) => size.set(g, (size.get(g) ?? 0) + 1));
+  const lockedIn = new Map<number, number>();
+  for (const c of locked.keys()) lockedIn.set(groups[c], (lockedIn.get(groups[c]) ?? 0) + 1);
   let best = -1;
   let bestKey: [number, number, number] = [-1, -1, Infinity];
   groups.forEach((g, k) => {
-    const lockedHere = [...locked.keys()].filter((c) => groups[c] === g).length;
+    const lockedHere = lockedIn.get(g) ?? 0;
     const key: [number, number, number] = [
       lockedHere,
       size.get(g) ?? 0,
@@ -198,29 +219,39 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
   const reference =
     incFinal.length > 0 ? referenceWeights(incFinal, temps, input.referenceK) : null;
   const constraints: LinearConstraint[] = [];
+  const fixed = new Uint8Array(size);
   let lockConflict: number | null = null;
   if (reference) {
     const ch = new Float64Array(size);
     reference.coef.forEach((c, k) => (ch[k] = c));
     const allLocked = [...reference.coef.keys()].every((k) => input.locked.has(k));
+    // An isotherm measured at Tref defines aT = 1 itself: its offset is held at 0 (exactly, so
+    // its standard error is exactly 0), otherwise a linear constraint interpolates Tref.
+    const [own] = reference.coef.size === 1 ? [...reference.coef.keys()] : [-1];
     if (allLocked) {
       let v = 0;
       reference.coef.forEach((c, k) => (v += c * (input.locked.get(k) ?? 0)));
       if (Math.abs(v) > 1e-9) lockConflict = v;
-    } else constraints.push({ coef: ch, rhs: 0 });
+    } else if (own < 0) constraints.push({ coef: ch, rhs: 0 });
     if (input.locked.size === 0) {
       // Move all curves together so the reference holds without distorting the start.
       let v = 0;
       reference.coef.forEach((c, k) => (v += c * theta[k]));
       for (const k of incFinal) theta[k] -= v;
     }
-    if (problem.joint) {
+    if (own >= 0 && !allLocked) {
+      theta[own] = 0;
+      fixed[own] = 1;
+      if (problem.joint) {
+        theta[n + own] = 0;
+        fixed[n + own] = 1;
+      }
+    } else if (problem.joint) {
       const cv = new Float64Array(size);
       reference.coef.forEach((c, k) => (cv[n + k] = c));
       constraints.push({ coef: cv, rhs: 0 });
     }
   }
-  const fixed = new Uint8Array(size);
   for (let k = 0; k < n; k++) {
     if (!included[k] || input.locked.has(k)) fixed[k] = 1;
     if (problem.joint && !included[k]) fixed[n + k] = 1;
@@ -239,8 +270,7 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
       prior[n + k] = 1 / (JOINT_BT_PRIOR_DECADES * JOINT_BT_PRIOR_DECADES);
   let settings: SolveSettings | null = null;
   const runPass = (t: Float64Array, covariance: boolean) => {
-    const scale =
-      input.scale ?? robustScale(input.loss, standardised(residualsAt(problem, t, buffer)));
+    const scale = input.scale ?? robustScale(input.loss, statsAt(problem, t, buffer).residuals);
     settings = {
       prior,
       loss: input.loss,
@@ -260,11 +290,12 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
   let iterations = outcome.iterations;
   let passes = 1;
   if (mayRefit) {
-    const stats = new StatsSink(problem).consume(residualsAt(problem, outcome.theta, buffer));
+    const stats = statsAt(problem, outcome.theta, buffer);
     const sigma = MAD_TO_SIGMA * medianAbs(stats.residuals);
     // Points within OUTLIER_FLOOR_DECADES·threshold of the others are never flagged: on very clean
     // data the robust spread is tiny and interpolation alone would otherwise flag good points.
-    const limit = input.outlierThreshold * Math.max(sigma, OUTLIER_FLOOR_DECADES);
+    const limit =
+      outlierThresholdFor(input.outlierThreshold, stats) * Math.max(sigma, OUTLIER_FLOOR_DECADES);
     let flagged = 0;
     problem.curves.forEach((curve, k) =>
       curve.forEach((s, d) => {
@@ -281,7 +312,7 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
     if (flagged === 0) {
       finalStats = stats;
       finalSigma = sigma;
-      outcome.covariance = offsetCovariance(
+      outcome.uncertainty = offsetUncertainty(
         problem,
         outcome.theta,
         settings!,
@@ -296,7 +327,7 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
   }
   theta = outcome.theta;
   // Reuse the outlier pass's statistics when nothing was flagged (same θ, same problem).
-  const stats = finalStats ?? new StatsSink(problem).consume(residualsAt(problem, theta, buffer));
+  const stats = finalStats ?? statsAt(problem, theta, buffer);
   const robustSigma = finalStats ? finalSigma : MAD_TO_SIGMA * medianAbs(stats.residuals);
   const curveRms = new Float64Array(n);
   for (let k = 0; k < n; k++) curveRms[k] = stats.curveRms(k);
@@ -305,15 +336,14 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
       included[k] = 0;
       overlapsNothing[k] = 1;
     }
-  const stdErr = new Float64Array(size).fill(NaN);
-  if (outcome.covariance)
-    for (let i = 0; i < size; i++)
-      stdErr[i] = Math.sqrt(Math.max(0, outcome.covariance[i * size + i]));
+  const stdErr = outcome.uncertainty
+    ? Float64Array.from(outcome.uncertainty.stdErr)
+    : new Float64Array(size).fill(NaN);
   return {
     problem,
     theta,
     stdErr,
-    covariance: outcome.covariance,
+    uncertainty: outcome.uncertainty,
     included,
     overlapsNothing,
     disconnected,

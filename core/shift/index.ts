@@ -1,6 +1,6 @@
 /** core/shift: the shift engine — global robust overlap fit of aT and bT with checks. */
 export * from './types';
-export { shiftIsotherms, SHIFT_CONVENTION } from './shift-isotherms';
+export { shiftIsotherms, SHIFT_CONVENTION, COVARIANCE_MAX_ISOTHERMS } from './shift-isotherms';
 export { resolveShiftOptions, ShiftOptionsError } from './options';
 export { defaultDrivers } from './drivers';
 export { masterCurve } from './master-curve';

@@ -43,25 +43,31 @@ export function standardisedLocalResiduals(
   lx: ArrayLike<number>,
   y: ArrayLike<number>,
   out: number[],
+  w?: ArrayLike<number>,
 ): void {
   const n = lx.length;
   const sums = quadraticSums();
+  // An entry averaged from w points has 1/√w of a point's noise: scaled back to one point, so the
+  // estimate is the noise of a measured point whether or not the curve was binned (neighbouring
+  // bins of a dense curve hold about the same number of points).
+  const push = (r: number, c: number) => {
+    if (Number.isFinite(r)) out.push(w ? r * Math.sqrt(w[c]) : r);
+  };
   if (n === 4) {
-    for (const c of [1, 2]) {
-      const r = windowResidual(lx, y, 0, 3, c, sums);
-      if (Number.isFinite(r)) out.push(r);
-    }
+    for (const c of [1, 2]) push(windowResidual(lx, y, 0, 3, c, sums), c);
     return;
   }
-  for (let c = 2; c < n - 2; c++) {
-    const r = windowResidual(lx, y, c - 2, c + 2, c, sums);
-    if (Number.isFinite(r)) out.push(r);
-  }
+  for (let c = 2; c < n - 2; c++) push(windowResidual(lx, y, c - 2, c + 2, c, sums), c);
 }
 
-/** Robust noise level of a set of curves, decades; NaN when no curve has 4 entries. */
-export function noiseLevel(curves: { lx: ArrayLike<number>; y: ArrayLike<number> }[]): number {
+/**
+ * Robust noise level of a set of curves, decades, per measured point (`w`: points averaged into
+ * each entry, 1 when absent); NaN when no curve has 4 entries.
+ */
+export function noiseLevel(
+  curves: { lx: ArrayLike<number>; y: ArrayLike<number>; w?: ArrayLike<number> }[],
+): number {
   const out: number[] = [];
-  for (const c of curves) standardisedLocalResiduals(c.lx, c.y, out);
+  for (const c of curves) standardisedLocalResiduals(c.lx, c.y, out, c.w);
   return out.length > 0 ? MAD_TO_SIGMA * medianAbs(out) : NaN;
 }

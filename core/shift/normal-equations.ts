@@ -1,7 +1,12 @@
 /**
- * Accumulates the normal equations (curvature Σ w ρ''·g gᵀ, gradient Σ w ψ/z·g r) from a residual buffer: each residual
- * touches at most four parameters (h_i, h_j, v_i, v_j), so no Jacobian is stored.
+ * Accumulates the normal equations (curvature Σ w·ψ(z)/z·g gᵀ, gradient Σ w·ψ(z)/z·g r: the
+ * iteratively reweighted least-squares system of the robust loss) from a residual buffer: each
+ * residual touches at most four parameters (h_i, h_j, v_i, v_j), so no Jacobian is stored. The
+ * curvature is kept in envelope storage (layout.ts), so a fit of thousands of isotherms needs
+ * memory and time in proportion to their number, not its square.
  */
+import type { ParameterLayout } from './layout';
+import { parameterLayout } from './layout';
 import type { FitProblem } from './problem';
 import { parameterCount } from './problem';
 import type { ResidualBuffer } from './residual-buffer';
@@ -10,7 +15,6 @@ import {
   lossCode,
   robustRho as rhoImport,
   robustWeight as weightImport,
-  robustCurvature as curvatureImport,
 } from './robust';
 import type { RobustLoss } from './types';
 import { addPairCross as crossImport, addPairOuter as outerImport } from './pair-scatter';
@@ -19,17 +23,24 @@ import { addPairCross as crossImport, addPairOuter as outerImport } from './pair
 const LOSS_HUBER = HUBER_CODE;
 const robustRho = rhoImport;
 const robustWeight = weightImport;
-const robustCurvature = curvatureImport;
 const addPairOuter = outerImport;
 const addPairCross = crossImport;
 
 export class NormalSink {
   readonly size: number;
+  /** Curvature in envelope storage (positions of `layout`); empty without the matrix. */
   readonly a: Float64Array;
+  /** Gradient, by parameter. */
   readonly g: Float64Array;
+  /** Where the parameters sit in `a` (null without the matrix). */
+  readonly layout: ParameterLayout | null;
+  /** Σ ρ(z) over the residuals. */
   lossSum = 0;
   weightedSquares = 0;
+  /** Measured points compared (an entry averaged from c points counts c times). */
   count = 0;
+  /** Residuals (compared entries): the degrees of freedom of the residual variance. */
+  residuals = 0;
   readonly isHuber: boolean;
   private readonly n: number;
   private readonly code: number;
@@ -39,18 +50,20 @@ export class NormalSink {
     loss: RobustLoss,
     readonly scale: number,
     readonly withMatrix = true,
+    layout: ParameterLayout | null = null,
   ) {
     this.size = parameterCount(p);
     this.n = p.curves.length;
     this.code = lossCode(loss);
     this.isHuber = this.code === LOSS_HUBER;
-    this.a = new Float64Array(withMatrix ? this.size * this.size : 0);
+    this.layout = withMatrix ? (layout ?? parameterLayout(p)) : null;
+    this.a = new Float64Array(this.layout ? this.layout.env.size : 0);
     this.g = new Float64Array(withMatrix ? this.size : 0);
   }
 
   consume(buf: ResidualBuffer): this {
     const { r: R, w: W, g: G, bin: BIN, owner: OW, other: OT, driver: DR } = buf;
-    const s = this.size;
+    const l = this.layout!;
     const a = this.a;
     const grad = this.g;
     const code = this.code;
@@ -66,18 +79,16 @@ export class NormalSink {
       const az = Math.abs(z);
       let rho: number;
       let psiOverZ: number;
-      let curv: number;
       if (code === LOSS_HUBER) {
         rho = az <= c ? 0.5 * z * z : c * az - 0.5 * c * c;
         psiOverZ = az <= c ? 1 : c / az;
-        curv = az <= c ? 1 : (0.25 * c) / az;
       } else {
         rho = robustRho(code, z, c);
         psiOverZ = robustWeight(code, z, c);
-        curv = robustCurvature(code, z, c);
       }
       this.lossSum += rho;
       this.count += BIN[m];
+      this.residuals++;
       const wt = w * psiOverZ;
       this.weightedSquares += wt * r * r;
       if (!this.withMatrix) continue;
@@ -85,24 +96,23 @@ export class NormalSink {
       const j = OT[m];
       const gi = G[m];
       const wg = wt * gi;
-      // Curvature with ρ'' (see normal-walk.ts); gradient with ψ/z.
-      const wc = w * curv;
-      const wgg = wc * gi * gi;
+      // Curvature and gradient with the same weight ψ(z)/z (see normal-walk.ts).
+      const wgg = wg * gi;
       grad[i] += wg * r;
       grad[j] -= wg * r;
-      addPairOuter(a, s, i, j, wgg);
+      addPairOuter(a, l, i, j, wgg);
       const beta = betas[DR[m]];
       if (joint && beta !== 0) {
         const vi = n + i;
         const vj = n + j;
         const wb = wt * beta;
-        const wbb = wc * beta * beta;
-        const wgb = wc * gi * beta;
+        const wbb = wb * beta;
+        const wgb = wg * beta;
         grad[vi] += wb * r;
         grad[vj] -= wb * r;
-        addPairOuter(a, s, vi, vj, wbb);
+        addPairOuter(a, l, vi, vj, wbb);
         // Cross terms h–v: (g, −g) ⊗ (β, −β).
-        addPairCross(a, s, i, j, vi, vj, wgb);
+        addPairCross(a, l, i, j, vi, vj, wgb);
       }
     }
     return this;
@@ -114,10 +124,6 @@ export class NormalSink {
 
   weight(z: number): number {
     return robustWeight(this.code, z, this.scale);
-  }
-
-  curvature(z: number): number {
-    return robustCurvature(this.code, z, this.scale);
   }
 
   /** Mean robust loss per measured point in the overlaps: the objective minimised. */

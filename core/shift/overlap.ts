@@ -9,7 +9,7 @@ import { activeIsotherms } from './active';
 import { NormalSink } from './normal-equations';
 import { resolveShiftOptions, ShiftOptionsError } from './options';
 import type { FitProblem } from './problem';
-import { residualsAt } from './residuals';
+import { forEachPair } from './residuals';
 import type { ShiftOptions } from './types';
 import { verticalShift } from './vertical';
 
@@ -68,17 +68,19 @@ export function overlapMismatch(prepared: PreparedOverlap, log10aT: ArrayLike<nu
     throw new ShiftOptionsError(
       `overlapMismatch() needs ${prepared.ids.length} log10aT values (one per prepared isotherm), got ${log10aT.length}.`,
     );
-  const buf = residualsAt(prepared.problem, log10aT);
-  const sink = new NormalSink(prepared.problem, 'none', 1, false).consume(buf);
+  const sink = new NormalSink(prepared.problem, 'none', 1, false);
   const touched = new Uint8Array(prepared.ids.length);
-  for (let m = 0; m < buf.size; m++) {
-    touched[buf.owner[m]] = 1;
-    touched[buf.other[m]] = 1;
-  }
+  forEachPair(prepared.problem, log10aT, (buf) => {
+    sink.consume(buf);
+    for (let m = 0; m < buf.size; m++) {
+      touched[buf.owner[m]] = 1;
+      touched[buf.other[m]] = 1;
+    }
+  });
   let penalty = 0;
   prepared.hasPartner.forEach((h, k) => {
     if (h && !touched[k]) penalty += NO_OVERLAP_PENALTY;
   });
-  const mean = sink.count > 0 ? (2 * sink.lossSum) / sink.count : 0;
+  const mean = sink.residuals > 0 ? (2 * sink.lossSum) / sink.residuals : 0;
   return mean + penalty;
 }

@@ -39,6 +39,11 @@ export interface FitProblem {
   curves: FitSeries[][];
   /** Candidate pairs as a flat list i0, j0, i1, j1, … (i < j). */
   pairs: Int32Array;
+  /**
+   * Curve indices in order of temperature (ties by index). Pairs are sought among curves close
+   * in this order and the matrices are banded in it (layout.ts). Identity when absent.
+   */
+  order?: Int32Array;
   minOverlapPoints: number;
   /**
    * Use the noise-damped slopes in the Jacobian. The fit itself uses the exact segment slopes
@@ -46,6 +51,15 @@ export interface FitProblem {
    * noisy segments overstate the information where a curve is flat.
    */
   smoothSlopes?: boolean;
+  /**
+   * Build the curvature of the refinement from the exact segment slopes, as the gradient does,
+   * instead of the noise-damped ones. The squared slopes of noisy segments overstate the
+   * curvature where a curve is nearly flat, which keeps the steps there short: the per-quantity
+   * check (quantity-shifts.ts) relies on that, since its two iterations from the joint optimum
+   * must not run far along a quantity (such as G′ on a rubbery plateau) that hardly fixes the
+   * shift on its own.
+   */
+  segmentCurvature?: boolean;
 }
 
 export function parameterCount(p: FitProblem): number {

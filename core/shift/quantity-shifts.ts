@@ -78,7 +78,7 @@ function singleDriver(
   for (let k = 0; k < p.pairs.length; k += 2)
     if (fit.included[p.pairs[k]] && fit.included[p.pairs[k + 1]])
       keep.push(p.pairs[k], p.pairs[k + 1]);
-  return { ...p, pairs: Int32Array.from(keep) };
+  return { ...p, pairs: Int32Array.from(keep), segmentCurvature: true };
 }
 
 /** One quantity's fit from the joint optimum, with what its standard errors need. */
@@ -124,10 +124,10 @@ export function quantityDisagreement(
   quantities: QuantityId[],
 ): Disagreement | null {
   const n = active.length;
+  const lockedIds = new Set(s.locked.map((l) => l.id));
   const locked = new Set<number>();
-  s.locked.forEach((l) => {
-    const c = active.findIndex((k) => dataset.isotherms[k].id === l.id);
-    if (c >= 0) locked.add(c);
+  active.forEach((k, c) => {
+    if (lockedIds.has(dataset.isotherms[k].id)) locked.add(c);
   });
   const fits = quantities.map((q) =>
     singleQuantityShift(singleDriver(dataset, s, fit, active, vertical, q), fit, s),

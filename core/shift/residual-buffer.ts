@@ -41,7 +41,7 @@ export class ResidualBuffer {
     const need = this.size + extra;
     if (need <= this.r.length) return;
     let cap = this.r.length;
-    while (cap < need) cap *= 4;
+    while (cap < need) cap *= 2;
     const grow = <T extends Int32Array | Float64Array>(a: T): T => {
       const b = new (a.constructor as { new (n: number): T })(cap);
       b.set(a.subarray(0, this.size));

@@ -155,6 +155,25 @@ export function allResiduals(p: FitProblem, theta: ArrayLike<number>, buf: Resid
   return used;
 }
 
+/**
+ * Calls `consume(buf)` once per candidate pair with that pair's residuals (all drivers), in one
+ * reused buffer of the size of a pair: the sinks (normal equations, sandwich, statistics) add up
+ * over residuals, so nothing in proportion to all residuals is stored.
+ */
+export function forEachPair(
+  p: FitProblem,
+  theta: ArrayLike<number>,
+  consume: (buf: ResidualBuffer) => void,
+  buf: ResidualBuffer = new ResidualBuffer(),
+): void {
+  const nd = p.alpha.length;
+  for (let q = 0; q < p.pairs.length; q += 2) {
+    buf.reset();
+    for (let d = 0; d < nd; d++) pairResiduals(p, p.pairs[q], p.pairs[q + 1], d, theta, buf);
+    if (buf.size > 0) consume(buf);
+  }
+}
+
 /** All residuals at θ in a (new or reused) buffer. */
 export function residualsAt(
   p: FitProblem,

@@ -1,7 +1,9 @@
 /**
  * Robust losses for iteratively reweighted least squares (Huber 1964, "Robust estimation of a
  * location parameter", Ann. Math. Stat. 35; Cauchy/Lorentzian loss as in Holland & Welsch 1977,
- * Commun. Stat. A6). ρ is the loss, weight = ψ(r)/r the IRLS weight. Residuals in decades.
+ * Commun. Stat. A6). ρ is the loss, weight = ψ(r)/r the IRLS weight, which the fit uses for
+ * both the gradient and the curvature (iteratively reweighted least squares). Residuals in
+ * decades.
  */
 import type { RobustLoss } from './types';
 
@@ -36,17 +38,6 @@ export function robustWeight(loss: RobustLoss | number, r: number, c: number): n
   if (code === LOSS_HUBER) return a <= c ? 1 : c / a;
   const z = r / c;
   return 1 / (1 + z * z);
-}
-
-/** ρ''(r) with a floor, for Newton steps and the covariance. */
-export function robustCurvature(loss: RobustLoss | number, r: number, c: number): number {
-  const code = typeof loss === 'number' ? loss : lossCode(loss);
-  if (code === LOSS_NONE) return 1;
-  // Beyond Huber's corner ρ'' = 0, and Cauchy's turns negative: keep a quarter of the reweighting
-  // curvature ψ/r so every parameter keeps a well-posed step (a safeguard, not part of the loss).
-  if (code === LOSS_HUBER) return Math.abs(r) <= c ? 1 : (0.25 * c) / Math.abs(r);
-  const u2 = (r / c) ** 2;
-  return Math.max(0.25 / (1 + u2), (1 - u2) / ((1 + u2) * (1 + u2)));
 }
 
 /** Median of the absolute values (a copy is partially sorted; the input is left alone). */

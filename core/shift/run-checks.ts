@@ -28,6 +28,7 @@ export function runChecks(
   warnings: ShiftWarning[],
 ): ShiftChecks {
   const includedCount = fit.included.reduce((a, b) => a + b, 0);
+  const position = new Map(active.map((k, c) => [k, c]));
   const noise = noiseOfProblem(fit.problem, fit.included);
   const mismatch = includedCount > 1 ? mismatchRatio(fit.robustSigma, noise) : null;
   const compared = s.checks && includedCount > 1 ? comparedQuantities(dataset, s) : [];
@@ -38,7 +39,7 @@ export function runChecks(
           active,
           fit.included,
           (k) => {
-            const c = active.indexOf(k);
+            const c = position.get(k)!;
             const v = vertical.joint ? fit.theta[active.length + c] : vertical.log10bT[k];
             return Number.isFinite(v) ? v : 0;
           },

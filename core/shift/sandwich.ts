@@ -7,46 +7,59 @@
  * inverse of JᵀWJ, s = JᵀW r the score) is propagated exactly: s = Σ_p c_p e_p over point noises
  * e_p, so Cov = σ²·M (Σ_p c_p c_pᵀ / n_p) M, with n_p the points averaged into entry p.
  * For a point of curve i, c_p = Σ_j b_pj (u_i − u_j) (unit vectors of the parameters), so one
- * scalar per (point, partner) suffices.
+ * scalar per (point, partner) suffices. B couples a curve with its partners and the partners with
+ * each other, all of them within the envelope of layout.ts.
  */
+import type { ParameterLayout } from './layout';
+import { partnerLists, slotIn as slotImport } from './layout';
 import type { FitProblem } from './problem';
 import type { ResidualBuffer } from './residual-buffer';
 import { lossCode, robustWeight as weightImport } from './robust';
-
-const robustWeight = weightImport; // local binding, see residuals.ts
 import type { RobustLoss } from './types';
 
+// Local bindings, see residuals.ts.
+const robustWeight = weightImport;
+const slotIn = slotImport;
+
 export class SandwichSink {
-  /** key (curve·n + partner)·nd + driver → per-entry scalars for h (and v when joint). */
-  private readonly bh = new Map<number, Float64Array>();
-  private readonly bv = new Map<number, Float64Array>();
+  /** Per curve and driver: entries × partners scalars for h (and v when joint), flat. */
+  private readonly bh: Float64Array[][];
+  private readonly bv: (Float64Array | null)[][];
+  private readonly ptr: Int32Array;
+  private readonly list: Int32Array;
   private readonly n: number;
   private readonly code: number;
-  private readonly nd: number;
 
   constructor(
     private readonly p: FitProblem,
-    private readonly loss: RobustLoss,
+    loss: RobustLoss,
     private readonly scale: number,
   ) {
     this.n = p.curves.length;
     this.code = lossCode(loss);
-    this.nd = p.alpha.length;
+    const { ptr, list } = partnerLists(p);
+    this.ptr = ptr;
+    this.list = list;
+    this.bh = p.curves.map((c, i) =>
+      c.map((s) => new Float64Array(s.lx.length * (ptr[i + 1] - ptr[i]))),
+    );
+    this.bv = p.curves.map((c, i) =>
+      c.map((s, d) =>
+        p.joint && p.beta[d] !== 0 ? new Float64Array(s.lx.length * (ptr[i + 1] - ptr[i])) : null,
+      ),
+    );
   }
 
-  private slot(
-    map: Map<number, Float64Array>,
-    curve: number,
-    partner: number,
-    d: number,
-  ): Float64Array {
-    const key = (curve * this.n + partner) * this.nd + d;
-    let a = map.get(key);
-    if (!a) {
-      a = new Float64Array(this.p.curves[curve][d].lx.length);
-      map.set(key, a);
+  /** Position of `partner` in the sorted partner list of `curve`. */
+  private slot(curve: number, partner: number): number {
+    let lo = this.ptr[curve];
+    let hi = this.ptr[curve + 1] - 1;
+    while (lo < hi) {
+      const mid = (lo + hi) >>> 1;
+      if (this.list[mid] < partner) lo = mid + 1;
+      else hi = mid;
     }
-    return a;
+    return lo - this.ptr[curve];
   }
 
   consume(buf: ResidualBuffer): this {
@@ -62,16 +75,19 @@ export class SandwichSink {
       lam: LAM,
     } = buf;
     const n = this.n;
-    const nd = this.nd;
+    const nd = this.p.alpha.length;
     const code = this.code;
     const scale = this.scale;
-    const joint = this.p.joint;
     // Residuals come in runs of one (owner, other, driver): look their slots up once per run.
     let runKey = -1;
     let ownH: Float64Array = new Float64Array(0);
     let othH = ownH;
     let ownV: Float64Array | null = null;
     let othV: Float64Array | null = null;
+    let ownStride = 0;
+    let othStride = 0;
+    let ownSlot = 0;
+    let othSlot = 0;
     let beta = 0;
     for (let m = 0; m < buf.size; m++) {
       const owner = OW[m];
@@ -80,17 +96,20 @@ export class SandwichSink {
       const key = (owner * n + other) * nd + d;
       if (key !== runKey) {
         runKey = key;
-        ownH = this.slot(this.bh, owner, other, d);
-        othH = this.slot(this.bh, other, owner, d);
+        ownH = this.bh[owner][d];
+        othH = this.bh[other][d];
+        ownV = this.bv[owner][d];
+        othV = this.bv[other][d];
+        ownStride = this.ptr[owner + 1] - this.ptr[owner];
+        othStride = this.ptr[other + 1] - this.ptr[other];
+        ownSlot = this.slot(owner, other);
+        othSlot = this.slot(other, owner);
         beta = this.p.beta[d];
-        const withV = joint && beta !== 0;
-        ownV = withV ? this.slot(this.bv, owner, other, d) : null;
-        othV = withV ? this.slot(this.bv, other, owner, d) : null;
       }
       const r = R[m];
       const w = W[m];
-      const e = EN[m];
-      const k = KN[m];
+      const e = EN[m] * ownStride + ownSlot;
+      const k = KN[m] * othStride + othSlot;
       const lam = LAM[m];
       const wt = w * robustWeight(code, r * Math.sqrt(w), scale);
       // Score contribution wt·r·∇r with ∇r = g (u_owner − u_other) [+ β (v_owner − v_other)].
@@ -99,101 +118,80 @@ export class SandwichSink {
       const ch = wt * G[m];
       ownH[e] += ch;
       othH[k] += ch * (1 - lam);
-      othH[k + 1] += ch * lam;
+      othH[k + othStride] += ch * lam;
       if (ownV && othV) {
         const cv = wt * beta;
         ownV[e] += cv;
         othV[k] += cv * (1 - lam);
-        othV[k + 1] += cv * lam;
+        othV[k + othStride] += cv * lam;
       }
     }
     return this;
   }
 
   /**
-   * Calls `visit(len, idx, val, invCount)` once per measured entry with its score vector c_p in
-   * sparse form (parameter indices idx[0..len), coefficients val[0..len)) and 1/n_p.
+   * Σ_p c_p c_pᵀ / n_p in envelope storage (positions of `layout`): for each measured entry p of
+   * curve i, c_p = Σ_j b_pj (u_i − u_j) (and the same for v), n_p its point count. The products
+   * of one curve's entries are summed in a small dense matrix over the curve and its partners
+   * first, then scattered once.
    */
-  private forEachPoint(
-    visit: (len: number, idx: Int32Array, val: Float64Array, invCount: number) => void,
-  ): void {
+  meat(layout: ParameterLayout): Float64Array {
+    const out = new Float64Array(layout.env.size);
     const n = this.n;
-    const size = this.p.joint ? 2 * n : n;
-    // Group the slots by (curve, driver) so each point's vector is assembled once.
-    const groups = new Map<
-      number,
-      { partner: number; h: Float64Array; v: Float64Array | null }[]
-    >();
-    for (const [key, h] of this.bh) {
-      const d = key % this.nd;
-      const cp = (key - d) / this.nd;
-      const partner = cp % n;
-      const curve = (cp - partner) / n;
-      const gk = curve * this.nd + d;
-      if (!groups.has(gk)) groups.set(gk, []);
-      groups.get(gk)!.push({ partner, h, v: this.bv.get(key) ?? null });
-    }
-    const idx = new Int32Array(2 * size + 2);
-    const val = new Float64Array(2 * size + 2);
-    for (const [gk, slots] of groups) {
-      const d = gk % this.nd;
-      const curve = (gk - d) / this.nd;
-      const w = this.p.curves[curve][d].w;
-      for (let e = 0; e < w.length; e++) {
-        let len = 0;
-        let selfH = 0;
-        let selfV = 0;
-        for (let q = 0; q < slots.length; q++) {
-          const s = slots[q];
-          const bh = s.h[e];
-          const bv = s.v ? s.v[e] : 0;
-          if (bh === 0 && bv === 0) continue;
-          selfH += bh;
-          idx[len] = s.partner;
-          val[len++] = -bh;
-          if (s.v) {
-            selfV += bv;
-            idx[len] = n + s.partner;
-            val[len++] = -bv;
+    const joint = this.p.joint;
+    for (let curve = 0; curve < n; curve++) {
+      const deg = this.ptr[curve + 1] - this.ptr[curve];
+      if (deg === 0) continue;
+      const partners = this.list.subarray(this.ptr[curve], this.ptr[curve + 1]);
+      // Local coordinates: 0 = the curve, 1..deg = its partners; v offsets after them.
+      const dim = joint ? 2 * (deg + 1) : deg + 1;
+      const local = new Float64Array(dim * dim);
+      const c = new Float64Array(dim);
+      this.p.curves[curve].forEach((series, d) => {
+        const h = this.bh[curve][d];
+        const v = this.bv[curve][d];
+        const counts = series.w;
+        for (let e = 0; e < counts.length; e++) {
+          let selfH = 0;
+          let selfV = 0;
+          let any = false;
+          for (let q = 0; q < deg; q++) {
+            const bh = h[e * deg + q];
+            const bv = v ? v[e * deg + q] : 0;
+            c[1 + q] = -bh;
+            selfH += bh;
+            if (joint) {
+              c[deg + 2 + q] = -bv;
+              selfV += bv;
+            }
+            if (bh !== 0 || bv !== 0) any = true;
+          }
+          if (!any) continue;
+          c[0] = selfH;
+          if (joint) c[deg + 1] = selfV;
+          const inv = 1 / counts[e];
+          for (let a = 0; a < dim; a++) {
+            const ca = c[a] * inv;
+            if (ca === 0) continue;
+            const row = a * dim;
+            for (let b = 0; b <= a; b++) local[row + b] += ca * c[b];
           }
         }
-        if (len === 0) continue;
-        idx[len] = curve;
-        val[len++] = selfH;
-        if (this.p.joint) {
-          idx[len] = n + curve;
-          val[len++] = selfV;
+      });
+      const param = (k: number): number =>
+        k === 0
+          ? curve
+          : k <= deg
+            ? partners[k - 1]
+            : k === deg + 1
+              ? n + curve
+              : n + partners[k - deg - 2];
+      for (let a = 0; a < dim; a++)
+        for (let b = 0; b <= a; b++) {
+          const val = local[a * dim + b];
+          if (val !== 0) out[slotIn(layout, param(a), param(b))] += val;
         }
-        visit(len, idx, val, 1 / w[e]);
-      }
     }
-  }
-
-  /** Σ_p c_p c_pᵀ / n_p over the full parameter vector (size × size, row-major). */
-  meat(): Float64Array {
-    const size = this.p.joint ? 2 * this.n : this.n;
-    const out = new Float64Array(size * size);
-    this.forEachPoint((len, idx, val, inv) => {
-      for (let a = 0; a < len; a++) {
-        const row = idx[a] * size;
-        const va = val[a] * inv;
-        for (let b = 0; b < len; b++) out[row + idx[b]] += va * val[b];
-      }
-    });
     return out;
-  }
-
-  /**
-   * vᵀ·(Σ_p c_p c_pᵀ / n_p)·v without forming the matrix: Σ_p (c_p·v)² / n_p. Enough for the
-   * variance of one linear combination of the offsets (e.g. one shift), at a fraction of the cost.
-   */
-  quadraticForm(v: ArrayLike<number>): number {
-    let sum = 0;
-    this.forEachPoint((len, idx, val, inv) => {
-      let dot = 0;
-      for (let a = 0; a < len; a++) dot += val[a] * v[idx[a]];
-      sum += dot * dot * inv;
-    });
-    return sum;
   }
 }

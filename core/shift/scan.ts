@@ -194,5 +194,20 @@ export function scanPair(
   for (let i = -2; i <= 2; i++) consider(c1.dh + s.step * i);
   const c2: ScanResult = best;
   for (let i = -5; i <= 5; i++) consider(c2.dh + (s.step * i) / 10);
+  // Below the finest grid step: the vertex of the parabola through the best point and its two
+  // neighbours (a chain of hundreds of closely spaced isotherms would otherwise add up the grid's
+  // rounding along the chain).
+  const c3: ScanResult = best;
+  const h = s.step / 10;
+  const left = c3.dh - h >= dhLo - 1e-12 ? score(c3.dh - h) : null;
+  const right = c3.dh + h <= dhHi + 1e-12 ? score(c3.dh + h) : null;
+  if (left && right) {
+    const curvature = left.score + right.score - 2 * c3.score;
+    if (curvature > 0) {
+      const dh = c3.dh + (0.5 * h * (left.score - right.score)) / curvature;
+      const r = Math.abs(dh - c3.dh) <= h ? score(dh) : null;
+      if (r && r.score <= c3.score + 0.25 * curvature) return r;
+    }
+  }
   return best;
 }

@@ -28,6 +28,9 @@ export const SHIFT_CONVENTION =
 /** Standard errors above this many decades are called out. */
 const LARGE_STD_ERR_DECADES = 0.1;
 
+/** Largest number of included isotherms whose full covariance is returned (8 MB of numbers). */
+export const COVARIANCE_MAX_ISOTHERMS = 1000;
+
 export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftResult {
   const s = resolveShiftOptions(dataset, options);
   const ids = new Set(dataset.isotherms.map((i) => i.id));
@@ -53,10 +56,11 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
   for (const T of vertical.extrapolatedK)
     warn(warnings, 'density-extrapolated', `The density table was extrapolated to ${formatC(T)}.`);
 
+  const activeById = new Map(active.map((k, c) => [isos[k].id, c]));
   const lockedByIndex = new Map<number, number>();
   s.locked.forEach((l) => {
-    const c = active.findIndex((k) => isos[k].id === l.id);
-    if (c >= 0) lockedByIndex.set(c, l.log10aT);
+    const c = activeById.get(l.id);
+    if (c !== undefined) lockedByIndex.set(c, l.log10aT);
   });
   const initial = s.initialLog10aT
     ? Float64Array.from(active, (k) => s.initialLog10aT![isos[k].id] ?? NaN)
@@ -100,10 +104,14 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
     );
   }
 
+  const position = new Int32Array(isos.length).fill(-1);
+  active.forEach((k, c) => (position[k] = c));
+  const lockedIds = new Set(s.locked.map((l) => l.id));
+  const excludedIds = new Set(s.excluded);
   const curves: CurveShift[] = isos.map((iso, k) => {
-    const c = active.indexOf(k);
+    const c = position[k];
     const inc = c >= 0 && fit.included[c] === 1;
-    const lockedHere = s.locked.some((l) => l.id === iso.id);
+    const lockedHere = lockedIds.has(iso.id);
     const bT = !inc ? null : vertical.joint ? fit.theta[n + c] : vertical.log10bT[k];
     const bErr = !inc ? null : vertical.joint ? fit.stdErr[n + c] : vertical.stdErr[k];
     return {
@@ -114,7 +122,7 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
       log10bT: bT,
       log10bTStdErr: bErr === null ? null : finiteOrNull(bErr),
       included: inc,
-      excluded: s.excluded.includes(iso.id),
+      excluded: excludedIds.has(iso.id),
       overlapsNothing: c >= 0 ? fit.overlapsNothing[c] === 1 && !lockedHere : false,
       locked: lockedHere,
       rmsResidualDecades: c >= 0 && Number.isFinite(fit.curveRms[c]) ? fit.curveRms[c] : null,
@@ -122,7 +130,7 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
     };
   });
 
-  structuralWarnings(dataset, s, fit, active, curves, includedCount, warnings);
+  structuralWarnings(dataset, s, fit, position, curves, includedCount, warnings);
   const checks = runChecks(dataset, s, fit, active, vertical, warnings);
   return {
     referenceK: s.referenceK,
@@ -131,27 +139,36 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
     curves,
     rmsResidualDecades: Number.isFinite(fit.rms) ? fit.rms : null,
     checks,
+    covariance: covarianceOf(
+      fit,
+      active,
+      curves,
+      isos.map((i) => i.id),
+    ),
     warnings,
     settings: s,
     fit: fit.info,
-    log10aTCovariance: aTCovariance(fit, active, curves),
   };
 }
 
-/** The log10 aT block of the fit's covariance for the included isotherms, by id. */
-function aTCovariance(
+/** The covariance of the included isotherms' shifts, in `curves` order (see ShiftCovariance). */
+function covarianceOf(
   fit: OffsetFit,
   active: number[],
   curves: CurveShift[],
+  ids: string[],
 ): ShiftCovariance | null {
-  const cov = fit.covariance;
-  if (!cov) return null;
-  const size = fit.stdErr.length;
-  const rows = active.map((k, c) => ({ k, c })).filter(({ k }) => curves[k].included);
-  return {
-    ids: rows.map(({ k }) => curves[k].id),
-    log10aT: rows.map(({ c: a }) => rows.map(({ c: b }) => cov[a * size + b])),
-  };
+  const position = new Map(active.map((k, c) => [k, c]));
+  const rows = curves.flatMap((cs, k) => (cs.included ? [k] : []));
+  if (!fit.uncertainty || rows.length === 0 || rows.length > COVARIANCE_MAX_ISOTHERMS) return null;
+  const params = rows.map((k) => position.get(k)!);
+  const flat = fit.uncertainty.covariance(params);
+  const m = rows.length;
+  const locked = rows.map((k) => curves[k].locked);
+  const matrix = rows.map((_, a) =>
+    rows.map((__, b) => (locked[a] || locked[b] ? 0 : flat[a * m + b] + 0)),
+  );
+  return { ids: rows.map((k) => ids[k]), log10aT: matrix };
 }
 
 function finiteOrNull(v: number): number | null {
@@ -162,14 +179,14 @@ function structuralWarnings(
   dataset: Dataset,
   s: ResolvedShiftOptions,
   fit: OffsetFit,
-  active: number[],
+  position: Int32Array,
   curves: CurveShift[],
   includedCount: number,
   warnings: ShiftWarning[],
 ): void {
   const isos = dataset.isotherms;
   curves.forEach((cs, k) => {
-    const c = active.indexOf(k);
+    const c = position[k];
     if (c < 0 || cs.excluded) return;
     if (cs.overlapsNothing)
       warn(

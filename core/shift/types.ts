@@ -190,14 +190,15 @@ export interface FitInfo {
 }
 
 /**
- * Covariance of log10 aT between the included isotherms, decades², as the engine's sandwich
- * estimate gives it (relative to the reference condition: zero rows for locked isotherms and the
- * reference isotherm itself). The shift-model fits read it for generalised least squares.
+ * Covariance of the shifts of the included isotherms, for fits that weight them together (e.g.
+ * generalised least squares of WLF or Arrhenius constants on log10 aT). Relative to Tref, like
+ * the standard errors: rows and columns of locked isotherms and of an isotherm measured at Tref
+ * are 0. Its diagonal is log10aTStdErr².
  */
 export interface ShiftCovariance {
-  /** Isotherm ids, in the order of the matrix rows and columns. */
+  /** Isotherm ids of the rows and columns: every included isotherm, in `curves` order. */
   ids: string[];
-  /** Symmetric matrix, decades². */
+  /** Covariance of log10 aT, decades², ids.length × ids.length. */
   log10aT: number[][];
 }
 
@@ -211,11 +212,15 @@ export interface ShiftResult {
   /** RMS of all residuals after shifting, decades. */
   rmsResidualDecades: number | null;
   checks: ShiftChecks;
+  /**
+   * Covariance of log10 aT between the included isotherms; null when it cannot be determined or
+   * when more than COVARIANCE_MAX_ISOTHERMS (1000) are included (its size grows as their number
+   * squared; the standard errors are given at any size).
+   */
+  covariance: ShiftCovariance | null;
   warnings: ShiftWarning[];
   settings: ResolvedShiftOptions;
   fit: FitInfo;
-  /** Covariance of log10 aT of the included isotherms; null when it was not computed. */
-  log10aTCovariance: ShiftCovariance | null;
 }
 
 /** One point of the master curve: reduced abscissa and reduced quantities. */

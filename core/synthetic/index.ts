@@ -3,6 +3,8 @@ export * from './isotherm-set';
 export * from './creep-set';
 export * from './spectrum-shapes';
 export * from './wander';
+export * from './sweep-file';
+export type { SyntheticDensity, SyntheticOutliers, SyntheticSetOptions } from './isotherm-frame';
 export * from './number-text';
 export type * from './demo-types';
 export * from './demo-scenarios';

@@ -33,6 +33,7 @@ interface Inspection {
     quantities: { symbol: string; unit: string }[];
   }[];
   warnings: { file: string; row: number; column: number; message: string }[];
+  grouping: { separateSweeps: number; cutFromRamps: number; description: string };
 }
 
 describe('thermoshift inspect', () => {
@@ -69,18 +70,24 @@ describe('thermoshift inspect', () => {
     );
   });
 
-  it('thermoshift inspect --tolerance changes the grouping', async () => {
-    const [n, c, bad] = await Promise.all([
+  it('thermoshift inspect --tolerance keeps steady steps apart and says how isotherms were formed', async () => {
+    const [n, c, bad, text] = await Promise.all([
       inspect('--json', `${fixtures}/ramp-spaces.txt`),
       inspect('--json', '--tolerance', '10', `${fixtures}/ramp-spaces.txt`),
       inspect('--tolerance', 'warm', `${fixtures}/ramp-spaces.txt`),
+      inspect('--tolerance', '10', `${fixtures}/ramp-spaces.txt`),
     ]);
+    expect(text.stdout).toMatch(
+      /how they were formed: 2 isotherms: 2 kept apart as complete sweeps at steady, distinct temperatures closer than the 10 K tolerance/,
+    );
     const normal = JSON.parse(n.stdout) as Inspection;
     expect(normal.isotherms.map((i) => i.points)).toEqual([4, 4]);
     const coarse = JSON.parse(c.stdout) as Inspection;
-    // One band of 8 rows holding each frequency twice: the repeats are skipped with a warning.
-    expect(coarse.isotherms.map((i) => i.points)).toEqual([4]);
-    expect(coarse.warnings.filter((w) => /same frequency/.test(w.message))).toHaveLength(4);
+    // The two steps are complete sweeps at steady temperatures 4 K apart: they stay apart even
+    // with a 10 K tolerance, and the inspection says why.
+    expect(coarse.isotherms.map((i) => i.points)).toEqual([4, 4]);
+    expect(coarse.grouping.separateSweeps).toBe(2);
+    expect(coarse.warnings.filter((w) => /same frequency/.test(w.message))).toHaveLength(0);
     expect(bad.status).toBe(2);
     expect(bad.stderr).toMatch(/--tolerance/);
   });

@@ -142,6 +142,7 @@ export function inspection(r: ImportResult) {
       xUnit,
     },
     groupingToleranceK: r.options.groupingToleranceK,
+    grouping: r.grouping,
     files: r.files,
     isotherms: r.groups.map((gr) => ({
       id: gr.id,
@@ -203,6 +204,7 @@ export function inspectionText(r: ImportResult): string {
     }
   }
   out.push('', `Isotherms (grouping tolerance ${v.groupingToleranceK} K):`);
+  out.push(`  how they were formed: ${r.grouping.description}`);
   out.push(
     `  ${'id'.padEnd(5)}${'T (°C)'.padStart(9)}${'spread (K)'.padStart(12)}${'points'.padStart(8)}  ${`${xName} range`.padEnd(22)}quantities`,
   );
@@ -238,7 +240,7 @@ export function registerInspect(program: Command): void {
     .option('--json', 'print the inspection as JSON')
     .option(
       '--tolerance <K>',
-      'measured temperatures closer than this many kelvin form one isotherm (default 1)',
+      'measured temperatures closer than this many kelvin form one isotherm, unless they are separate steady sweeps (default 1)',
     )
     .option(
       '--column <COL=ROLE[:UNIT][@T]>',

@@ -37,7 +37,7 @@ describe('assembleIsotherms()', () => {
       ]),
     ]);
     const warnings: string[] = [];
-    const isos = assembleIsotherms(m, ['a.csv'], 1, 'frequency', (_f, _r, msg) =>
+    const { isotherms: isos } = assembleIsotherms(m, ['a.csv'], 1, 'frequency', (_f, _r, msg) =>
       warnings.push(msg),
     );
     expect(isos.map((i) => [i.id, i.temperatureK, i.x, i.quantities.storageModulus])).toEqual([
@@ -63,7 +63,7 @@ describe('assembleIsotherms()', () => {
       ]),
     ]);
     const seen: [number, string][] = [];
-    const isos = assembleIsotherms(m, ['a.csv'], 1, 'frequency', (_f, row, msg) =>
+    const { isotherms: isos } = assembleIsotherms(m, ['a.csv'], 1, 'frequency', (_f, row, msg) =>
       seen.push([row, msg]),
     );
     expect(isos).toHaveLength(1);

@@ -1,5 +1,9 @@
+import { readFileSync } from 'node:fs';
 import { describe, it, expect } from 'vitest';
 import { bandIndex, groupTemperatures } from '../../../core/io/grouping';
+import { importFiles } from '../../../core/io';
+import { sweepFileText } from '../../../core/synthetic';
+import { inventedMelt } from '../shift/fixtures';
 
 const c = (t: number) => t + 273.15;
 
@@ -33,5 +37,49 @@ describe('groupTemperatures()', () => {
   it('groupTemperatures() handles empty and single inputs', () => {
     expect(groupTemperatures([], 1)).toEqual([]);
     expect(groupTemperatures([300], 1)).toEqual([{ minK: 300, maxK: 300, cut: false }]);
+  });
+});
+
+describe('groupPoints() through importFiles()', () => {
+  // Invented melt measured as a lab exports it: complete sweeps one after another (core/synthetic).
+  const sweeps = (temperaturesK: number[], wanderK: number) =>
+    sweepFileText(inventedMelt({ temperaturesK, pointsPerDecade: 5, seed: 4 }).dataset, {
+      wanderK,
+      seed: 9,
+    });
+
+  it('groupPoints() keeps 200 complete sweeps 0.4 K apart separate with the default 1 K tolerance', () => {
+    const temps = Array.from({ length: 200 }, (_, k) => c(190 + 0.4 * k));
+    for (const wanderK of [0, 0.05]) {
+      const r = importFiles([{ name: 'sweeps.csv', text: sweeps(temps, wanderK) }]);
+      expect(r.groups, `wander ${wanderK} K`).toHaveLength(200);
+      expect(r.groups.every((g) => g.points === 16)).toBe(true);
+      r.groups.forEach((g, k) => expect(Math.abs(g.temperatureK - temps[k])).toBeLessThan(0.06));
+      expect(r.grouping.separateSweeps).toBe(200);
+      expect(r.grouping.description).toMatch(/200 kept apart as complete sweeps/);
+    }
+  });
+
+  it('groupPoints() still joins a repeated sweep at one set point and readings that wander about it', () => {
+    // Two sweeps at 190 °C (the second a repeat) and one at 190.4 °C, readings wandering ±0.2 K:
+    // the repeat is not steadier than the wander, so it joins; 190.4 °C is not either.
+    const r = importFiles([{ name: 'repeat.csv', text: sweeps([c(190), c(190), c(190.4)], 0.2) }]);
+    expect(r.groups).toHaveLength(1);
+    expect(r.grouping.separateSweeps).toBe(0);
+    expect(r.warnings.some((w) => /same frequency/.test(w.message))).toBe(true);
+  });
+
+  it('groupPoints() keeps the columns of a wide table at close temperatures apart', () => {
+    const text = "f (Hz)\tG' 40°C [Pa]\tG' 40.5°C [Pa]\n0.1\t10\t9\n1\t20\t18\n10\t40\t35\n";
+    const r = importFiles([{ name: 'wide.tsv', text }]);
+    expect(r.groups.map((g) => g.points)).toEqual([3, 3]);
+    expect(r.grouping.separateSweeps).toBe(2);
+  });
+
+  it('groupPoints() leaves isotherms of the ramp sample as they were (16 steps of 4 K)', () => {
+    const text = readFileSync('samples/ramp-dma/odm5-heating-ramp.txt', 'utf8');
+    const r = importFiles([{ name: 'odm5-heating-ramp.txt', text }]);
+    expect(r.groups).toHaveLength(16);
+    expect(r.groups.every((g) => g.points === 4 && g.temperatureSpreadK < 1)).toBe(true);
   });
 });

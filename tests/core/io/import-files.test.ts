@@ -323,11 +323,36 @@ describe('importFiles() — grouping', () => {
     expect(r.groups.map((g) => Number((g.temperatureK - 273.15).toFixed(3)))).toEqual([
       0.225, 4.225, 8.225, 12.225, 16.225,
     ]);
-    // With a 5 K tolerance the steps run together into one cut run.
+    expect(r.grouping.separateSweeps).toBe(0);
+    // With a 5 K tolerance the steps stay apart: each is a complete sweep whose temperature
+    // creeps by 0.45 K, far less than the 4 K between steps.
     const wide = importFiles([{ name: 'ramp.txt', text: rows.join('\n') }], {
       groupingToleranceK: 5,
     });
-    expect(wide.groups.length).toBeLessThan(5);
+    expect(wide.groups.map((g) => g.points)).toEqual([4, 4, 4, 4, 4]);
+    expect(wide.grouping.separateSweeps).toBe(5);
+    expect(wide.grouping.description).toMatch(/5 kept apart as complete sweeps/);
+  });
+
+  it('importFiles() cuts a continuous multi-frequency ramp into tolerance-wide isotherms', () => {
+    // 1, 2, 5, 10 Hz over and over while heating 0.1 K per row: no sweep is steadier than the
+    // step to the next, so the tolerance decides.
+    const rows: string[] = ["T (°C) f (Hz) E' (MPa) E'' (MPa)"];
+    for (let i = 0; i < 80; i++)
+      rows.push(`${(20 + 0.1 * i).toFixed(2)} ${[1, 2, 5, 10][i % 4]} ${100 + i} ${10 + i}`);
+    const narrow = importFiles([{ name: 'ramp.txt', text: rows.join('\n') }]);
+    const wide = importFiles([{ name: 'ramp.txt', text: rows.join('\n') }], {
+      groupingToleranceK: 2,
+    });
+    for (const r of [narrow, wide]) {
+      expect(r.grouping.separateSweeps).toBe(0);
+      expect(r.grouping.cutFromRamps).toBe(r.groups.length);
+      expect(r.groups.every((g) => g.temperatureSpreadK <= r.grouping.toleranceK + 1e-9)).toBe(
+        true,
+      );
+    }
+    expect(narrow.groups.length).toBeGreaterThan(wide.groups.length);
+    expect(narrow.grouping.description).toMatch(/cut from a continuous temperature ramp/);
   });
 
   it('importFiles() warns when a group has a single x value and leaves it out', () => {

@@ -4,7 +4,7 @@ import { shiftCovarianceFor } from '../../../core/pipeline/shift-covariance';
 describe('shiftCovarianceFor()', () => {
   it('shiftCovarianceFor() picks the rows and columns of the fitted isotherms, in their order', () => {
     const result = {
-      log10aTCovariance: {
+      covariance: {
         ids: ['T01', 'T02', 'T03'],
         log10aT: [
           [4, 1, 2],
@@ -18,7 +18,7 @@ describe('shiftCovarianceFor()', () => {
       [2, 4],
     ]);
     expect(shiftCovarianceFor(result, ['T04']).matrix).toBeNull();
-    const none = shiftCovarianceFor({ log10aTCovariance: null }, ['T01']);
+    const none = shiftCovarianceFor({ covariance: null }, ['T01']);
     expect(none.matrix).toBeNull();
     expect(none.reason).toMatch(/gave no covariance/);
   });

@@ -6,7 +6,14 @@
  * neighbouring isotherms overlap by two decades or more (common practice when planning TTS tests).
  */
 import { smoothProny, syntheticCreep, syntheticIsotherms } from '../../../core/synthetic';
-import type { ShiftLaw, SyntheticCreepOptions, SyntheticOptions } from '../../../core/synthetic';
+import type {
+  ShiftLaw,
+  SyntheticCreepOptions,
+  SyntheticDensity,
+  SyntheticOptions,
+} from '../../../core/synthetic';
+import type { ShiftResult } from '../../../core/shift';
+import { expectAbsClose } from '../../helpers/assert-close';
 import type { PronySeries } from '../../../core/spectrum/prony-model';
 import type { Dataset } from '../../../core/data/types';
 import { buildProblem } from '../../../core/shift/build-problem';
@@ -251,4 +258,50 @@ export const CREEP_ARRHENIUS: CreepCase = creepCase(
 /** Creep set; `disturbed` gives the first three points of isotherms 8 and 9 30 % noise. */
 export function makeCreep(c: CreepCase, relativeNoise: number, seed: number, disturbed = false) {
   return syntheticCreep({ ...c.options, ...run(c.name, relativeNoise, seed, disturbed) });
+}
+
+/**
+ * The invented melt (MELT, Arrhenius 60 kJ/mol, Tref 463.15 K) at any temperatures and density of
+ * points, 2 % noise: dense sweeps, closely spaced isotherms and, with `density`, an entropic bT.
+ */
+export function inventedMelt(o: {
+  temperaturesK: number[];
+  pointsPerDecade: number;
+  seed: number;
+  xMin?: number;
+  xMax?: number;
+  density?: SyntheticDensity;
+}) {
+  return syntheticIsotherms({
+    testKind: 'oscillatory',
+    deformation: 'shear',
+    referenceK: 463.15,
+    temperaturesK: o.temperaturesK,
+    components: [{ prony: MELT, law: ARRHENIUS_MELT }],
+    xMin: o.xMin ?? 0.1,
+    xMax: o.xMax ?? 100,
+    pointsPerDecade: o.pointsPerDecade,
+    relativeNoise: 0.02,
+    ...(o.density && { density: o.density }),
+    seed: o.seed,
+    name: 'invented melt',
+  });
+}
+
+/** Asserts that the largest |estimated − true log10 aT| is at most `tolerance` decades. */
+export function expectShiftsWithin(
+  r: ShiftResult,
+  truth: number[],
+  tolerance: number,
+  what: string,
+): void {
+  expectAbsClose(
+    maxError(
+      r.curves.map((c) => c.log10aT),
+      truth,
+    ),
+    0,
+    tolerance,
+    what,
+  );
 }

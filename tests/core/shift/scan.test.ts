@@ -24,6 +24,17 @@ describe('scanPair()', () => {
     }
   });
 
+  it('scanPair() refines below the grid: noise-free neighbours within a fiftieth of its finest step', () => {
+    // Chained over hundreds of closely spaced isotherms, grid rounding would add up.
+    for (const [u, v] of [
+      [5, 6],
+      [5, 4],
+    ]) {
+      const r = scanPair(p, u, v, Math.sign(v - u), settings)!;
+      expectAbsClose(r.dh, truth.log10aT[v] - truth.log10aT[u], 0.0001, `pair ${u}→${v}`);
+    }
+  });
+
   it('scanPair() respects the direction prior (aT falls with temperature)', () => {
     // Told that curve 5 is the hotter one (it is colder), with no allowance, the scan may not go
     // beyond dh = 0 although the true offset is positive.

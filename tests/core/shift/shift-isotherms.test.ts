@@ -246,6 +246,21 @@ describe('shiftIsotherms()', () => {
     warm.curves.forEach((c, k) => expectAbsClose(c.log10aT!, cold.curves[k].log10aT!, 0.005, c.id));
   });
 
+  it('shiftIsotherms() says not-converged, with the reason, when the refinement stops short of its tolerance', () => {
+    const { dataset } = make(MELT_WLF_PB, 0.02, 3);
+    const opts = { referenceK: MELT_WLF_PB.options.referenceK, flagOutliers: false };
+    const full = shiftIsotherms(dataset, opts);
+    expect(full.fit.converged).toBe(true);
+    expect(full.fit.reason).toMatch(/tolerance/);
+    expect(codes(full)).not.toContain('not-converged');
+    // One iteration from the scan's start cannot meet 0.001 decades.
+    const short = shiftIsotherms(dataset, { ...opts, maxIterations: 1 });
+    expect(short.fit.converged).toBe(false);
+    expect(short.fit.reason).toMatch(/iteration limit/);
+    const w = short.warnings.find((x) => x.code === 'not-converged');
+    expect(w?.message).toMatch(/without converging \(iteration limit/);
+  });
+
   it('shiftIsotherms() ignores an excluded isotherm', () => {
     const { dataset, truth } = make(MELT_ARRHENIUS, 0.02, 7);
     const r = shiftIsotherms(dataset, { referenceK: 463.15, excluded: ['T06'] });
