@@ -105,7 +105,7 @@ export async function expandWorkbooks(
   const out: SourceFile[] = [];
   for (const f of files) {
     if (isWorkbookName(f.name) && f.bytes)
-      out.push(...(await workbookToSourceFiles(f.name, f.bytes)));
+      for (const sheet of await workbookToSourceFiles(f.name, f.bytes)) out.push(sheet);
     else out.push({ name: f.name, text: f.text ?? '' });
   }
   return out;

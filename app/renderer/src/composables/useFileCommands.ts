@@ -27,6 +27,8 @@ export interface UseFileCommandsReturn {
   recent: Ref<RecentEntry[]>;
   refreshRecent(): Promise<void>;
   openData(): Promise<void>;
+  /** A folder of data files (the dialog; or the browser's folder picker). */
+  openFolder(): Promise<void>;
   openAnalysis(): Promise<void>;
   openRecent(id: string): Promise<void>;
   /** Files from drag-and-drop: an analysis file opens, anything else goes to the import preview. */
@@ -116,6 +118,11 @@ export function useFileCommands(
     openData: () =>
       guard('Import', async () => {
         const files = await access.openDataFiles();
+        if (files.length) await previewData(files, true);
+      }),
+    openFolder: () =>
+      guard('Import folder', async () => {
+        const files = await access.openDataFolder();
         if (files.length) await previewData(files, true);
       }),
     openAnalysis: () =>
