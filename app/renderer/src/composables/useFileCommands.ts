@@ -89,6 +89,7 @@ export function useFileCommands(
   const outputOptions = () => ({
     date: today(),
     modulusUnit: wb.doc.value?.display.modulus ?? 'Pa',
+    frequencyUnit: wb.doc.value?.display.frequency ?? 'rad/s',
   });
 
   const refreshRecent = (): Promise<void> =>
