@@ -128,6 +128,14 @@ describe('importing a folder and a workbook', () => {
     await accept(/QS-72/);
     expect(await page.locator('tr[data-isotherm]').count()).toBe(11);
     folderShifts = await shifts();
+    // With a long sample name the name gives way (…), not the invented-data badge.
+    const badge = await page.$eval('.command-bar .badge', (b) => ({
+      full: b.scrollWidth <= b.clientWidth + 1,
+      right: b.getBoundingClientRect().right,
+      nav: b.closest('.command-bar')!.querySelector('nav')!.getBoundingClientRect().left,
+    }));
+    expect(badge.full, 'badge not clipped').toBe(true);
+    expect(badge.right, 'badge left of the buttons').toBeLessThanOrEqual(badge.nav);
 
     const tabs = await page.$$eval('[data-view-tab]:not([disabled])', (els) =>
       els.map((e) => e.getAttribute('data-view-tab')!),
