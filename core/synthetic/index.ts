@@ -14,3 +14,5 @@ export { demoTruth } from './demo-truth';
 export type { DemoSample } from './demo-samples';
 export { buildDemoSample, demoDataset, demoSampleFiles } from './demo-samples';
 export * from './workbook-writer';
+export type { DemoBinaryFile } from './demo-workbook';
+export { DEMO_WORKBOOK_PATH, demoWorkbook, demoWorkbookReadme } from './demo-workbook';
