@@ -32,7 +32,7 @@ export async function run(): Promise<void> {
     const samples = listSamples([], [input]);
     let failed = 0;
     const t0 = performance.now();
-    const rows = runBatch(samples, {
+    const rows = await runBatch(samples, {
       settings: { referenceTemperature: 100 },
       settingsSource: 'bench',
       out: join(root, 'out'),

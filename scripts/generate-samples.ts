@@ -7,6 +7,8 @@
  * files in its own layout (long CSV with a units row; one file per isotherm with decimal commas
  * and CRLF; a wide tab-delimited table; a space-aligned temperature-ramp table), a README, and
  * truth.json with the true parameters, so tests can check how well a master curve recovers them.
+ * samples/workbooks/ holds the seal-dma data once more as an .xlsx workbook (one sheet per
+ * isotherm), for trying the workbook import.
  * The output is byte-for-byte reproducible; tests/scripts/generate-samples.test.ts checks that
  * the committed files match. See docs/samples.md.
  *
@@ -15,7 +17,12 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { demoSampleFiles } from '../core/synthetic/index.ts';
+import {
+  DEMO_WORKBOOK_PATH,
+  demoSampleFiles,
+  demoWorkbook,
+  demoWorkbookReadme,
+} from '../core/synthetic/index.ts';
 
 /** Writes every demo sample file under `outDir`; returns the paths written, relative to it. */
 export function generateSamples(outDir: string): string[] {
@@ -25,7 +32,12 @@ export function generateSamples(outDir: string): string[] {
     mkdirSync(dirname(target), { recursive: true });
     writeFileSync(target, f.content, 'utf8');
   }
-  return files.map((f) => f.path);
+  // The seal-dma data once more as an .xlsx workbook (one sheet per isotherm), with its README.
+  const book = join(outDir, DEMO_WORKBOOK_PATH);
+  mkdirSync(dirname(book), { recursive: true });
+  writeFileSync(book, demoWorkbook());
+  writeFileSync(join(dirname(book), 'README.md'), demoWorkbookReadme(), 'utf8');
+  return [...files.map((f) => f.path), DEMO_WORKBOOK_PATH, 'workbooks/README.md'];
 }
 
 const isEntry = process.argv[1] && resolve(process.argv[1]) === fileURLToPath(import.meta.url);

@@ -7,10 +7,10 @@ import { extname } from 'node:path';
 import { handleChannel, type HandleOptions } from './ipc';
 import type { RecentStore } from './recent-files';
 import type { RecentKind } from '../shared/ipc-channels';
-import { readTextFile, writeFileAtomic } from './text-files';
+import { dataFilesInFolder, readDataFiles, readTextFile, writeFileAtomic } from './text-files';
 
 const DATA_FILTERS: FileFilter[] = [
-  { name: 'Measurement tables', extensions: ['csv', 'txt', 'tsv', 'dat', 'asc'] },
+  { name: 'Measurement tables', extensions: ['csv', 'txt', 'tsv', 'dat', 'asc', 'xlsx'] },
   { name: 'All files', extensions: ['*'] },
 ];
 const ANALYSIS_FILTERS: FileFilter[] = [
@@ -47,8 +47,24 @@ export function setupFiles({ getWindow, recent, ...ipc }: FileSetup): void {
         filters: DATA_FILTERS,
       });
       if (r.canceled || r.filePaths.length === 0) return [];
-      const files = await Promise.all(r.filePaths.map(readTextFile));
+      const files = await readDataFiles(r.filePaths);
       pending.data = r.filePaths;
+      return files;
+    },
+    ipc,
+  );
+
+  handleChannel(
+    'data-folder:open',
+    async () => {
+      const r = await dialog.showOpenDialog(parent(), {
+        title: 'Open a folder of measurement files',
+        properties: ['openDirectory'],
+      });
+      if (r.canceled || r.filePaths.length === 0) return [];
+      const paths = await dataFilesInFolder(r.filePaths[0]);
+      const files = await readDataFiles(paths);
+      pending.data = paths;
       return files;
     },
     ipc,
@@ -107,7 +123,7 @@ export function setupFiles({ getWindow, recent, ...ipc }: FileSetup): void {
     'recent:open',
     async ({ id }) => {
       const { kind, paths } = await recent.paths(id);
-      const files = await Promise.all(paths.map(readTextFile));
+      const files = kind === 'data' ? await readDataFiles(paths) : [await readTextFile(paths[0])];
       pending[kind] = paths;
       return { kind, files };
     },

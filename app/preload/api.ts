@@ -21,6 +21,8 @@ export function createApi(invoke: Invoke) {
   return {
     /** Shows an open dialog for data files and returns their names and text. */
     openDataFiles: () => invoke('data-files:open', undefined),
+    /** Shows a folder dialog and returns the data files inside it (names and text). */
+    openDataFolder: () => invoke('data-folder:open', undefined),
     /** Shows a save dialog and writes an export. */
     saveFile: (request: SaveFileRequest) => invoke('file:save', request),
     /** Shows an open dialog for a saved analysis. */
@@ -46,6 +48,7 @@ export type ThermoshiftApi = ReturnType<typeof createApi>;
 /** Names of the functions exposed; the preload test checks the object has exactly these. */
 export const API_FUNCTIONS = [
   'openDataFiles',
+  'openDataFolder',
   'saveFile',
   'openAnalysis',
   'saveAnalysis',

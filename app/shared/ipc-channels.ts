@@ -44,6 +44,11 @@ export interface RecentOpened {
 export interface IpcChannels {
   /** Dialog to pick one or more data files; [] when cancelled. */
   'data-files:open': { request: void; response: TextFile[] };
+  /**
+   * Dialog to pick a folder: the data files directly inside it (an .xlsx workbook gives one file
+   * per sheet); [] when cancelled.
+   */
+  'data-folder:open': { request: void; response: TextFile[] };
   /** Save dialog for an export (CSV, HTML, PNG, SVG, JSON). */
   'file:save': { request: SaveFileRequest; response: SaveOutcome };
   /** Dialog to pick a saved analysis; null when cancelled. */
@@ -68,6 +73,7 @@ export type IpcResponse<C extends IpcChannel> = IpcChannels[C]['response'];
 
 export const IPC_CHANNELS: readonly IpcChannel[] = [
   'data-files:open',
+  'data-folder:open',
   'file:save',
   'analysis:open',
   'analysis:save',

@@ -21,6 +21,7 @@ const noPayload = z.undefined();
 
 export const IPC_SCHEMAS = {
   'data-files:open': noPayload,
+  'data-folder:open': noPayload,
   'file:save': z
     .object({
       suggestedName: fileNameSchema,

@@ -1,8 +1,14 @@
 import { parseTemperatureText } from '../units';
 import type { TemperatureReading } from '../units';
+import { splitSheetName } from './workbook';
 
-/** File name without folders and extension. */
+/**
+ * File name without folders and extension. A workbook's sheet ("seal.xlsx › 40 °C", see
+ * workbook.ts) stands for a file of its own: its base name is the sheet's name, whole.
+ */
 export function baseName(name: string): string {
+  const sheet = splitSheetName(name);
+  if (sheet) return sheet.sheet;
   const file = name.split(/[\\/]/).pop() ?? name;
   const dot = file.lastIndexOf('.');
   return dot > 0 ? file.slice(0, dot) : file;
@@ -30,6 +36,9 @@ export function temperatureFromFileName(name: string): TemperatureReading | unde
 
 /** The file name with its temperature part removed: "elastomer_40C.csv" → "elastomer". */
 export function sampleNameFromFileName(name: string): string {
+  // A workbook holds one sample; its sheets are usually named by temperature or "Sheet1".
+  const sheet = splitSheetName(name);
+  if (sheet) return sampleNameFromFileName(sheet.workbook);
   const base = baseName(name);
   const stripped = base
     .replace(FILE_TEMPERATURE, '')

@@ -2,6 +2,7 @@
 export type ImportErrorCode =
   | 'emptyFile'
   | 'notText'
+  | 'notWorkbook'
   | 'noNumericData'
   | 'noHeader'
   | 'noTemperature'

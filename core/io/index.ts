@@ -19,3 +19,10 @@ export type {
   ResolvedImportOptions,
   SourceFile,
 } from './types';
+export {
+  expandWorkbooks,
+  isWorkbookName,
+  SHEET_SEPARATOR,
+  splitSheetName,
+  workbookToSourceFiles,
+} from './workbook';

@@ -12,7 +12,24 @@ import type { ChartSeries, ChartSpec, LegendEntry } from './svg/chart-types';
 import { temperatureColour } from './svg/colour';
 import { toCelsius } from '../pipeline/temperature';
 import { vanGurpPalmenSeries } from '../pipeline/van-gurp-palmen';
-import { outputUnitLabel, toOutputUnit, type ModulusUnit } from './output-units';
+import {
+  outputUnitLabel,
+  toOutputFrequency,
+  toOutputUnit,
+  type FrequencyUnit,
+  type ModulusUnit,
+} from './output-units';
+
+/** The abscissa of a chart in the output frequency unit (time stays in s). */
+function xOut(a: Analysis, x: number, f: FrequencyUnit): number {
+  return a.sample.abscissa === 'angularFrequency' ? toOutputFrequency(x, f) : x;
+}
+
+function measuredXLabel(a: Analysis, f: FrequencyUnit): string {
+  return a.sample.abscissa === 'angularFrequency' && f === 'Hz'
+    ? 'frequency f (Hz)'
+    : abscissaLabel(a.sample.abscissa);
+}
 
 const W = 640;
 const H = 380;
@@ -56,7 +73,11 @@ function yLabel(a: Analysis, qs: QuantityId[], unit: ModulusUnit, reduced: boole
   return `${reduced ? 'reduced ' : ''}${sym}${u ? ` (${u})` : ''}`;
 }
 
-export function isothermsChart(a: Analysis, unit: ModulusUnit): ChartSpec {
+export function isothermsChart(
+  a: Analysis,
+  unit: ModulusUnit,
+  frequencyUnit: FrequencyUnit = 'rad/s',
+): ChartSpec {
   const qs = plottedQuantities(a);
   const [lo, hi] = temperatureRange(a);
   const series: ChartSeries[] = [];
@@ -68,7 +89,7 @@ export function isothermsChart(a: Analysis, unit: ModulusUnit): ChartSpec {
       const idx = iso.x.map((_, i) => i).filter((i) => iso.mask[i]);
       series.push({
         name: `${toCelsius(iso.temperatureK)} °C ${q}`,
-        x: idx.map((i) => iso.x[i]),
+        x: idx.map((i) => xOut(a, iso.x[i], frequencyUnit)),
         y: idx.map((i) => toOutputUnit(q, v[i], unit)),
         colour,
         ...STYLE[k % 2],
@@ -80,7 +101,7 @@ export function isothermsChart(a: Analysis, unit: ModulusUnit): ChartSpec {
     title: 'Measured isotherms',
     width: W,
     height: H,
-    x: { kind: 'log', label: abscissaLabel(a.sample.abscissa) },
+    x: { kind: 'log', label: measuredXLabel(a, frequencyUnit) },
     y: { kind: 'log', label: yLabel(a, qs, unit, false) },
     series,
     legend: quantityLegend(a, qs, unit),
@@ -88,7 +109,11 @@ export function isothermsChart(a: Analysis, unit: ModulusUnit): ChartSpec {
   };
 }
 
-export function masterCurveChart(a: Analysis, unit: ModulusUnit): ChartSpec {
+export function masterCurveChart(
+  a: Analysis,
+  unit: ModulusUnit,
+  frequencyUnit: FrequencyUnit = 'rad/s',
+): ChartSpec {
   const qs = plottedQuantities(a);
   const [lo, hi] = temperatureRange(a);
   const mc = a.masterCurve;
@@ -108,7 +133,7 @@ export function masterCurveChart(a: Analysis, unit: ModulusUnit): ChartSpec {
       if (!v) return;
       series.push({
         name: `${id} ${q}`,
-        x: idx.map((i) => mc.reducedX[i]),
+        x: idx.map((i) => xOut(a, mc.reducedX[i], frequencyUnit)),
         y: idx.map((i) => {
           const value = v[i];
           return value === null ? Number.NaN : toOutputUnit(q, value, unit);
@@ -127,7 +152,7 @@ export function masterCurveChart(a: Analysis, unit: ModulusUnit): ChartSpec {
       if (v)
         series.push({
           name: `outliers ${q}`,
-          x: out.map((i) => mc.reducedX[i]),
+          x: out.map((i) => xOut(a, mc.reducedX[i], frequencyUnit)),
           y: out.map((i) => {
             const value = v[i];
             return value === null ? Number.NaN : toOutputUnit(q, value, unit);
@@ -158,7 +183,7 @@ export function masterCurveChart(a: Analysis, unit: ModulusUnit): ChartSpec {
     for (const [q, f] of curves.filter(([q]) => qs.includes(q)))
       series.push({
         name: `Prony ${q}`,
-        x: grid,
+        x: grid.map((x) => xOut(a, x, frequencyUnit)),
         y: grid.map((x) => toOutputUnit(q, f(x), unit)),
         colour: '#111',
         line: 'solid',
@@ -168,7 +193,9 @@ export function masterCurveChart(a: Analysis, unit: ModulusUnit): ChartSpec {
   }
   const xLabel =
     a.sample.abscissa === 'angularFrequency'
-      ? 'reduced frequency aT·ω (rad/s)'
+      ? frequencyUnit === 'Hz'
+        ? 'reduced frequency aT·f (Hz)'
+        : 'reduced frequency aT·ω (rad/s)'
       : 'reduced time t/aT (s)';
   return {
     id: 'chart-master',

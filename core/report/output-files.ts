@@ -7,7 +7,7 @@ import { analysisSummary } from '../pipeline/summary';
 import { CONVENTIONS } from '../pipeline/conventions';
 import type { Analysis } from '../pipeline/types';
 import { masterCurveCsv, modelsCsv, pronyCsv, shiftTableCsv } from './csv';
-import type { ModulusUnit } from './output-units';
+import type { FrequencyUnit, ModulusUnit } from './output-units';
 import { reportHtml } from './report-html';
 
 /** Output file names (documented in docs/cli.md). */
@@ -26,6 +26,11 @@ export interface OutputFileOptions {
   date: string;
   /** Unit of moduli in the tables and the report. @default 'Pa' */
   modulusUnit?: ModulusUnit;
+  /**
+   * Unit of frequencies in the master-curve table and the report: ω in rad/s, or f = ω/2π in Hz.
+   * @default 'rad/s'
+   */
+  frequencyUnit?: FrequencyUnit;
 }
 
 /** One export: its file name, a label for menus, and how its content is built. */
@@ -54,7 +59,7 @@ export const OUTPUT_FILE_SPECS: readonly OutputFileSpec[] = [
   {
     name: OUTPUT_FILES.masterCurve,
     label: 'Master curve (CSV)',
-    build: (a, o) => masterCurveCsv(a, o.modulusUnit ?? 'Pa'),
+    build: (a, o) => masterCurveCsv(a, o.modulusUnit ?? 'Pa', o.frequencyUnit ?? 'rad/s'),
   },
   { name: OUTPUT_FILES.modelsCsv, label: 'Shift-factor models (CSV)', build: (a) => modelsCsv(a) },
   {
@@ -80,7 +85,12 @@ export const OUTPUT_FILE_SPECS: readonly OutputFileSpec[] = [
   {
     name: OUTPUT_FILES.report,
     label: 'Datasheet report (HTML, prints to PDF)',
-    build: (a, o) => reportHtml(a, { date: o.date, modulusUnit: o.modulusUnit ?? 'Pa' }),
+    build: (a, o) =>
+      reportHtml(a, {
+        date: o.date,
+        modulusUnit: o.modulusUnit ?? 'Pa',
+        frequencyUnit: o.frequencyUnit ?? 'rad/s',
+      }),
   },
 ];
 

@@ -42,3 +42,14 @@ export function outputUnitLabel(q: QuantityId, unit: ModulusUnit): string {
       return quantityUnit(q);
   }
 }
+
+/**
+ * Unit of frequencies in exports and reports: angular frequency ω in rad/s (the SI value), or
+ * ordinary frequency f = ω/2π in Hz (SI Brochure, BIPM 2019, §2.3.4: 1 Hz = 1 s⁻¹ for cycles).
+ */
+export type FrequencyUnit = 'rad/s' | 'Hz';
+
+/** Radians per second to the chosen frequency unit: f = ω/(2π) for Hz, ω itself for rad/s. */
+export function toOutputFrequency(omegaRadPerS: number, unit: FrequencyUnit): number {
+  return unit === 'Hz' ? omegaRadPerS / (2 * Math.PI) : omegaRadPerS;
+}

@@ -22,13 +22,15 @@ import { renderChart } from './svg/render-chart';
 import type { ChartSpec } from './svg/chart-types';
 import { htmlTable, type TableSpec } from './html-table';
 import { indicatorTable, modelTable, pronyTable, settingsTable, shiftTable } from './tables';
-import type { ModulusUnit } from './output-units';
+import type { FrequencyUnit, ModulusUnit } from './output-units';
 
 export interface ReportOptions {
   /** Date printed in the title block (passed in: core reads no clock), e.g. "2026-12-01". */
   date: string;
   /** Unit for moduli in charts and tables. @default 'Pa' */
   modulusUnit?: ModulusUnit;
+  /** Unit of frequencies in charts and tables: ω in rad/s, or f = ω/2π in Hz. @default 'rad/s' */
+  frequencyUnit?: FrequencyUnit;
   /** Title override. @default "Master curve datasheet — <sample name>" */
   title?: string;
 }
@@ -75,6 +77,7 @@ function warningsBlock(a: Analysis): string {
 
 export function reportHtml(a: Analysis, options: ReportOptions): string {
   const unit = options.modulusUnit ?? 'Pa';
+  const freq = options.frequencyUnit ?? 'rad/s';
   const title = options.title ?? `Master curve datasheet — ${a.sample.name}`;
   const tref = toCelsius(a.referenceTemperatureK);
   const body = [
@@ -83,11 +86,11 @@ export function reportHtml(a: Analysis, options: ReportOptions): string {
     warningsBlock(a),
     '<section id="charts"><h2>Data and master curve</h2>',
     chartBlock(
-      isothermsChart(a, unit),
+      isothermsChart(a, unit, freq),
       'Measured isotherms, coloured by temperature (unshifted; masked points not shown).',
     ),
     chartBlock(
-      masterCurveChart(a, unit),
+      masterCurveChart(a, unit, freq),
       `Master curve at Tref = ${tref} °C: every included point at its reduced abscissa, coloured by the temperature it was measured at${a.prony ? '; the line is the fitted Prony series' : ''}. ${CONVENTIONS.horizontal}.`,
     ),
     chartBlock(
@@ -107,7 +110,7 @@ export function reportHtml(a: Analysis, options: ReportOptions): string {
     table(shiftTable(a)),
     table(modelTable(a)),
     table(pronyTable(a, unit)),
-    table(indicatorTable(a)),
+    table(indicatorTable(a, freq)),
     '</section>',
     '<section id="method"><h2>Method and settings</h2>',
     ...methodParagraphs(a).map((p) => `<p>${esc(p)}</p>`),

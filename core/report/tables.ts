@@ -8,7 +8,12 @@ import { toCelsius, toKelvinText } from '../pipeline/temperature';
 import { formatFixed, formatNumber } from './format';
 import { quantitySymbol } from '../data/quantities';
 import type { TableSpec } from './html-table';
-import { modulusFactor, type ModulusUnit } from './output-units';
+import {
+  modulusFactor,
+  toOutputFrequency,
+  type FrequencyUnit,
+  type ModulusUnit,
+} from './output-units';
 import { pronySymbols } from '../spectrum/prony-symbols';
 
 const CONVENTION_NOTE = `Conventions: ${CONVENTIONS.horizontal}. ${CONVENTIONS.vertical}.`;
@@ -206,14 +211,24 @@ export function pronyTable(a: Analysis, unit: ModulusUnit): TableSpec | null {
   };
 }
 
-export function indicatorTable(a: Analysis): TableSpec | null {
+/** Frequencies (rad/s) are written in `frequencyUnit`: f = ω/2π in Hz. */
+export function indicatorTable(
+  a: Analysis,
+  frequencyUnit: FrequencyUnit = 'rad/s',
+): TableSpec | null {
   if (a.indicators.length === 0) return null;
+  const hz = (u: string): boolean => u === 'rad/s' && frequencyUnit === 'Hz';
   return {
     id: 'table-indicators',
     caption: 'Indicators',
     head: ['indicator', 'value', 'unit', 'note'],
     numeric: [1],
-    rows: a.indicators.map((i) => [i.label, formatNumber(i.value, 4), i.unit, i.note ?? '']),
+    rows: a.indicators.map((i) => [
+      i.label,
+      formatNumber(hz(i.unit) ? toOutputFrequency(i.value, 'Hz') : i.value, 4),
+      hz(i.unit) ? 'Hz' : i.unit,
+      i.note ?? '',
+    ]),
   };
 }
 

@@ -139,6 +139,9 @@ export function demoIndexReadme(scenarios: DemoScenario[]): string {
         `| \`${s.id}/\` | ${s.product} (${s.firm}) | ${s.testKind}, ${s.deformation} | ${s.layout} |`,
     ),
     '',
+    '`workbooks/seal-dma.xlsx` holds the `seal-dma/` data once more as an .xlsx workbook, one ' +
+      'sheet per isotherm (its truth is `seal-dma/truth.json`).',
+    '',
     'Demo data only: not for design. Master curves need confirmation by testing and must follow ' +
       'the applicable codes and licensed engineering practice.',
     '',

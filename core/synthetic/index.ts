@@ -13,3 +13,6 @@ export type { DemoTruth, DemoTruthIsotherm, DemoTruthLaw } from './demo-truth';
 export { demoTruth } from './demo-truth';
 export type { DemoSample } from './demo-samples';
 export { buildDemoSample, demoDataset, demoSampleFiles } from './demo-samples';
+export * from './workbook-writer';
+export type { DemoBinaryFile } from './demo-workbook';
+export { DEMO_WORKBOOK_PATH, demoWorkbook, demoWorkbookReadme } from './demo-workbook';

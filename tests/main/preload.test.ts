@@ -30,6 +30,7 @@ describe('preload', () => {
     const api = exposed.thermoshift as Record<string, (...a: unknown[]) => Promise<unknown>>;
     const calls: [string, unknown[], string, unknown][] = [
       ['openDataFiles', [], 'data-files:open', undefined],
+      ['openDataFolder', [], 'data-folder:open', undefined],
       [
         'saveFile',
         [{ suggestedName: 'a.csv', content: 'x', encoding: 'utf8' }],

@@ -4,6 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { IpcMainInvokeEvent } from 'electron';
 import type { IpcMainLike } from '../../app/main/ipc';
+import { writeWorkbook } from '../../core/synthetic';
 
 const dialog = { showOpenDialog: vi.fn(), showSaveDialog: vi.fn() };
 vi.mock('electron', () => ({ dialog }));
@@ -96,6 +97,78 @@ describe('setupFiles()', () => {
     const r = (await h.call('data-files:open')) as { ok: boolean; message: string };
     expect(r.ok).toBe(false);
     expect(r.message).toMatch(/missing\.csv/);
+  });
+});
+
+describe('setupFiles() folders and workbooks', () => {
+  const folder = mkdtempSync(join(tmpdir(), 'ts-folder-'));
+  writeFileSync(join(folder, 'pad_10C.csv'), 'f,E\n1,2\n');
+  writeFileSync(join(folder, 'pad_2C.csv'), 'f,E\n1,3\n');
+  writeFileSync(join(folder, 'README.md'), 'notes');
+  writeFileSync(join(folder, '.hidden.csv'), 'x');
+  writeFileSync(
+    join(folder, 'pad.xlsx'),
+    writeWorkbook([
+      {
+        name: '40 °C',
+        rows: [
+          ['f', 'E'],
+          [1, 4],
+        ],
+      },
+      {
+        name: '60 °C',
+        rows: [
+          ['f', 'E'],
+          [1, 5],
+        ],
+      },
+    ]),
+  );
+
+  it('setupFiles() opens a chosen folder: its data files by name, a workbook as its sheets', async () => {
+    const h = harness();
+    dialog.showOpenDialog.mockResolvedValue({ canceled: false, filePaths: [folder] });
+    const r = (await h.call('data-folder:open')) as {
+      ok: true;
+      value: { name: string; text: string }[];
+    };
+    expect(r.ok).toBe(true);
+    expect(r.value.map((f) => f.name)).toEqual([
+      'pad_2C.csv',
+      'pad_10C.csv',
+      'pad.xlsx › 40 °C',
+      'pad.xlsx › 60 °C',
+    ]);
+    expect(r.value[2].text).toBe('f\tE\n1\t4');
+    expect(dialog.showOpenDialog.mock.calls[0][1].properties).toEqual(['openDirectory']);
+    // The folder's files, not the folder, are remembered once they opened.
+    await h.call('recent:confirm', { kind: 'data' });
+    const recent = (await h.call('recent:list')) as { value: { id: string; label: string }[] };
+    const again = (await h.call('recent:open', { id: recent.value[0].id })) as {
+      value: { files: { name: string }[] };
+    };
+    expect(again.value.files.map((f) => f.name)).toEqual(r.value.map((f) => f.name));
+  });
+
+  it('setupFiles() says so when a chosen folder holds no data files', async () => {
+    const h = harness();
+    const empty = mkdtempSync(join(tmpdir(), 'ts-empty-'));
+    writeFileSync(join(empty, 'notes.md'), 'x');
+    dialog.showOpenDialog.mockResolvedValue({ canceled: false, filePaths: [empty] });
+    const r = (await h.call('data-folder:open')) as { ok: boolean; message: string };
+    expect(r.ok).toBe(false);
+    expect(r.message).toMatch(/holds no data files/);
+  });
+
+  it('setupFiles() opens a picked workbook as its sheets', async () => {
+    const h = harness();
+    dialog.showOpenDialog.mockResolvedValue({
+      canceled: false,
+      filePaths: [join(folder, 'pad.xlsx')],
+    });
+    const r = (await h.call('data-files:open')) as { value: { name: string }[] };
+    expect(r.value.map((f) => f.name)).toEqual(['pad.xlsx › 40 °C', 'pad.xlsx › 60 °C']);
   });
 });
 

@@ -12,7 +12,7 @@ import { THERMOSHIFT_VERSION } from '../../../core/pipeline/version.ts';
 import { toCelsius } from '../../../core/pipeline/temperature.ts';
 import type { Settings } from '../../../core/pipeline/settings.ts';
 import { addSampleOptions, resolveSettings, type SampleOptionValues } from '../sample-options.ts';
-import { DATA_FILE_PATTERN, readInputs } from '../io/read-inputs.ts';
+import { DATA_FILE_PATTERN, readWorkbookInputs } from '../io/read-inputs.ts';
 import { analyseSample } from '../run-sample.ts';
 import { writeOutputs } from '../outputs.ts';
 import { assertWritable, writeFileAtomic } from '../io/atomic-write.ts';
@@ -72,12 +72,19 @@ export interface BatchRunOptions {
 }
 
 /** Runs the batch; returns the index rows (one per sample). Shared with bench/batch.bench.ts. */
-export function runBatch(samples: BatchSample[], o: BatchRunOptions): BatchIndexRow[] {
+export async function runBatch(
+  samples: BatchSample[],
+  o: BatchRunOptions,
+): Promise<BatchIndexRow[]> {
   const rows: BatchIndexRow[] = [];
-  samples.forEach((s, k) => {
+  for (const [k, s] of samples.entries()) {
     const prefix = `[${k + 1}/${samples.length}] ${s.name}`;
     try {
-      const analysis = analyseSample(readInputs(s.paths), o.settings, o.settingsSource);
+      const analysis = analyseSample(
+        await readWorkbookInputs(s.paths),
+        o.settings,
+        o.settingsSource,
+      );
       writeOutputs(analysis, join(o.out, s.name), {
         force: o.force,
         modulusUnit: o.settings.modulusUnit ?? 'Pa',
@@ -94,7 +101,7 @@ export function runBatch(samples: BatchSample[], o: BatchRunOptions): BatchIndex
       rows.push({ sample: s.name, folder: s.name, result: { ok: false, error: message } });
       o.log(`${prefix}: FAILED: ${message}`);
     }
-  });
+  }
   return rows;
 }
 
@@ -114,7 +121,7 @@ export function registerBatch(program: Command): void {
     .option('--force', 'overwrite existing output files')
     .option('--date <YYYY-MM-DD>', 'date printed in the reports (default: today)');
   addSampleOptions(cmd);
-  cmd.action((paths: string[], o: BatchOptions) => {
+  cmd.action(async (paths: string[], o: BatchOptions) => {
     let samples: BatchSample[];
     let settings: Settings;
     try {
@@ -131,7 +138,7 @@ export function registerBatch(program: Command): void {
     const date = checkDate(o.date);
     const indexPath = join(o.out, 'index.csv');
     assertWritable([indexPath], !!o.force); // fail before hours of work, not after
-    const rows = runBatch(samples, {
+    const rows = await runBatch(samples, {
       settings,
       settingsSource: o.settings ?? 'command line',
       out: o.out,

@@ -8,7 +8,7 @@ import { toCelsius } from '../../../core/pipeline/temperature.ts';
 import type { Analysis } from '../../../core/pipeline/types.ts';
 import { formatFixed } from '../../../core/report/format.ts';
 import { addSampleOptions, resolveSettings, type SampleOptionValues } from '../sample-options.ts';
-import { readInputs } from '../io/read-inputs.ts';
+import { readWorkbookInputs } from '../io/read-inputs.ts';
 import { analyseSample } from '../run-sample.ts';
 import { today, writeOutputs } from '../outputs.ts';
 import { toCliError } from '../error-map.ts';
@@ -63,13 +63,17 @@ export function registerBuild(program: Command): void {
       (v: string, prev: string[] = []) => [...prev, v],
     );
   addSampleOptions(cmd);
-  cmd.action((files: string[], o: BuildOptions) => {
+  cmd.action(async (files: string[], o: BuildOptions) => {
     try {
       const date = checkDate(o.date);
       const queries = o.predict ?? [];
       queries.forEach(parsePredictQuery); // a typo in a query fails before the analysis runs
       const settings = resolveSettings(o);
-      const analysis = analyseSample(readInputs(files), settings, o.settings ?? 'command line');
+      const analysis = analyseSample(
+        await readWorkbookInputs(files),
+        settings,
+        o.settings ?? 'command line',
+      );
       if (!o.quiet) printWarnings(analysis);
       const predictions = runPredictions(analysis, queries);
       if (o.out) {

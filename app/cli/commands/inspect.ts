@@ -12,13 +12,19 @@ import type {
   ImportResult,
   SourceFile,
 } from '../../../core/io/index.ts';
-import { COLUMN_ROLES, ImportError, importFiles } from '../../../core/io/index.ts';
+import {
+  COLUMN_ROLES,
+  expandWorkbooks,
+  ImportError,
+  importFiles,
+  isWorkbookName,
+} from '../../../core/io/index.ts';
 import { parseTemperatureText } from '../../../core/units/index.ts';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
 
 /** File endings taken from a folder argument. */
-const DATA_FILE = /\.(csv|tsv|txt|dat|tab|asc|prn)$/i;
+const DATA_FILE = /\.(csv|tsv|txt|dat|tab|asc|prn|xlsx)$/i;
 
 interface InspectOptions {
   json?: boolean;
@@ -39,7 +45,7 @@ function decode(bytes: Buffer): string {
 }
 
 /** Files named on the command line; a folder stands for the data files directly inside it. */
-export function readSourceFiles(paths: string[]): SourceFile[] {
+export function readSourceFiles(paths: string[]): (SourceFile & { bytes?: Uint8Array })[] {
   const names: string[] = [];
   for (const p of paths) {
     let isDir: boolean;
@@ -57,12 +63,14 @@ export function readSourceFiles(paths: string[]): SourceFile[] {
       .map((d) => join(p, d.name))
       .sort((a, b) => a.localeCompare(b, 'en', { numeric: true }));
     if (inside.length === 0)
-      throw new CliError(`${p}: the folder holds no data files (.csv, .tsv, .txt, .dat)`);
+      throw new CliError(`${p}: the folder holds no data files (.csv, .tsv, .txt, .dat, .xlsx)`);
     names.push(...inside);
   }
   return [...new Set(names)].map((name) => {
     try {
-      return { name, text: decode(readFileSync(name)) };
+      const bytes = readFileSync(name);
+      // A workbook's sheets are read by expandWorkbooks (each sheet one file).
+      return isWorkbookName(name) ? { name, text: '', bytes } : { name, text: decode(bytes) };
     } catch (e) {
       throw new CliError(`${name}: cannot read it (${(e as Error).message})`);
     }
@@ -265,11 +273,12 @@ export function registerInspect(program: Command): void {
         'tension',
       ]),
     )
-    .action((paths: string[], o: InspectOptions) => {
-      const files = readSourceFiles(paths);
+    .action(async (paths: string[], o: InspectOptions) => {
+      const read = readSourceFiles(paths);
       const toleranceK = tolerance(o.tolerance);
       let result: ImportResult;
       try {
+        const files = await expandWorkbooks(read);
         result = importFiles(files, {
           ...(toleranceK !== undefined ? { groupingToleranceK: toleranceK } : {}),
           columns: (o.column ?? []).map(parseColumnSpec),

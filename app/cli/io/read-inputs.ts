@@ -4,16 +4,19 @@
  */
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';
+import { expandWorkbooks, isWorkbookName } from '../../../core/io/index.ts';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
 
 /** File name endings taken from a folder (other files, e.g. notes or images, are skipped). */
-export const DATA_FILE_PATTERN = /\.(csv|tsv|txt|dat|tab)$/i;
+export const DATA_FILE_PATTERN = /\.(csv|tsv|txt|dat|tab|xlsx)$/i;
 
 export interface InputFile {
   /** The path as the user would recognise it; used in every message. */
   name: string;
   text: string;
+  /** A workbook's bytes (.xlsx; `text` is then empty): `readWorkbookInputs` reads its sheets. */
+  bytes?: Uint8Array;
 }
 
 /** Data files inside a folder, sorted by name. */
@@ -38,7 +41,7 @@ export function expandInputs(paths: string[]): string[] {
       const files = dataFilesIn(p);
       if (files.length === 0)
         throw new CliError(
-          `${p}: folder holds no data files (.csv, .tsv, .txt, .dat)`,
+          `${p}: folder holds no data files (.csv, .tsv, .txt, .dat, .xlsx)`,
           EXIT.dataError,
         );
       out.push(...files);
@@ -50,9 +53,18 @@ export function expandInputs(paths: string[]): string[] {
 export function readInputs(paths: string[]): InputFile[] {
   return expandInputs(paths).map((name) => {
     try {
+      if (isWorkbookName(name)) return { name, text: '', bytes: readFileSync(name) };
       return { name, text: readFileSync(name, 'utf8') };
     } catch (e) {
       throw new CliError(`${name}: cannot read: ${(e as Error).message}`, EXIT.dataError);
     }
   });
+}
+
+/**
+ * `readInputs`, with every .xlsx workbook replaced by its sheets ("seal.xlsx › 40 °C"), each read
+ * as one file by the importer.
+ */
+export async function readWorkbookInputs(paths: string[]): Promise<InputFile[]> {
+  return expandWorkbooks(readInputs(paths));
 }

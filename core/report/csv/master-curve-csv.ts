@@ -6,7 +6,13 @@ import { quantitySymbol } from '../../data/quantities';
 import { conventionCommentLines } from '../../pipeline/conventions';
 import { toCelsius, toKelvinText } from '../../pipeline/temperature';
 import { csvDocument, csvNumber } from './csv-format';
-import { outputUnitLabel, toOutputUnit, type ModulusUnit } from '../output-units';
+import {
+  outputUnitLabel,
+  toOutputFrequency,
+  toOutputUnit,
+  type FrequencyUnit,
+  type ModulusUnit,
+} from '../output-units';
 
 const COLUMN_STEM: Record<QuantityId, string> = {
   storageModulus: 'storage_modulus',
@@ -25,16 +31,30 @@ export function quantityColumn(q: QuantityId, unit: ModulusUnit): string {
   return u ? `${COLUMN_STEM[q]}_${u}` : COLUMN_STEM[q];
 }
 
-export function masterCurveCsv(a: Analysis, unit: ModulusUnit = 'Pa'): string {
+/**
+ * `frequencyUnit` 'Hz' writes the reduced frequency as aT·f with f = ω/2π
+ * (`reduced_frequency_Hz`); 'rad/s' (the default) as aT·ω.
+ */
+export function masterCurveCsv(
+  a: Analysis,
+  unit: ModulusUnit = 'Pa',
+  frequencyUnit: FrequencyUnit = 'rad/s',
+): string {
   const mc = a.masterCurve;
   const qs = QUANTITY_IDS.filter((q) => mc.quantities[q] !== undefined);
-  const xCol =
-    a.sample.abscissa === 'angularFrequency' ? 'reduced_frequency_rad_per_s' : 'reduced_time_s';
+  const freq = a.sample.abscissa === 'angularFrequency';
+  const hz = freq && frequencyUnit === 'Hz';
+  const xCol = !freq
+    ? 'reduced_time_s'
+    : hz
+      ? 'reduced_frequency_Hz'
+      : 'reduced_frequency_rad_per_s';
+  const xMeaning = !freq ? 't/aT' : hz ? 'aT·f, f = ω/2π' : 'aT·ω';
   return csvDocument(
     [
       `Thermoshift ${a.version} master curve — sample: ${a.sample.name}`,
       `reference temperature: ${toCelsius(a.referenceTemperatureK)} °C (${toKelvinText(a.referenceTemperatureK)} K); ${a.sample.deformation}, ${a.sample.testKind}`,
-      `${xCol}: ${a.sample.abscissa === 'angularFrequency' ? 'aT·ω' : 't/aT'}; quantities reduced to Tref (moduli × bT)`,
+      `${xCol}: ${xMeaning}; quantities reduced to Tref (moduli × bT)`,
       `symbols (${a.sample.deformation}): ${qs.map((q) => `${COLUMN_STEM[q]} = ${quantitySymbol(q, a.sample.deformation)}`).join(', ')}`,
       ...conventionCommentLines(),
       'source_temperature_C and isotherm: where each point was measured; outlier = yes: flagged by the shift engine and left out of the fits',
@@ -47,7 +67,7 @@ export function masterCurveCsv(a: Analysis, unit: ModulusUnit = 'Pa'): string {
       'outlier',
     ],
     mc.reducedX.map((x, i) => [
-      csvNumber(x),
+      csvNumber(freq ? toOutputFrequency(x, frequencyUnit) : x),
       ...qs.map((q) => {
         const v = mc.quantities[q]?.[i];
         return v === null || v === undefined ? '' : csvNumber(toOutputUnit(q, v, unit));

@@ -27,4 +27,28 @@ describe('ModelsView', () => {
       /^WLF: generalised least squares with the covariance of the shifts; converged\./,
     );
   });
+
+  it('ModelsView gives the Prony series’ reduced window in the display frequency unit', () => {
+    const a = fixtureAnalysis();
+    const [lo] = a.prony!.reducedWindow;
+    const hz = mount(ModelsView, {
+      props: { analysis: a, units: { modulus: 'MPa', frequency: 'Hz' } },
+    }).find('[data-role="prony-summary"]');
+    expect(hz.text()).toMatch(/valid over the reduced window .* Hz at Tref/);
+    expect(hz.text()).not.toContain('rad/s');
+    // f = ω/2π (SI Brochure, BIPM 2019)
+    const rad = mount(ModelsView, { props: { analysis: a } }).find('[data-role="prony-summary"]');
+    expect(rad.text()).toMatch(/rad\/s at Tref/);
+    const first = (t: string): number =>
+      Number(
+        /reduced window (\S+)/
+          .exec(t)![1]
+          .replace('×10', 'e')
+          .replace(/[⁰¹²³⁴⁵⁶⁷⁸⁹⁻]/g, (c) =>
+            String('⁰¹²³⁴⁵⁶⁷⁸⁹'.indexOf(c) >= 0 ? '⁰¹²³⁴⁵⁶⁷⁸⁹'.indexOf(c) : '-'),
+          ),
+      );
+    expect(first(hz.text()) / first(rad.text())).toBeCloseTo(1 / (2 * Math.PI), 2);
+    expect(lo).toBeGreaterThan(0);
+  });
 });

@@ -27,6 +27,8 @@ export interface UseFileCommandsReturn {
   recent: Ref<RecentEntry[]>;
   refreshRecent(): Promise<void>;
   openData(): Promise<void>;
+  /** A folder of data files (the dialog; or the browser's folder picker). */
+  openFolder(): Promise<void>;
   openAnalysis(): Promise<void>;
   openRecent(id: string): Promise<void>;
   /** Files from drag-and-drop: an analysis file opens, anything else goes to the import preview. */
@@ -87,6 +89,7 @@ export function useFileCommands(
   const outputOptions = () => ({
     date: today(),
     modulusUnit: wb.doc.value?.display.modulus ?? 'Pa',
+    frequencyUnit: wb.doc.value?.display.frequency ?? 'rad/s',
   });
 
   const refreshRecent = (): Promise<void> =>
@@ -116,6 +119,11 @@ export function useFileCommands(
     openData: () =>
       guard('Import', async () => {
         const files = await access.openDataFiles();
+        if (files.length) await previewData(files, true);
+      }),
+    openFolder: () =>
+      guard('Import folder', async () => {
+        const files = await access.openDataFolder();
         if (files.length) await previewData(files, true);
       }),
     openAnalysis: () =>

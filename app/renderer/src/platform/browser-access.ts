@@ -4,7 +4,7 @@
  * localStorage for the autosave (IndexedDB when it is too large for localStorage).
  */
 import type { FileAccess, RecentEntry, TextFile } from './file-access';
-import { readFiles } from './file-access';
+import { byName, isDataFileName, readFiles } from './file-access';
 import type { KeyValueStore } from './idb-store';
 
 export const AUTOSAVE_KEY = 'thermoshift.autosave';
@@ -16,7 +16,7 @@ interface StoredRecent extends RecentEntry {
 
 /** Opens the browser's file picker; resolves [] when the user cancels. */
 export function pickFiles(accept: string, multiple: boolean): Promise<TextFile[]> {
-  return new Promise((resolve) => {
+  return new Promise((resolve, reject) => {
     const input = document.createElement('input');
     input.type = 'file';
     input.accept = accept;
@@ -27,8 +27,55 @@ export function pickFiles(accept: string, multiple: boolean): Promise<TextFile[]
       input.remove();
       resolve(files);
     };
-    input.addEventListener('change', () => void readFiles(input.files ?? []).then(done));
+    input.addEventListener(
+      'change',
+      () =>
+        void readFiles(input.files ?? []).then(done, (e: unknown) => {
+          input.remove();
+          reject(e instanceof Error ? e : new Error(String(e)));
+        }),
+    );
     input.addEventListener('cancel', () => done([]));
+    document.body.append(input);
+    input.click();
+  });
+}
+
+/**
+ * Opens the browser's folder picker (<input webkitdirectory>) and reads the data files directly
+ * inside the chosen folder (sub-folders are left alone, as on the desktop and the command line);
+ * resolves [] when the user cancels. A folder without data files is an error that says so.
+ */
+export function pickFolder(): Promise<TextFile[]> {
+  return new Promise((resolve, reject) => {
+    const input = document.createElement('input');
+    input.type = 'file';
+    input.webkitdirectory = true;
+    input.style.display = 'none';
+    input.dataset.role = 'pick-data-folder';
+    const done = (): void => input.remove();
+    input.addEventListener('change', () => {
+      const all = [...(input.files ?? [])];
+      const inside = all.filter((f) => {
+        const parts = (f.webkitRelativePath || f.name).split('/');
+        return parts.length <= 2 && isDataFileName(f.name);
+      });
+      done();
+      if (all.length > 0 && inside.length === 0) {
+        const folder = all[0].webkitRelativePath.split('/')[0] || 'chosen';
+        reject(
+          new Error(
+            `the ${folder} folder holds no data files (.csv, .tsv, .txt, .dat, .asc, .xlsx).`,
+          ),
+        );
+        return;
+      }
+      void readFiles(byName(inside)).then(resolve, reject);
+    });
+    input.addEventListener('cancel', () => {
+      done();
+      resolve([]);
+    });
     document.body.append(input);
     input.click();
   });
@@ -81,7 +128,8 @@ export function browserAccess(store: KeyValueStore, storage: Storage | null): Fi
   };
   return {
     kind: 'browser',
-    openDataFiles: () => pickFiles('.csv,.txt,.tsv,.dat,.asc,text/*', true),
+    openDataFiles: () => pickFiles('.csv,.txt,.tsv,.dat,.asc,.xlsx,text/*', true),
+    openDataFolder: () => pickFolder(),
     async openAnalysis() {
       const [file] = await pickFiles('.json,application/json', false);
       return file ?? null;

@@ -13,6 +13,7 @@ export function desktopAccess(api: ThermoshiftApi): FileAccess {
   return {
     kind: 'desktop',
     openDataFiles: () => unwrap(api.openDataFiles()),
+    openDataFolder: () => unwrap(api.openDataFolder()),
     openAnalysis: () => unwrap(api.openAnalysis()),
     saveFile: async (req) => (await unwrap(api.saveFile(req)))?.name ?? null,
     saveAnalysis: async (name, text) => (await unwrap(api.saveAnalysis(name, text)))?.name ?? null,

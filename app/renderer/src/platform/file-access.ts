@@ -3,6 +3,7 @@
  * the desktop app (IPC to Electron main, which owns the dialogs and paths) and the plain browser
  * (file inputs, Blob downloads, IndexedDB and localStorage). Components only see this interface.
  */
+import { isWorkbookName, workbookToSourceFiles } from '../../../../core/io/workbook';
 import type {
   RecentEntry,
   RecentOpened,
@@ -15,8 +16,10 @@ export type { RecentEntry, RecentOpened, SaveFileRequest, TextFile };
 export interface FileAccess {
   /** 'desktop' inside Electron, 'browser' as a web page. */
   readonly kind: 'desktop' | 'browser';
-  /** Lets the user pick data files; [] when cancelled. */
+  /** Lets the user pick data files; [] when cancelled. A workbook gives one file per sheet. */
   openDataFiles(): Promise<TextFile[]>;
+  /** Lets the user pick a folder: the data files directly inside it; [] when cancelled. */
+  openDataFolder(): Promise<TextFile[]>;
   /** Lets the user pick a saved analysis; null when cancelled. */
   openAnalysis(): Promise<TextFile | null>;
   /** Saves an export; returns the name written, or null when cancelled. */
@@ -35,7 +38,29 @@ export interface FileAccess {
   readAutosave(): Promise<string | null>;
 }
 
-/** Reads dropped or picked File objects as text (UTF-8). */
+/** File name endings taken from a folder (notes, images and the like are skipped). */
+export const DATA_FILE_PATTERN = /\.(csv|tsv|txt|dat|tab|asc|prn|xlsx)$/i;
+
+/** True for a file a folder import takes: a data file, not hidden. */
+export function isDataFileName(name: string): boolean {
+  return DATA_FILE_PATTERN.test(name) && !name.startsWith('.');
+}
+
+/** Sorts files by name as people number them (pad_2C before pad_10C). */
+export function byName<T extends { name: string }>(files: T[]): T[] {
+  return [...files].sort((a, b) => a.name.localeCompare(b.name, 'en', { numeric: true }));
+}
+
+/**
+ * Reads dropped or picked File objects: text as UTF-8; an .xlsx workbook as one file per sheet
+ * ("seal.xlsx › 40 °C"), read by core/io/workbook.ts.
+ */
 export async function readFiles(files: Iterable<File>): Promise<TextFile[]> {
-  return Promise.all([...files].map(async (f) => ({ name: f.name, text: await f.text() })));
+  const read = await Promise.all(
+    [...files].map(async (f): Promise<TextFile[]> => {
+      if (!isWorkbookName(f.name)) return [{ name: f.name, text: await f.text() }];
+      return workbookToSourceFiles(f.name, new Uint8Array(await f.arrayBuffer()));
+    }),
+  );
+  return read.flat();
 }
