@@ -19,3 +19,5 @@ export type {
   ResolvedImportOptions,
   SourceFile,
 } from './types';
+export { ChunkDecoder, InvalidUtf8Error, LineChunker, decodeBytes, detectEncoding } from './decode';
+export type { TextEncodingName } from './decode';

@@ -32,6 +32,8 @@ export interface ScannedTable {
    * table row for a comment line, or of the failed row itself.
    */
   notes: TableNote[];
+  /** 1-based line number just after the scanned text (where the next chunk starts). */
+  nextLine: number;
 }
 
 /** A comment line or a text row met inside the table body. */
@@ -198,7 +200,7 @@ export function scanTable(
     pos = end + 1;
     lineNo++;
   }
-  return { rows, line, values, bad, problems, problemCount, notes };
+  return { rows, line, values, bad, problems, problemCount, notes, nextLine: lineNo };
 }
 
 function isDelimiterOnly(text: string, from: number, to: number, delim: number): boolean {
