@@ -129,9 +129,11 @@ export function scanTable(
       plain && cell.length > 0
         ? Number(decimalComma ? cell.replace(',', '.') : cell)
         : parseCell(cell, decimalComma);
+    // "1.234.567" or "1.234,5" look plain but need the strict reader's thousands handling.
+    if (v !== v && plain) v = parseCell(cell, decimalComma);
     if (!Number.isFinite(v)) v = NaN;
     out[rows] = v;
-    if (v !== v) flag(col, cellProblem(cell), cell);
+    if (v !== v) flag(col, cellProblem(cell, decimalComma), cell);
   };
   while (pos < n) {
     let end = text.indexOf('\n', pos);
