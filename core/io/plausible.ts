@@ -28,14 +28,13 @@ const MODULI: ReadonlySet<QuantityId> = new Set([
 /** Why an abscissa value (ω in rad/s or t in s) is not a measurement, or undefined. */
 export function implausibleX(x: number, unit: string): string | undefined {
   if (x >= X_MIN && x <= X_MAX) return undefined;
-  return `is outside ${X_MIN}…${X_MAX} ${unit}, not a value an instrument measures`;
+  return `is outside 1e-12…1e12 ${unit}, not a value an instrument measures`;
 }
 
 /** Why a stored quantity value is not a measurement (too large, sentinel), or undefined. */
 export function implausibleValue(q: QuantityId, v: number): string | undefined {
   if (Math.abs(v) >= SENTINEL_MAGNITUDE)
     return 'an instrument placeholder (overflow or no reading)';
-  if (MODULI.has(q) && v > MODULUS_MAX_PA)
-    return `above ${MODULUS_MAX_PA} Pa, stiffer than any solid`;
+  if (MODULI.has(q) && v > MODULUS_MAX_PA) return 'above 1e13 Pa, stiffer than any solid';
   return undefined;
 }
