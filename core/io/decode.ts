@@ -102,11 +102,14 @@ export function decodeBytes(bytes: Uint8Array): { text: string; encoding: TextEn
   }
 }
 
+/** Longest line kept whole by LineChunker, characters (no real table row comes close). */
+export const MAX_LINE_CHARS = 16 << 20;
+
 /**
  * Splits decoded text chunks into chunks that end at a line break: feed `push(text)` with each
  * decoded chunk; it returns the complete lines so far (ending with "\n"), keeping the unfinished
  * last line for the next call; `end()` returns what is left. Lines are never split between chunks,
- * so each chunk can be scanned on its own.
+ * so each chunk can be scanned on its own (except lines longer than MAX_LINE_CHARS).
  */
 export class LineChunker {
   private carry = '';
@@ -114,7 +117,12 @@ export class LineChunker {
     const cut = text.lastIndexOf('\n');
     if (cut < 0) {
       this.carry += text;
-      return '';
+      // A "line" this long is no table row (a binary file, a file without line breaks): hand it
+      // on in pieces so that no string grows with the file; the importer then refuses it.
+      if (this.carry.length <= MAX_LINE_CHARS) return '';
+      const out = this.carry;
+      this.carry = '';
+      return out;
     }
     const out = this.carry + text.slice(0, cut + 1);
     this.carry = text.slice(cut + 1);

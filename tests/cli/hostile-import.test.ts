@@ -255,3 +255,34 @@ describe('thermoshift inspect/build on hostile files', () => {
     expectWlfShifts(b.stdout);
   });
 });
+
+describe('thermoshift on big and odd files', () => {
+  it('thermoshift inspect reads a file of several 4 MB pieces and names the right row of a late bad cell', () => {
+    const dir = tempDir();
+    const lines = ["T (°C),f (Hz),G' (Pa),G'' (Pa)"];
+    const n = 200_000; // about 7 MB: two pieces of the chunked reader
+    for (let i = 0; i < n; i++) {
+      const tC = TEMPS_C[Math.floor((4 * i) / n)];
+      const fHz = 10 ** (-2 + (4 * (i % (n / 4))) / (n / 4));
+      lines.push(`${tC},${fHz.toPrecision(8)},${(1e5 + i).toFixed(2)},${(2e4 + i).toFixed(2)}`);
+    }
+    lines[190_000] = lines[190_000].replace(/,[^,]+$/, ',oops');
+    const file = write(dir, 'long.csv', `${lines.join('\n')}\n`);
+    const r = runCli(['inspect', file, '--json']);
+    expect(r.status, r.stderr).toBe(0);
+    const j = JSON.parse(r.stdout) as Inspection;
+    expect(j.files[0].dataRows).toBe(n);
+    expect(j.files[0].usedRows).toBe(n - 1);
+    expect(j.warnings).toHaveLength(1);
+    expect(j.warnings[0]).toMatchObject({ file, row: 190_001, column: 4 });
+  });
+
+  it('thermoshift build refuses a 20 MB file without line breaks by name, without a crash', () => {
+    const dir = tempDir();
+    const file = write(dir, 'oneline.csv', '1,'.repeat(10 << 20));
+    const r = runCli(['build', file, '--tref', '20C']);
+    expect(r.status).toBe(1);
+    expect(r.stderr).toContain('oneline.csv');
+    expect(r.stderr).not.toMatch(/unexpected error/);
+  });
+});
