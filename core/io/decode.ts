@@ -120,8 +120,11 @@ export class LineChunker {
       // A "line" this long is no table row (a binary file, a file without line breaks): hand it
       // on in pieces so that no string grows with the file; the importer then refuses it.
       if (this.carry.length <= MAX_LINE_CHARS) return '';
-      const out = this.carry;
-      this.carry = '';
+      // Old-Mac files end lines with CR alone: cut after the last one so lines stay whole.
+      const cr = this.carry.lastIndexOf('\r') + 1;
+      const at = cr > 0 ? cr : this.carry.length;
+      const out = this.carry.slice(0, at);
+      this.carry = this.carry.slice(at);
       return out;
     }
     const out = this.carry + text.slice(0, cut + 1);

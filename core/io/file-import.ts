@@ -64,7 +64,10 @@ export function importFile(file: SourceFile, o: ResolvedImportOptions): FileImpo
   }
   // Chunked files: the first chunks (at least HEAD_CHARS) are the head; the rest is scanned
   // chunk by chunk below, so the whole file is never one string.
-  const text = cleanText(chunks ? firstChunks(chunks) : file.text);
+  const rawHead = chunks ? firstChunks(chunks) : file.text;
+  const text = cleanText(rawHead);
+  // Old-Mac files (CR only) are cleaned the same way chunk by chunk.
+  const crOnly = chunks !== undefined && text.length === rawHead.length && text !== rawHead;
   if (/^\s*$/.test(text)) throw new ImportError('emptyFile', name, 0, 0, 'the file is empty.');
   const head = headLines(text, HEAD_LINES);
   if (head.some((l) => l.text.indexOf('\u0000') >= 0)) {
@@ -158,7 +161,7 @@ export function importFile(file: SourceFile, o: ResolvedImportOptions): FileImpo
     const parts = [table];
     let line = table.nextLine;
     for (let r = chunks.next(); !r.done; r = chunks.next()) {
-      const part = scanTable(r.value, 0, line, spec);
+      const part = scanTable(crOnly ? r.value.replace(/\r/g, '\n') : r.value, 0, line, spec);
       line = part.nextLine;
       if (part.rows > 0 || part.notes.length > 0) parts.push(part);
     }

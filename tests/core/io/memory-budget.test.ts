@@ -62,6 +62,16 @@ describe('importFiles() on chunked files', () => {
     expect(r.warnings[0]).toMatchObject({ file: 'a.csv', row: 35_001, column: 2 });
   });
 
+  it('importFiles() reads an old-Mac (CR only) file longer than one line chunk like one string', () => {
+    const text = longTable(600_000).replace(/\n/g, '\r'); // about 20 M characters, no LF at all
+    const whole = importFiles([{ name: 'mac.csv', text }]);
+    const parts = importFiles([{ name: 'mac.csv', text: '', chunks: chunked(text, 4 << 20) }]);
+    expect(parts.files[0].dataRows).toBe(whole.files[0].dataRows);
+    expect(parts.dataset.isotherms.map((i) => i.x.length)).toEqual(
+      whole.dataset.isotherms.map((i) => i.x.length),
+    );
+  });
+
   it('importFiles() refuses a file over the memory budget before reading it, naming the file', () => {
     const text = longTable(4_000);
     // Stands for a 2 GB, 50-million-row file: only the head is read before the refusal.

@@ -1,0 +1,11 @@
+import { statSync } from 'node:fs';
+import { importFiles } from '../core/io/index.ts';
+import { readDecodedChunks } from '../app/cli/io/read-text-chunks.ts';
+const path = process.argv[2];
+const rss0 = process.memoryUsage().rss;
+const t0 = performance.now();
+const { chunks, encoding } = readDecodedChunks(path);
+const t1 = performance.now();
+const r = importFiles([{ name: path, text: '', chunks, encoding, byteLength: statSync(path).size }], { memoryBudgetBytes: Number(process.env.BUDGET ?? 4e9) });
+const t2 = performance.now();
+console.log(JSON.stringify({ encoding, utf8check_ms: Math.round(t1 - t0), import_ms: Math.round(t2 - t1), points: r.groups.reduce((s, g) => s + g.points, 0), isotherms: r.groups.length, warnings: r.warnings.length, rssMB: Math.round(process.memoryUsage().rss / 1e6), rss0MB: Math.round(rss0/1e6) }));
