@@ -211,6 +211,23 @@ describe('thermoshift inspect/build on hostile files', () => {
     expectWlfShifts(b.stdout);
   });
 
+  it('thermoshift build shifts a tan δ-only file on tan δ', () => {
+    const dir = tempDir();
+    const file = write(
+      dir,
+      'tand.csv',
+      csv(
+        melt(),
+        (r) => [r.tC.toFixed(1), r.fHz.toPrecision(6), (r.gpp / r.gp).toPrecision(6)],
+        'T (°C),f (Hz),tan δ',
+      ),
+    );
+    const b = runCli(['build', file, '--tref', '20C']);
+    expect(b.status, b.stderr).toBe(0);
+    expect(b.stdout).toContain('shifted on tan δ\n');
+    expectWlfShifts(b.stdout);
+  });
+
   it.each([['1e-300'], ['1e308'], ['9.9e37'], ['-9.99e99']])(
     'thermoshift flags the absurd frequency cell %s by file, row and column and keeps the good points',
     (cell) => {
