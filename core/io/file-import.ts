@@ -10,6 +10,8 @@ import { buildRecords } from './records';
 import { findBlocks } from './blocks';
 import type { PointRecords } from './records';
 import { scanTable } from './scan-table';
+import type { ScanSpec, ScannedTable } from './scan-table';
+import { estimateImportBytes } from './memory-budget';
 import { findStructure } from './structure';
 import type { FileReport, ResolvedImportOptions, SourceFile } from './types';
 import { WarningSink } from './warning-sink';
@@ -56,10 +58,16 @@ function fileTemperature(
 /** Reads one file: layout, dialect, header and units, columns, then every row into points. */
 export function importFile(file: SourceFile, o: ResolvedImportOptions): FileImport {
   const name = file.name;
-  if (typeof file.text !== 'string') {
+  const chunks = file.chunks?.[Symbol.iterator]();
+  if (!chunks && typeof file.text !== 'string') {
     throw new ImportError('notText', name, 0, 0, 'the file content is not text.');
   }
-  const text = cleanText(file.text);
+  // Chunked files: the first chunks (at least HEAD_CHARS) are the head; the rest is scanned
+  // chunk by chunk below, so the whole file is never one string.
+  const rawHead = chunks ? firstChunks(chunks) : file.text;
+  const text = cleanText(rawHead);
+  // Old-Mac files (CR only) are cleaned the same way chunk by chunk.
+  const crOnly = chunks !== undefined && text.length === rawHead.length && text !== rawHead;
   if (/^\s*$/.test(text)) throw new ImportError('emptyFile', name, 0, 0, 'the file is empty.');
   const head = headLines(text, HEAD_LINES);
   if (head.some((l) => l.text.indexOf('\u0000') >= 0)) {
@@ -123,13 +131,42 @@ export function importFile(file: SourceFile, o: ResolvedImportOptions): FileImpo
     ...plan.quantityColumns.map((q) => q.column),
   ]);
   const wanted = plan.columns.map((c) => read.has(c.index - 1));
-  const table = scanTable(text, structure.firstDataOffset, structure.firstDataRow, {
+  if (file.byteLength !== undefined && text.length > structure.firstDataOffset) {
+    // Rows estimated from the file size and the mean length of the head's table lines.
+    const headRows = Math.max(1, countBreaks(text, structure.firstDataOffset));
+    const bytesPerLine = Math.max(1, (text.length - structure.firstDataOffset) / headRows);
+    const rows = file.byteLength / bytesPerLine;
+    const need = estimateImportBytes(rows, read.size);
+    if (need > o.memoryBudgetBytes) {
+      throw new ImportError(
+        'overBudget',
+        name,
+        0,
+        0,
+        `out of memory budget: about ${fmtCount(rows)} rows would need about ${fmtBytes(need)}, ` +
+          `more than the ${fmtBytes(o.memoryBudgetBytes)} allowed. Split the file (for example ` +
+          'one file per temperature) or thin the rows.',
+      );
+    }
+  }
+  const spec: ScanSpec = {
     delimiter: dialect.delimiter,
     decimalComma: dialect.decimalComma,
     wanted,
     maxProblems: o.maxWarningsPerFile,
     perCell: plan.layout === 'wide',
-  });
+  };
+  let table = scanTable(text, structure.firstDataOffset, structure.firstDataRow, spec);
+  if (chunks) {
+    const parts = [table];
+    let line = table.nextLine;
+    for (let r = chunks.next(); !r.done; r = chunks.next()) {
+      const part = scanTable(crOnly ? r.value.replace(/\r/g, '\n') : r.value, 0, line, spec);
+      line = part.nextLine;
+      if (part.rows > 0 || part.notes.length > 0) parts.push(part);
+    }
+    table = joinTables(parts, spec.maxProblems);
+  }
   const blocks = findBlocks(table.notes, structure.header, dialect.delimiter);
   if (fileT?.from === 'option') blocks.starts = [];
   const records = buildRecords(table, plan, fileT?.temperatureK, sink, blocks);
@@ -158,6 +195,7 @@ export function importFile(file: SourceFile, o: ResolvedImportOptions): FileImpo
       layout: plan.layout,
       delimiter: dialect.delimiter,
       decimalSeparator: dialect.decimalComma ? ',' : '.',
+      encoding: file.encoding ?? 'utf-8',
       headerRow: structure.headerRow,
       unitsRow: structure.unitsRow,
       firstDataRow: structure.firstDataRow,
@@ -173,5 +211,64 @@ export function importFile(file: SourceFile, o: ResolvedImportOptions): FileImpo
     ...(metadataDeformation ? { metadataDeformation } : {}),
     records,
     sink,
+  };
+}
+
+/** Characters of a chunked file taken as its head (layout, header, units, dialect). */
+const HEAD_CHARS = 1 << 20;
+
+/** Joins the first chunks until HEAD_CHARS characters (or the end). */
+function firstChunks(chunks: Iterator<string>): string {
+  const head: string[] = [];
+  let n = 0;
+  while (n < HEAD_CHARS) {
+    const r = chunks.next();
+    if (r.done) break;
+    head.push(r.value);
+    n += r.value.length;
+  }
+  return head.join('');
+}
+
+function countBreaks(text: string, from: number): number {
+  let n = 0;
+  for (let i = text.indexOf('\n', from); i >= 0; i = text.indexOf('\n', i + 1)) n++;
+  return n;
+}
+
+const fmtCount = (n: number): string =>
+  n >= 1e6 ? `${(n / 1e6).toFixed(1)} million` : `${Math.round(n)}`;
+const fmtBytes = (b: number): string => `${(b / 1e9).toFixed(1)} GB`;
+
+/** One table from the tables of consecutive chunks (rows, lines, values, problems, notes). */
+export function joinTables(parts: ScannedTable[], maxProblems: number): ScannedTable {
+  if (parts.length === 1) return parts[0];
+  const rows = parts.reduce((s, p) => s + p.rows, 0);
+  const line = new Int32Array(rows);
+  const bad = new Uint8Array(rows);
+  const values = parts[0].values.map((v) => (v ? new Float64Array(rows) : null));
+  const problems: ScannedTable['problems'] = [];
+  const notes: ScannedTable['notes'] = [];
+  let problemCount = 0;
+  let at = 0;
+  for (const p of parts) {
+    line.set(p.line.subarray(0, p.rows), at);
+    bad.set(p.bad.subarray(0, p.rows), at);
+    values.forEach((v, c) => v?.set(p.values[c]!.subarray(0, p.rows), at));
+    for (const q of p.problems)
+      if (problems.length < maxProblems) problems.push({ ...q, row: q.row + at });
+    problemCount += p.problemCount;
+    for (const n of p.notes) if (notes.length < 10_000) notes.push({ ...n, row: n.row + at });
+    at += p.rows;
+  }
+  return {
+    rows,
+    line,
+    values,
+    bad,
+    problems,
+    problemCount,
+    notes,
+    nextLine: parts[parts.length - 1].nextLine,
   };
 }

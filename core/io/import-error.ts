@@ -10,7 +10,8 @@ export type ImportErrorCode =
   | 'missingColumn'
   | 'conflict'
   | 'noIsotherms'
-  | 'badOption';
+  | 'badOption'
+  | 'overBudget';
 
 /**
  * A problem that stops the import. `file`, `row` and `column` locate it (1-based; 0 = not

@@ -26,3 +26,5 @@ export {
   splitSheetName,
   workbookToSourceFiles,
 } from './workbook';
+export { ChunkDecoder, InvalidUtf8Error, LineChunker, decodeBytes, detectEncoding } from './decode';
+export type { TextEncodingName } from './decode';

@@ -1,5 +1,6 @@
 import type { ImportOptions, ResolvedImportOptions } from './types';
 import { ImportError } from './import-error';
+import { DEFAULT_MEMORY_BUDGET_BYTES } from './memory-budget';
 
 /** Applies every default of ImportOptions once and checks the values (throws ImportError 'badOption'). */
 export function resolveImportOptions(options: ImportOptions = {}): ResolvedImportOptions {
@@ -18,6 +19,10 @@ export function resolveImportOptions(options: ImportOptions = {}): ResolvedImpor
         `fileTemperatureK["${file}"] must be a temperature in kelvin > 0, got ${String(t)}`,
       );
     }
+  }
+  const budget = options.memoryBudgetBytes ?? DEFAULT_MEMORY_BUDGET_BYTES;
+  if (!(Number.isFinite(budget) && budget > 0)) {
+    throw bad(`memoryBudgetBytes must be a number of bytes > 0, got ${String(budget)}`);
   }
   const columns = options.columns ?? [];
   columns.forEach((c, i) => {
@@ -38,6 +43,7 @@ export function resolveImportOptions(options: ImportOptions = {}): ResolvedImpor
     sampleName: options.sampleName,
     maxWarningsPerFile: maxWarn,
     deriveQuantities: options.deriveQuantities ?? true,
+    memoryBudgetBytes: budget,
   };
 }
 

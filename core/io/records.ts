@@ -5,6 +5,7 @@ import { ROLE_WORDS } from './roles';
 import type { ColumnReport } from './types';
 import type { WarningSink } from './warning-sink';
 import type { BlockPlan } from './blocks';
+import { SENTINEL_MAGNITUDE, implausibleValue, implausibleX } from './plausible';
 
 /** Points read from one file, in stored units (K, rad/s or s, Pa …), columnar. */
 export interface PointRecords {
@@ -29,13 +30,18 @@ function problemText(p: CellProblem, header: string): string {
       return `"${p.text}" in ${where} is not a measured value`;
     case 'nonNumeric':
       return `"${p.text}" in ${where} is not a number`;
+    case 'ambiguousGrouping':
+      return (
+        `"${p.text}" in ${where} could be a decimal or a number with a thousands separator; ` +
+        'write it without the separator (e.g. 1234) or with a decimal part (1,234.0)'
+      );
   }
 }
 
 /** Why a converted value cannot be used, or undefined when it is fine. */
 function valueProblem(q: QuantityId, v: number): string | undefined {
   if (q === 'phaseAngle') return v >= 0 && v <= 90 ? undefined : 'outside 0–90°';
-  return v > 0 ? undefined : 'not positive';
+  return v > 0 ? implausibleValue(q, v) : 'not positive';
 }
 
 interface Converter {
@@ -56,7 +62,8 @@ function converter(table: ScannedTable, col: ColumnReport): Converter {
 
 /**
  * Turns the scanned table into points: converts to stored units, checks each value (temperature
- * above 0 K, x > 0, moduli/compliance/viscosity/tan δ > 0, phase angle 0–90°) and skips what fails
+ * above 0 K, x > 0 and within 1e-12…1e12, moduli/compliance/viscosity/tan δ > 0, moduli ≤ 1e13
+ * Pa, no sentinel such as 9.9e37 — see plausible.ts; phase angle 0–90°) and skips what fails
  * with a warning naming file, row and column. Long and per-isotherm tables skip whole rows; wide
  * tables skip single points.
  */
@@ -129,11 +136,28 @@ export function buildRecords(
       );
       continue;
     }
+    const xWhy = implausibleX(x, plan.abscissa === 'time' ? 's' : 'rad/s');
+    if (xWhy) {
+      sink.add(
+        line,
+        plan.xColumn + 1,
+        `${xWord} ${xRaw} in column "${xc.header}" ${xWhy}; row skipped`,
+      );
+      continue;
+    }
     let rowT = NaN;
     if (tc) {
       const tRaw = tc.values[r];
       if (tRaw !== tRaw) continue;
       rowT = tRaw * tc.factor + tc.offset;
+      if (Math.abs(tRaw) >= SENTINEL_MAGNITUDE) {
+        sink.add(
+          line,
+          plan.temperatureColumn + 1,
+          `temperature ${tRaw} in column "${tc.header}" is an instrument placeholder; row skipped`,
+        );
+        continue;
+      }
       if (!(rowT > 0)) {
         sink.add(
           line,

@@ -32,6 +32,8 @@ export interface ScannedTable {
    * table row for a comment line, or of the failed row itself.
    */
   notes: TableNote[];
+  /** 1-based line number just after the scanned text (where the next chunk starts). */
+  nextLine: number;
 }
 
 /** A comment line or a text row met inside the table body. */
@@ -127,9 +129,11 @@ export function scanTable(
       plain && cell.length > 0
         ? Number(decimalComma ? cell.replace(',', '.') : cell)
         : parseCell(cell, decimalComma);
+    // "1.234.567" or "1.234,5" look plain but need the strict reader's thousands handling.
+    if (v !== v && plain) v = parseCell(cell, decimalComma);
     if (!Number.isFinite(v)) v = NaN;
     out[rows] = v;
-    if (v !== v) flag(col, cellProblem(cell), cell);
+    if (v !== v) flag(col, cellProblem(cell, decimalComma), cell);
   };
   while (pos < n) {
     let end = text.indexOf('\n', pos);
@@ -198,7 +202,7 @@ export function scanTable(
     pos = end + 1;
     lineNo++;
   }
-  return { rows, line, values, bad, problems, problemCount, notes };
+  return { rows, line, values, bad, problems, problemCount, notes, nextLine: lineNo };
 }
 
 function isDelimiterOnly(text: string, from: number, to: number, delim: number): boolean {

@@ -1,4 +1,5 @@
 import type { GroupingSummary } from './grouping';
+import type { TextEncodingName } from './decode';
 import type {
   AbscissaKind,
   DataWarning,
@@ -13,6 +14,16 @@ export interface SourceFile {
   name: string;
   /** The file content, decoded (UTF-8 recommended); a leading byte-order mark is ignored. */
   text: string;
+  /**
+   * Big files: the decoded content as chunks that each end at a line break (see `LineChunker`
+   * in core/io/decode.ts), read one after another; `text` is then ignored and may be ''. The
+   * importer never joins them into one string.
+   */
+  chunks?: Iterable<string>;
+  /** How the bytes were decoded (see `detectEncoding`); reported in FileReport.encoding. */
+  encoding?: TextEncodingName;
+  /** Size of the file in bytes, when known: checked against `memoryBudgetBytes` before reading. */
+  byteLength?: number;
 }
 
 /**
@@ -69,6 +80,13 @@ export interface ImportOptions {
    * @default true
    */
   deriveQuantities?: boolean;
+  /**
+   * Memory the import may use, bytes: a file whose estimated point count (from its size and the
+   * length of its first lines) needs more is refused before its table is read, naming the file.
+   * The estimate uses the measured cost per point in core/io/memory-budget.ts.
+   * @default 4e9
+   */
+  memoryBudgetBytes?: number;
 }
 
 /** ImportOptions with every default applied. */
@@ -113,6 +131,8 @@ export interface FileReport {
   layout: Layout;
   delimiter: DelimiterName;
   decimalSeparator: '.' | ',';
+  /** How the bytes were decoded ('utf-8' when the caller passed text and did not say). */
+  encoding: TextEncodingName;
   /** 1-based line numbers; 0 = none. */
   headerRow: number;
   unitsRow: number;

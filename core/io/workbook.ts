@@ -100,13 +100,17 @@ export async function workbookToSourceFiles(
  * text files pass through. `bytes` is read only for workbooks.
  */
 export async function expandWorkbooks(
-  files: readonly { name: string; text?: string; bytes?: Uint8Array }[],
+  files: readonly (Omit<SourceFile, 'text'> & { text?: string; bytes?: Uint8Array })[],
 ): Promise<SourceFile[]> {
   const out: SourceFile[] = [];
   for (const f of files) {
     if (isWorkbookName(f.name) && f.bytes)
       for (const sheet of await workbookToSourceFiles(f.name, f.bytes)) out.push(sheet);
-    else out.push({ name: f.name, text: f.text ?? '' });
+    else {
+      // Text files pass through whole, with their decoded chunks (big files) if they have them.
+      const { bytes: _bytes, ...file } = f;
+      out.push({ ...file, text: f.text ?? '' });
+    }
   }
   return out;
 }

@@ -4,7 +4,7 @@
  *   relaxation → G(t)/E(t); creep → J(t)/D(t);
  *   oscillatory with vertical 'data' → tan δ (independent of bT, Mavridis & Shroff 1992);
  *   oscillatory otherwise → G' and G'' together when both are present, else the first present of
- *   tan δ, |G*|, δ, |η*|.
+ *   tan δ, |G*|, G', G'', δ, |η*|.
  */
 import type { Dataset, QuantityId } from '../data/types';
 import type { VerticalMode } from './types';
@@ -20,7 +20,15 @@ export function defaultDrivers(dataset: Dataset, vertical: VerticalMode): Quanti
   if (vertical === 'data' && (has('tanDelta') || (has('storageModulus') && has('lossModulus'))))
     return ['tanDelta'];
   if (has('storageModulus') && has('lossModulus')) return ['storageModulus', 'lossModulus'];
-  const order: QuantityId[] = ['tanDelta', 'complexModulus', 'phaseAngle', 'complexViscosity'];
+  // One quantity is enough: a file with only G' (or only G''/E'') shifts on it.
+  const order: QuantityId[] = [
+    'tanDelta',
+    'complexModulus',
+    'storageModulus',
+    'lossModulus',
+    'phaseAngle',
+    'complexViscosity',
+  ];
   const first = order.find(has);
   return first ? [first] : [];
 }

@@ -3,6 +3,7 @@
  * whole job and prints the JSON summary (--json) and/or writes the output files (--out DIR).
  */
 import { Command } from 'commander';
+import { quantitySymbol } from '../../../core/data/quantities.ts';
 import { analysisSummary } from '../../../core/pipeline/summary.ts';
 import { toCelsius } from '../../../core/pipeline/temperature.ts';
 import type { Analysis } from '../../../core/pipeline/types.ts';
@@ -101,6 +102,7 @@ export function registerBuild(program: Command): void {
 export function textSummary(a: Analysis): string {
   const lines = [
     `${a.sample.name}: ${a.curves.length} isotherms, Tref = ${toCelsius(a.referenceTemperatureK)} °C`,
+    `shifted on ${a.shiftQuantities.map((q) => quantitySymbol(q, a.dataset.deformation)).join(' and ')}`,
     ...a.curves.map(
       (c) =>
         `  ${c.isothermId} ${formatFixed(toCelsius(c.temperatureK), 2).padStart(8)} °C  log10 aT = ${formatFixed(c.log10aT, 3)} ± ${formatFixed(c.log10aTStdErr, 3)}${c.included ? '' : `  (not included${c.note ? `: ${c.note}` : ''})`}`,

@@ -22,6 +22,7 @@ import {
 import { parseTemperatureText } from '../../../core/units/index.ts';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
+import { readDecodedChunks } from '../io/read-text-chunks.ts';
 
 /** File endings taken from a folder argument. */
 const DATA_FILE = /\.(csv|tsv|txt|dat|tab|asc|prn|xlsx)$/i;
@@ -36,13 +37,6 @@ interface InspectOptions {
 }
 
 const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
-
-/** Reads bytes as text: UTF-16 when a byte-order mark says so, UTF-8 otherwise. */
-function decode(bytes: Buffer): string {
-  if (bytes[0] === 0xff && bytes[1] === 0xfe) return new TextDecoder('utf-16le').decode(bytes);
-  if (bytes[0] === 0xfe && bytes[1] === 0xff) return new TextDecoder('utf-16be').decode(bytes);
-  return new TextDecoder('utf-8').decode(bytes);
-}
 
 /** Files named on the command line; a folder stands for the data files directly inside it. */
 export function readSourceFiles(paths: string[]): (SourceFile & { bytes?: Uint8Array })[] {
@@ -68,9 +62,11 @@ export function readSourceFiles(paths: string[]): (SourceFile & { bytes?: Uint8A
   }
   return [...new Set(names)].map((name) => {
     try {
-      const bytes = readFileSync(name);
       // A workbook's sheets are read by expandWorkbooks (each sheet one file).
-      return isWorkbookName(name) ? { name, text: '', bytes } : { name, text: decode(bytes) };
+      if (isWorkbookName(name)) return { name, text: '', bytes: readFileSync(name) };
+      // The same decoding and chunked reading as build and batch (io/read-text-chunks.ts).
+      const { chunks, encoding } = readDecodedChunks(name);
+      return { name, text: '', chunks, encoding, byteLength: statSync(name).size };
     } catch (e) {
       throw new CliError(`${name}: cannot read it (${(e as Error).message})`);
     }
@@ -199,7 +195,7 @@ export function inspectionText(r: ImportResult): string {
         : '';
     out.push(
       '',
-      `${f.file}: ${LAYOUT_WORDS[f.layout]}${t}; delimiter ${DELIMITER_WORDS[f.delimiter]}, decimal "${f.decimalSeparator}"; ` +
+      `${f.file}: ${LAYOUT_WORDS[f.layout]}${t}; delimiter ${DELIMITER_WORDS[f.delimiter]}, decimal "${f.decimalSeparator}", ${f.encoding}; ` +
         `header row ${f.headerRow || '–'}, units row ${f.unitsRow || '–'}; ${f.usedRows} of ${f.dataRows} rows used`,
     );
     for (const c of f.columns) {

@@ -1,12 +1,15 @@
 /**
  * Turns the paths given on the command line into the files of one sample: a file stands for
- * itself, a folder for the data files directly inside it (sorted by name). Reads them as UTF-8.
+ * itself, a folder for the data files directly inside it (sorted by name). Decodes them by
+ * core/io/decode.ts (UTF-8, UTF-16 with BOM, Windows-1252) and hands them over in chunks.
  */
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 import { expandWorkbooks, isWorkbookName } from '../../../core/io/index.ts';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
+import type { TextEncodingName } from '../../../core/io/index.ts';
+import { readDecodedChunks } from './read-text-chunks.ts';
 
 /** File name endings taken from a folder (other files, e.g. notes or images, are skipped). */
 export const DATA_FILE_PATTERN = /\.(csv|tsv|txt|dat|tab|xlsx)$/i;
@@ -14,9 +17,13 @@ export const DATA_FILE_PATTERN = /\.(csv|tsv|txt|dat|tab|xlsx)$/i;
 export interface InputFile {
   /** The path as the user would recognise it; used in every message. */
   name: string;
+  /** '' : the content comes in `chunks` (read lazily, see read-text-chunks.ts). */
   text: string;
   /** A workbook's bytes (.xlsx; `text` is then empty): `readWorkbookInputs` reads its sheets. */
   bytes?: Uint8Array;
+  chunks?: Iterable<string>;
+  encoding?: TextEncodingName;
+  byteLength?: number;
 }
 
 /** Data files inside a folder, sorted by name. */
@@ -54,7 +61,8 @@ export function readInputs(paths: string[]): InputFile[] {
   return expandInputs(paths).map((name) => {
     try {
       if (isWorkbookName(name)) return { name, text: '', bytes: readFileSync(name) };
-      return { name, text: readFileSync(name, 'utf8') };
+      const { chunks, encoding } = readDecodedChunks(name);
+      return { name, text: '', chunks, encoding, byteLength: statSync(name).size };
     } catch (e) {
       throw new CliError(`${name}: cannot read: ${(e as Error).message}`, EXIT.dataError);
     }

@@ -75,3 +75,33 @@ describe('splitHeaderOnSpaces()', () => {
     expect(splitHeaderOnSpaces("T f G' G''", 4)).toEqual(['T', 'f', "G'", "G''"]);
   });
 });
+
+describe('parseCell() with Fortran exponents and thousands separators', () => {
+  it('parseCell() reads Fortran D exponents', () => {
+    expect(parseCell('1.0D+03', false)).toBe(1000);
+    expect(parseCell('-2.5d-2', false)).toBe(-0.025);
+    expect(parseCell('1,5D2', true)).toBe(150);
+  });
+
+  it('parseCell() removes thousands separators where they are unambiguous', () => {
+    expect(parseCell('1,234,567.8', false)).toBe(1234567.8);
+    expect(parseCell('1,234.5', false)).toBe(1234.5);
+    expect(parseCell('1,234,567', false)).toBe(1234567);
+    expect(parseCell('1.234.567,8', true)).toBe(1234567.8);
+    expect(parseCell("1'234'567.8", false)).toBe(1234567.8);
+    expect(parseCell('1 234,5', true)).toBe(1234.5);
+    expect(parseCell('-1\u202f234.5', false)).toBe(-1234.5);
+  });
+
+  it('parseCell() refuses a single group that could be a decimal, and cellProblem() says why', () => {
+    expect(parseCell('1,234', false)).toBeNaN();
+    expect(cellProblem('1,234', false)).toBe('ambiguousGrouping');
+    expect(parseCell('1.234', true)).toBeNaN();
+    expect(cellProblem('1.234', true)).toBe('ambiguousGrouping');
+    // Plain decimals are untouched.
+    expect(parseCell('1.234', false)).toBe(1.234);
+    expect(parseCell('1,234', true)).toBe(1.234);
+    // Groups of other than three digits are not thousands separators.
+    expect(parseCell('12,34,567.8', false)).toBeNaN();
+  });
+});

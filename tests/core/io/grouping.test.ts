@@ -83,3 +83,18 @@ describe('groupPoints() through importFiles()', () => {
     expect(r.groups.every((g) => g.points === 4 && g.temperatureSpreadK < 1)).toBe(true);
   });
 });
+
+describe('importFiles() with many temperatures', () => {
+  it('importFiles() forms 10,000 isotherms of 3 points each (30,000 rows)', () => {
+    const lines = ["T (°C),f (Hz),G' (Pa),G'' (Pa)"];
+    for (let i = 0; i < 10_000; i++)
+      for (let k = 0; k < 3; k++)
+        lines.push(`${(-10 + i * 0.01).toFixed(3)},${10 ** (k * 0.5 - 1)},${1e5 + k},${1e4 + k}`);
+    const r = importFiles([{ name: 't10k.csv', text: lines.join('\n') }], {
+      groupingToleranceK: 0.002,
+    });
+    expect(r.groups).toHaveLength(10_000);
+    expect(r.groups.every((g) => g.points === 3)).toBe(true);
+    expect(r.warnings).toEqual([]);
+  });
+});

@@ -12,6 +12,7 @@ describe('resolveImportOptions()', () => {
       sampleName: undefined,
       maxWarningsPerFile: 200,
       deriveQuantities: true,
+      memoryBudgetBytes: 4e9,
     });
   });
 
