@@ -69,14 +69,19 @@ function prepare(
   const share = new Map<string, number>();
   for (const id of moved.isothermId)
     share.set(id, (share.get(id) ?? 0) + 1 / moved.isothermId.length);
-  let h2 = reSe * reSe;
-  let v2 = 0;
+  // The analysis keeps no covariance between the shifts, and shifts measured against one
+  // reference isotherm are positively correlated: take the bound of full correlation,
+  // (Σ f_k σ_k)², rather than Σ f_k² σ_k², which understated the scatter of identical pairs.
+  let h = 0;
+  let v = 0;
   for (const [id, f] of share) {
     const s = shiftStdErr.get(id);
     if (!s) continue;
-    h2 += f * f * s.aT * s.aT;
-    v2 += f * f * s.bT * s.bT;
+    h += f * s.aT;
+    v += f * s.bT;
   }
+  const h2 = reSe * reSe + h * h;
+  const v2 = v * v;
   if (moved.log10aT.stdErr === null)
     moved.notes.push(
       `${a.sample.name}: the shift model has no covariance, so moving it to the common temperature adds an unknown uncertainty`,
