@@ -16,10 +16,12 @@ import { mkdirSync, writeFileSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { demoSampleFiles } from '../core/synthetic/index.ts';
+import { lotReleaseFiles } from '../core/synthetic/lot-release.ts';
 
 /** Writes every demo sample file under `outDir`; returns the paths written, relative to it. */
 export function generateSamples(outDir: string): string[] {
-  const files = demoSampleFiles();
+  // the scenarios, plus the invented lot-release demo (reference lot, three lots, a spec)
+  const files = [...demoSampleFiles(), ...lotReleaseFiles()];
   for (const f of files) {
     const target = join(outDir, f.path);
     mkdirSync(dirname(target), { recursive: true });

@@ -31,6 +31,8 @@ const LABEL: Partial<Record<QuantityId, string>> = {
   relaxationModulus: 'relaxation modulus',
 };
 
+const fmtDigits = (v: number, d: number): string =>
+  Math.abs(v) >= 100 ? v.toFixed(0) : v.toFixed(d);
 const fmt = (v: number, d = 2): string => (Math.abs(v) >= 100 ? v.toFixed(0) : v.toFixed(d));
 const pct = (p: number | null): string =>
   p === null ? '' : p > 0.999 ? '> 99.9 %' : p < 0.001 ? '< 0.1 %' : `${(p * 100).toFixed(1)} %`;
@@ -57,6 +59,7 @@ function sentence(
   p: number | null,
 ): string {
   const u = unit === '%' ? ' %' : ` ${unit}`;
+  const fmt = (v: number): string => fmtDigits(v, unit === 'decades' ? 3 : 2);
   const found = `${what} differs by ${d >= 0 ? '+' : ''}${fmt(d)}${u}${s === null ? ' (uncertainty unknown: judged on the value alone)' : ` ± ${fmt(s)}${u} (s.e.)`}`;
   const limit =
     d > hi
