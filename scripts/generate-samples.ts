@@ -23,10 +23,12 @@ import {
   demoWorkbook,
   demoWorkbookReadme,
 } from '../core/synthetic/index.ts';
+import { lotReleaseFiles } from '../core/synthetic/lot-release.ts';
 
 /** Writes every demo sample file under `outDir`; returns the paths written, relative to it. */
 export function generateSamples(outDir: string): string[] {
-  const files = demoSampleFiles();
+  // the scenarios, plus the invented lot-release demo (reference lot, three lots, a spec)
+  const files = [...demoSampleFiles(), ...lotReleaseFiles()];
   for (const f of files) {
     const target = join(outDir, f.path);
     mkdirSync(dirname(target), { recursive: true });

@@ -10,6 +10,10 @@ export const EXIT = {
   outputError: 3,
   /** A batch finished, but at least one sample failed. */
   batchPartialFailure: 4,
+  /** compare --spec: at least one sample failed a criterion (the comparison itself worked). */
+  specFailed: 5,
+  /** compare --spec: no sample failed, but at least one criterion was inconclusive. */
+  specInconclusive: 6,
   /** A bug in Thermoshift: please report it with --debug output. */
   internal: 70,
 } as const;

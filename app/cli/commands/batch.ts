@@ -20,12 +20,68 @@ import { oneLine, toCliError } from '../error-map.ts';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
 import { checkDate } from './build.ts';
+import { loadAnalysis, readSpecFile } from './compare.ts';
+import { compareAnalyses } from '../../../core/compare/compare-analyses.ts';
+import type { Specification } from '../../../core/compare/spec-schema.ts';
+
+/**
+ * With --spec: the overall verdict of each sample against the reference (pass, fail,
+ * inconclusive; "failed" for a sample that could not be analysed, "error: …" when it could not be
+ * compared). Failed criteria are named after the verdict.
+ */
+export function batchVerdicts(
+  rows: BatchIndexRow[],
+  referencePath: string,
+  spec: Specification,
+  settings: Settings,
+  o: { settings?: string },
+): string[] {
+  const source = o.settings ?? 'command line';
+  const s = { ...settings };
+  if (s.referenceTemperature === undefined && spec.referenceTemperature !== undefined)
+    s.referenceTemperature = spec.referenceTemperature;
+  let reference;
+  try {
+    reference = loadAnalysis(referencePath, s, source);
+  } catch (e) {
+    throw toCliError(e);
+  }
+  return rows.map((r) => {
+    if (!r.result.ok) return 'failed';
+    try {
+      const c = compareAnalyses(reference, [r.result.analysis], { spec }).comparisons[0];
+      const failed = c.verdicts.filter((v) => v.verdict === 'fail').map((v) => v.criterion);
+      return failed.length ? `${c.overall} (${failed.join('; ')})` : c.overall;
+    } catch (e) {
+      return `error: ${oneLine(toCliError(e))}`;
+    }
+  });
+}
+
+/** index.csv with a last column "verdict": one value per data row, in row order. */
+export function withVerdictColumn(csv: string, verdicts: string[]): string {
+  const quote = (v: string): string => (/[",\r\n]/.test(v) ? `"${v.replace(/"/g, '""')}"` : v);
+  const lines = csv.split('\n');
+  let header = -1;
+  let k = 0;
+  const out = lines.map((line, i) => {
+    if (line === '' || line.startsWith('#')) return line;
+    if (header < 0) {
+      header = i;
+      return `${line},verdict`;
+    }
+    return `${line},${quote(verdicts[k++] ?? '')}`;
+  });
+  return out.join('\n');
+}
 
 interface BatchOptions extends SampleOptionValues {
   out: string;
   samplesIn?: string[];
   force?: boolean;
   date?: string;
+  spec?: string;
+  reference?: string;
 }
 
 export interface BatchSample {
@@ -119,7 +175,12 @@ export function registerBatch(program: Command): void {
       (v: string, prev: string[] = []) => [...prev, v],
     )
     .option('--force', 'overwrite existing output files')
-    .option('--date <YYYY-MM-DD>', 'date printed in the reports (default: today)');
+    .option('--date <YYYY-MM-DD>', 'date printed in the reports (default: today)')
+    .option(
+      '--spec <file>',
+      'specification bands: adds a verdict column to index.csv (needs --reference)',
+    )
+    .option('--reference <path>', 'the reference lot the samples are judged against with --spec');
   addSampleOptions(cmd);
   cmd.action(async (paths: string[], o: BatchOptions) => {
     let samples: BatchSample[];
@@ -136,6 +197,12 @@ export function registerBatch(program: Command): void {
         EXIT.usage,
       );
     const date = checkDate(o.date);
+    const spec = o.spec ? readSpecFile(o.spec) : undefined;
+    if (spec && !o.reference)
+      throw new CliError(
+        'batch: --spec needs --reference REF (the lot to compare with)',
+        EXIT.usage,
+      );
     const indexPath = join(o.out, 'index.csv');
     assertWritable([indexPath], !!o.force); // fail before hours of work, not after
     const rows = await runBatch(samples, {
@@ -146,11 +213,17 @@ export function registerBatch(program: Command): void {
       date,
       log: (line) => process.stderr.write(`${line}\n`),
     });
-    writeFileAtomic(indexPath, batchIndexCsv(rows, THERMOSHIFT_VERSION), { force: !!o.force });
+    let index = batchIndexCsv(rows, THERMOSHIFT_VERSION);
+    const verdicts = spec && o.reference ? batchVerdicts(rows, o.reference, spec, settings, o) : [];
+    if (verdicts.length) index = withVerdictColumn(index, verdicts);
+    writeFileAtomic(indexPath, index, { force: !!o.force });
     const failed = rows.filter((r) => !r.result.ok).length;
     process.stderr.write(
       `batch: ${rows.length - failed} of ${rows.length} samples done, ${failed} failed; index: ${indexPath}\n`,
     );
     if (failed > 0) process.exitCode = EXIT.batchPartialFailure;
+    else if (verdicts.some((v) => v.startsWith('fail'))) process.exitCode = EXIT.specFailed;
+    else if (verdicts.some((v) => v.startsWith('inconclusive')))
+      process.exitCode = EXIT.specInconclusive;
   });
 }

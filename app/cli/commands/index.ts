@@ -2,6 +2,7 @@ import type { Command } from 'commander';
 import { registerInspect } from './inspect.ts';
 import { registerBuild } from './build.ts';
 import { registerBatch } from './batch.ts';
+import { registerCompare } from './compare.ts';
 
 /** Every command of the CLI; each module adds one `registerX(program)`. */
 export function registerCommands(program: Command): void {
@@ -9,4 +10,5 @@ export function registerCommands(program: Command): void {
   registerInspect(program);
   registerBuild(program);
   registerBatch(program);
+  registerCompare(program);
 }

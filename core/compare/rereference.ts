@@ -1,0 +1,99 @@
+/**
+ * Brings one analysis to the common reference temperature T* through its own shift model.
+ *
+ * With aT referred to the analysis's own Tref, the master curve at T* is the same curve moved by
+ * log10 aT(T*): ω* = ω_r / aT(T*), t* = t_r · aT(T*) (DOMAIN.md §2 conventions: ω_r = aT·ω,
+ * t_r = t/aT). Moduli are divided by bT(T*) (bT = Tref·ρref/(T·ρ) re-referenced), |η*| is
+ * multiplied by aT(T*)/bT(T*), tan δ is unchanged. The standard error of log10 aT(T*) comes
+ * from the model's band (delta method, full covariance; core/models shiftModelBand).
+ */
+import type { QuantityId } from '../data/types';
+import type { ShiftModelKind } from '../models/types';
+import { shiftModelBand } from '../models/shift-model-band';
+import { log10bTAt } from '../pipeline/vertical-at';
+import type { Analysis } from '../pipeline/types';
+import type { Estimate } from './types';
+
+export interface MovedCurve {
+  /** log10 reduced x at T* for every master-curve point (outliers removed). */
+  log10x: number[];
+  /** log10 values per quantity at T* (NaN where missing). */
+  log10y: Partial<Record<QuantityId, number[]>>;
+  /** Isotherm of each point. */
+  isothermId: string[];
+  log10aT: Estimate;
+  log10bT: number;
+  model: ShiftModelKind | null;
+  extrapolated: boolean;
+  notes: string[];
+}
+
+const MODEL_ORDER: ShiftModelKind[] = ['wlf', 'arrhenius', 'polynomial'];
+
+/** The shift model to move an analysis with: the requested one, its hint, or the first fitted. */
+export function pickModel(a: Analysis, requested: ShiftModelKind | null): ShiftModelKind | null {
+  if (requested && a.models[requested]) return requested;
+  if (a.models.hint && a.models[a.models.hint.model]) return a.models.hint.model;
+  return MODEL_ORDER.find((m) => a.models[m]) ?? null;
+}
+
+/** Quantities whose log changes with the vertical shift. */
+const VERTICAL: ReadonlySet<QuantityId> = new Set<QuantityId>([
+  'storageModulus',
+  'lossModulus',
+  'complexModulus',
+  'relaxationModulus',
+]);
+
+export function moveToTemperature(
+  a: Analysis,
+  targetK: number,
+  requested: ShiftModelKind | null,
+  quantities: QuantityId[],
+): MovedCurve {
+  const notes: string[] = [];
+  let log10aT: Estimate = { value: 0, stdErr: 0 };
+  let model: ShiftModelKind | null = null;
+  let extrapolated = false;
+  let log10bT = 0;
+  if (Math.abs(targetK - a.referenceTemperatureK) > 1e-6) {
+    model = pickModel(a, requested);
+    const fit = model ? a.models[model] : undefined;
+    if (!model || !fit)
+      throw new RangeError(
+        `${a.sample.name}: no shift model was fitted, so it cannot be moved from ${(a.referenceTemperatureK - 273.15).toFixed(1)} °C to ${(targetK - 273.15).toFixed(1)} °C`,
+      );
+    const [band] = shiftModelBand(fit.spec, [targetK]);
+    log10aT = { value: band.log10aT, stdErr: Number.isFinite(band.stdErr) ? band.stdErr : null };
+    const [lo, hi] = fit.fittedRangeK;
+    extrapolated = targetK < lo - 1e-6 || targetK > hi + 1e-6;
+    if (extrapolated)
+      notes.push(
+        `${a.sample.name}: moved to ${(targetK - 273.15).toFixed(1)} °C by its ${model.toUpperCase()} fit outside the temperatures it was fitted over (${(lo - 273.15).toFixed(1)}–${(hi - 273.15).toFixed(1)} °C): extrapolated`,
+      );
+    const v = log10bTAt(a, targetK);
+    log10bT = v.log10bT;
+    if (v.extrapolated) notes.push(`${a.sample.name}: ${v.note}`);
+  }
+  const time = a.sample.abscissa === 'time';
+  const mc = a.masterCurve;
+  const keep = mc.reducedX.map((x, i) => x > 0 && !mc.outlier[i]);
+  const dx = time ? log10aT.value : -log10aT.value;
+  const log10x: number[] = [];
+  const isothermId: string[] = [];
+  const log10y: Partial<Record<QuantityId, number[]>> = {};
+  for (const q of quantities) log10y[q] = [];
+  mc.reducedX.forEach((x, i) => {
+    if (!keep[i]) return;
+    log10x.push(Math.log10(x) + dx);
+    isothermId.push(mc.isothermId[i]);
+    for (const q of quantities) {
+      const v = mc.quantities[q]?.[i];
+      let y = v !== null && v !== undefined && v > 0 ? Math.log10(v) : NaN;
+      if (VERTICAL.has(q)) y -= log10bT;
+      else if (q === 'complexViscosity') y += log10aT.value - log10bT;
+      (log10y[q] as number[]).push(y);
+    }
+  });
+  return { log10x, log10y, isothermId, log10aT, log10bT, model, extrapolated, notes };
+}
