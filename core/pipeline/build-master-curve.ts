@@ -74,6 +74,7 @@ export function buildMasterCurve(dataset: Dataset, options: AnalysisOptions = {}
     referenceTemperatureK: settings.referenceTemperatureK,
     dataset: data,
     shiftQuantities: [...result.settings.drivers],
+    vertical: { ...result.vertical },
     curves,
     overallQualityRmsDecades: result.rmsResidualDecades,
     masterCurve,

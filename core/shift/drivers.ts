@@ -2,8 +2,8 @@
  * Which quantities drive the horizontal shift, and how each enters the fit in log space.
  * Default rule (documented in docs/shifting.md):
  *   relaxation → G(t)/E(t); creep → J(t)/D(t);
- *   oscillatory with vertical 'data' → tan δ (independent of bT, Mavridis & Shroff 1992);
- *   oscillatory otherwise → G' and G'' together when both are present, else the first present of
+ *   oscillatory (whatever the vertical mode: bT from the data is one global constant, see
+ *   vertical.ts) → G' and G'' together when both are present, else the first present of
  *   tan δ, |G*|, δ, |η*|.
  */
 import type { Dataset, QuantityId } from '../data/types';
@@ -13,12 +13,10 @@ export function hasQuantity(dataset: Dataset, q: QuantityId): boolean {
   return dataset.isotherms.some((iso) => (iso.quantities[q]?.length ?? 0) > 0);
 }
 
-export function defaultDrivers(dataset: Dataset, vertical: VerticalMode): QuantityId[] {
+export function defaultDrivers(dataset: Dataset, _vertical: VerticalMode): QuantityId[] {
   if (dataset.testKind === 'relaxation') return ['relaxationModulus'];
   if (dataset.testKind === 'creep') return ['creepCompliance'];
   const has = (q: QuantityId): boolean => hasQuantity(dataset, q);
-  if (vertical === 'data' && (has('tanDelta') || (has('storageModulus') && has('lossModulus'))))
-    return ['tanDelta'];
   if (has('storageModulus') && has('lossModulus')) return ['storageModulus', 'lossModulus'];
   const order: QuantityId[] = ['tanDelta', 'complexModulus', 'phaseAngle', 'complexViscosity'];
   const first = order.find(has);
