@@ -22,6 +22,7 @@ import type {
 import {
   AUTO_CHI2_DROP,
   AUTO_MIN_EFFECT_DECADES,
+  AUTO_Z,
   PLAUSIBLE_EXPANSION_PER_K,
   verticalShift,
 } from './vertical';
@@ -67,6 +68,8 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
     vc.expansionPerK !== null &&
     vc.effectDecades !== null &&
     vc.chi2Drop > AUTO_CHI2_DROP &&
+    vc.z !== null &&
+    Math.abs(vc.z) > AUTO_Z &&
     vc.expansionPerK >= PLAUSIBLE_EXPANSION_PER_K[0] &&
     vc.expansionPerK <= PLAUSIBLE_EXPANSION_PER_K[1] &&
     vc.effectDecades >= AUTO_MIN_EFFECT_DECADES
