@@ -198,7 +198,8 @@ function noShiftInformation(
   warnings: ShiftWarning[],
 ): void {
   curves.forEach((cs, k) => {
-    if (!cs.included || cs.locked || cs.log10aTStdErr === 0) return;
+    // The isotherm at Tref defines aT = 1: its shape needs to tell nothing.
+    if (!cs.included || cs.locked || Math.abs(cs.temperatureK - s.referenceK) <= 0.01) return;
     const floor = shiftErrorFloor(dataset.isotherms[k], s.drivers);
     if (!(floor > NO_SHIFT_INFORMATION_DECADES)) return;
     cs.log10aTStdErr = Math.max(cs.log10aTStdErr ?? 0, floor);
