@@ -62,6 +62,7 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
     active = active.filter((k) => !noVertical.has(k));
   }
   const vc = vertical.choice;
+  let ignoredBTDecades: number | null = null;
   if (
     vc.requested === 'none' &&
     vc.chi2Drop !== undefined &&
@@ -73,12 +74,14 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
     vc.expansionPerK >= PLAUSIBLE_EXPANSION_PER_K[0] &&
     vc.expansionPerK <= PLAUSIBLE_EXPANSION_PER_K[1] &&
     vc.effectDecades >= AUTO_MIN_EFFECT_DECADES
-  )
+  ) {
+    ignoredBTDecades = vc.effectDecades;
     warn(
       warnings,
       'vertical-shift-ignored',
       `No vertical shift was asked for, but δ against |G*| shows one: with bT (αV ≈ ${(vc.expansionPerK * 1e4).toFixed(1)}·10⁻⁴ /K) the mismatch drops by ${vc.chi2Drop.toFixed(0)} residual variances and bT would reach ${vc.effectDecades.toFixed(3)} decades over the measured temperatures, and leaving it out moves the shifts by about as much divided by the slope of the curves. Use vertical 'auto', 'density' or 'data'.`,
     );
+  }
   for (const T of vertical.extrapolatedK)
     warn(warnings, 'density-extrapolated', `The density table was extrapolated to ${formatC(T)}.`);
 
@@ -159,7 +162,7 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
   noShiftInformation(dataset, s, curves, warnings);
 
   structuralWarnings(dataset, s, fit, position, curves, includedCount, warnings);
-  const checks = runChecks(dataset, s, fit, active, vertical, warnings);
+  const checks = runChecks(dataset, s, fit, active, vertical, warnings, ignoredBTDecades);
   curves.forEach((cs, k) => {
     if (!cs.included)
       cs.leftOut = leftOutReason(dataset, fit, position[k], cs, noVertical.has(k), n);
