@@ -40,6 +40,8 @@ export interface OffsetFitInput {
    * they stand aside (see locksStandAside).
    */
   locksInform?: boolean;
+  /** Work out standard errors and the covariance (costly). @default true */
+  uncertainty?: boolean;
   /** Warm start per curve (NaN = unknown), or null. */
   initial: Float64Array | null;
   loss: RobustLoss;
@@ -327,7 +329,8 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
   };
   // A first pass that outlier flagging may follow leaves the (costly) covariance for later.
   const mayRefit = input.flagOutliers && incFinal.length > 1;
-  let outcome = runPass(theta, !mayRefit);
+  const wantUncertainty = input.uncertainty !== false;
+  let outcome = runPass(theta, !mayRefit && wantUncertainty);
   let iterations = outcome.iterations;
   let passes = 1;
   if (mayRefit) {
@@ -353,15 +356,12 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
     if (flagged === 0) {
       finalStats = stats;
       finalSigma = sigma;
-      outcome.uncertainty = offsetUncertainty(
-        problem,
-        outcome.theta,
-        settings!,
-        outcome.residualVariance,
-      );
+      outcome.uncertainty = wantUncertainty
+        ? offsetUncertainty(problem, outcome.theta, settings!, outcome.residualVariance)
+        : null;
     } else {
       problem = restrict(input.build(outliers));
-      outcome = runPass(outcome.theta, true);
+      outcome = runPass(outcome.theta, wantUncertainty);
       iterations += outcome.iterations;
       passes = 2;
     }

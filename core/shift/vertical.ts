@@ -17,7 +17,9 @@
 import type { Dataset } from '../data/types';
 import { buildProblem } from './build-problem';
 import { densityLog10bT } from './density-shift';
-import { quantityValues } from './drivers';
+import { betaOf, quantityValues } from './drivers';
+import type { FitProblem } from './problem';
+import type { QuantityId } from '../data/types';
 import { fitOffsets, robustFitSettings } from './fit-offsets';
 import type { OffsetFit } from './fit-offsets';
 import type { ResolvedShiftOptions, VerticalChoice } from './types';
@@ -45,6 +47,31 @@ export const AUTO_MIN_EFFECT_DECADES = 0.002;
 /** log10 bT of the entropic law with expansion αV (ρref cancels). */
 export function entropicLog10bT(T: number, referenceK: number, alpha: number): number {
   return Math.log10((referenceK * (1 + alpha * (T - referenceK))) / T);
+}
+
+/** The problem with each curve's log ordinate moved by β_q·log10 bT (the same binning). */
+function withOffsets(
+  p: FitProblem,
+  drivers: QuantityId[],
+  active: number[],
+  log10bT: number[],
+): FitProblem {
+  const beta = drivers.map(betaOf);
+  return {
+    ...p,
+    curves: p.curves.map((series, c) =>
+      series.map((ser, d) => {
+        const v = beta[d] * log10bT[active[c]];
+        if (v === 0) return ser;
+        // Plain loops: Float64Array.from with a mapping function is several times slower.
+        const y = new Float64Array(ser.y.length);
+        for (let i = 0; i < y.length; i++) y[i] = ser.y[i] + v;
+        const ySorted = new Float64Array(ser.ySorted.length);
+        for (let i = 0; i < ySorted.length; i++) ySorted[i] = ser.ySorted[i] + v;
+        return { ...ser, y, ySorted };
+      }),
+    ),
+  };
 }
 
 /** Result of the profile of the horizontal fit's mismatch over αV. */
@@ -92,25 +119,35 @@ export function profileExpansion(
   const alpha0 = 1 / s.referenceK;
   let dropped: Set<number>[] | undefined;
   let start: Float64Array | null = null;
+  const build = (d: Set<number>[] | undefined): FitProblem =>
+    buildProblem(dataset, {
+      active,
+      drivers: s.drivers,
+      fixedLog10bT: null,
+      joint: false,
+      minOverlapPoints: s.minOverlapPoints,
+      maxPointsPerDecade: s.maxPointsPerDecade,
+      dropped: d,
+    });
+  let base: FitProblem | null = null;
   const run = (beta: number, first: boolean): { ss: number; s2: number } | null => {
     const log10bT = temps.map((T) => entropicLog10bT(T, s.referenceK, alpha0 + beta));
     const fit = fitOffsets({
-      build: (d) =>
-        buildProblem(dataset, {
-          active,
-          drivers: s.drivers,
-          fixedLog10bT: log10bT,
-          joint: false,
-          minOverlapPoints: s.minOverlapPoints,
-          maxPointsPerDecade: s.maxPointsPerDecade,
-          dropped: d ?? dropped,
-        }),
+      // A fixed bT only moves each curve's log ordinate by a constant: the binned curves are
+      // built once (without the outliers of the first fit) and offset for each trial αV.
+      build: (d) => {
+        if (first) return withOffsets(build(d), s.drivers, active, log10bT);
+        base ??= build(dropped);
+        return withOffsets(base, s.drivers, active, log10bT);
+      },
       temperaturesK: active.map((k) => temps[k]),
       referenceK: s.referenceK,
       locked: new Map(),
       initial: start,
       ...robustFitSettings(s),
       flagOutliers: first && s.flagOutliers,
+      // Only the mismatch is compared between trial αV: no standard errors needed.
+      uncertainty: false,
       scanStep: s.scanStepDecades,
       directionAllowance: s.reverseAllowanceDecades,
       maxOffset: Infinity,
