@@ -7,6 +7,8 @@ import { describe, expect, it } from 'vitest';
 import { analysisSummary, buildMasterCurve } from '../../../core/pipeline';
 import { syntheticIsotherms } from '../../../core/synthetic';
 import { MELT_ARRHENIUS } from '../shift/fixtures';
+import { reportHtml } from '../../../core/report';
+import { shiftTableCsv } from '../../../core/report/csv';
 
 describe('analysisSummary() vertical choice', () => {
   it('analysisSummary() reports vertical.chosen and vertical.reason, and the shifts are right', () => {
@@ -42,5 +44,23 @@ describe('analysisSummary() vertical choice', () => {
     );
     expect(s.vertical.chosen).toBe('none');
     expect(s.curves[0].leftOut?.code).toBe('excluded');
+  });
+
+  it('shiftTableCsv() and reportHtml() carry the left-out reason and the vertical choice', () => {
+    const { dataset } = syntheticIsotherms({
+      ...MELT_ARRHENIUS.options,
+      relativeNoise: 0.02,
+      seed: 7,
+    });
+    // Moduli 10⁴ times higher on one isotherm: it overlaps nothing and is left out.
+    for (const q of ['storageModulus', 'lossModulus'] as const)
+      dataset.isotherms[9].quantities[q] = dataset.isotherms[9].quantities[q]!.map((v) => v * 1e4);
+    const a = buildMasterCurve(dataset, { referenceTemperatureK: 463.15 });
+    const csv = shiftTableCsv(a);
+    expect(csv).toMatch(/left_out_code,left_out_reason/);
+    expect(csv).toMatch(/T10,.*,no,no-overlap,/);
+    const html = reportHtml(a, { date: '2026-12-01' });
+    expect(html).toMatch(/overlaps no other isotherm/);
+    expect(html).toMatch(/Vertical shift chosen automatically: bT = 1/);
   });
 });
