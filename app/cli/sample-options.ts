@@ -62,16 +62,16 @@ export function addSampleOptions(cmd: Command): Command {
     .addOption(
       new Option(
         '--vertical <mode>',
-        'vertical shift bT: none, density (entropic, needs --density and --expansion) or data (estimated)',
-      ).choices(['none', 'density', 'data']),
+        'vertical shift bT: auto (default: bT from the data when they carry one, the density when --expansion is given), none, density (entropic, needs --expansion; --density optional, for the record) or data (αV of the entropic law fitted to the data)',
+      ).choices(['auto', 'none', 'density', 'data']),
     )
     .option(
       '--density <kg/m3>',
-      'density at the reference temperature, kg/m³ (for --vertical density)',
+      'density at the reference temperature, kg/m³ (for the record: bT depends on --expansion alone)',
     )
     .option(
       '--expansion <1/K>',
-      'volumetric thermal expansion coefficient, 1/K (for --vertical density)',
+      'volumetric thermal expansion coefficient αV, 1/K (for --vertical density, or auto)',
     )
     .option(
       '--models <list>',
@@ -126,7 +126,7 @@ export function addSampleOptions(cmd: Command): Command {
 export interface SampleOptionValues {
   tref?: string;
   shiftBy?: string;
-  vertical?: 'none' | 'density' | 'data';
+  vertical?: 'auto' | 'none' | 'density' | 'data';
   density?: string;
   expansion?: string;
   models?: string;

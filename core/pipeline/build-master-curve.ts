@@ -6,7 +6,7 @@
  * Pure and synchronous; `options.onProgress` reports the stages.
  */
 import type { Dataset } from '../data/types';
-import { resolveAnalysisOptions, type AnalysisOptions } from './options';
+import { defaultReferenceK, resolveAnalysisOptions, type AnalysisOptions } from './options';
 import { applyMasks, checkExcluded } from './apply-masks';
 import { runShift } from './run-shift';
 import { fitShiftModels } from './fit-models';
@@ -35,7 +35,7 @@ export function buildMasterCurve(dataset: Dataset, options: AnalysisOptions = {}
     throw new PipelineError(
       `Sample "${dataset.name}": every isotherm is excluded; nothing is left to shift`,
     );
-  const settings = resolveAnalysisOptions(
+  let settings = resolveAnalysisOptions(
     options,
     active.map((i) => i.temperatureK),
   );
@@ -50,7 +50,20 @@ export function buildMasterCurve(dataset: Dataset, options: AnalysisOptions = {}
   const data = applyMasks(dataset, settings.maskedPoints, warnings);
 
   progress(0.05, 'shift');
-  const { result, curves } = runShift(data, settings, options.warmStartLog10aT);
+  let { result, curves } = runShift(data, settings, options.warmStartLog10aT);
+  // An automatic Tref must be an isotherm that stays in the fit: if the one chosen was left out
+  // (e.g. it overlaps nothing), aT = 1 would be extrapolated from others. Choose again among the
+  // included ones (the one nearest the middle of their range) and shift once more.
+  const atRef = curves.find(
+    (c) => Math.abs(c.temperatureK - settings.referenceTemperatureK) < 0.01,
+  );
+  if (settings.referenceTemperatureAuto && atRef && !atRef.included) {
+    const kept = curves.filter((c) => c.included).map((c) => c.temperatureK);
+    if (kept.length > 0) {
+      settings = { ...settings, referenceTemperatureK: defaultReferenceK(kept) };
+      ({ result, curves } = runShift(data, settings, undefined));
+    }
+  }
   for (const w of result.warnings) warnings.push({ code: w.code, message: w.message });
   const masterCurve = reduceToMasterCurve(
     data,
@@ -74,6 +87,7 @@ export function buildMasterCurve(dataset: Dataset, options: AnalysisOptions = {}
     referenceTemperatureK: settings.referenceTemperatureK,
     dataset: data,
     shiftQuantities: [...result.settings.drivers],
+    vertical: { ...result.vertical },
     curves,
     overallQualityRmsDecades: result.rmsResidualDecades,
     masterCurve,

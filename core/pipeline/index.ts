@@ -40,7 +40,7 @@ export {
   type AnalysisQuery,
   type AnalysisPrediction,
 } from './predict-from-analysis';
-export { log10bTAt, type VerticalShiftAt } from './vertical-at';
+export { appliedVertical, log10bTAt, type VerticalShiftAt } from './vertical-at';
 export { vanGurpPalmenSeries, type VanGurpPalmenSeries } from './van-gurp-palmen';
 export { THERMOSHIFT_VERSION } from './version';
 export { toCelsius } from './temperature';

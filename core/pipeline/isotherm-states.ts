@@ -35,21 +35,6 @@ const MODEL_NAME: Record<ShiftModelKind, string> = {
   polynomial: 'polynomial',
 };
 
-/** The engine's reason in a curve note, without the parts that are not reasons to leave it out. */
-function engineReason(note: string | undefined): string | null {
-  const parts = (note ?? '')
-    .split(';')
-    .map((p) => p.trim())
-    .filter(
-      (p) =>
-        p !== '' &&
-        p !== 'excluded by the user' &&
-        p !== 'shift fixed by hand' &&
-        !/outlier point\(s\) left out$/.test(p),
-    );
-  return parts.length ? parts.join('; ') : null;
-}
-
 export function isothermStates(a: Analysis): IsothermState[] {
   const excluded = new Set(a.settings.excludedIsothermIds);
   const locks = a.settings.lockedLog10aT;
@@ -64,7 +49,9 @@ export function isothermStates(a: Analysis): IsothermState[] {
       : excluded.has(c.isothermId)
         ? 'excluded'
         : 'left-out';
-    const reason = use === 'left-out' ? (engineReason(c.note) ?? 'not part of the fit') : null;
+    // The engine's structured reason (an analysis saved before it existed keeps its note).
+    const reason =
+      use === 'left-out' ? (c.leftOut?.message ?? c.note ?? 'not part of the fit') : null;
     let drawLog10aT: number | null = c.log10aT;
     let placedBy: IsothermState['placedBy'] = c.log10aT === null ? null : locked ? 'lock' : 'fit';
     if (drawLog10aT === null && locked) {

@@ -21,14 +21,18 @@ export const analysisOptionsSchema = z.strictObject({
    */
   shiftQuantities: z.union([z.literal('auto'), z.array(quantityId).min(1)]).optional(),
   /**
-   * Vertical shift bT: none; the entropic estimate from density; or estimated from the data.
-   * @default 'none'
+   * Vertical shift bT: decided from the data ('auto': bT from δ against |G*| when the data carry
+   * one, else none; the density when one is given); none; the entropic estimate from density; or
+   * estimated from the data. @default 'auto'
    */
-  verticalShift: z.enum(['none', 'density', 'data']).optional(),
-  /** Density input for `verticalShift: 'density'`: ρ at Tref (kg/m³) and volumetric expansion αV (1/K). */
+  verticalShift: z.enum(['auto', 'none', 'density', 'data']).optional(),
+  /**
+   * Density input for `verticalShift: 'density'`: the volumetric expansion αV (1/K), and ρ at
+   * Tref (kg/m³) for the record only (bT = Tref·ρref/(T·ρ(T)) depends on αV alone).
+   */
   density: z
     .strictObject({
-      referenceDensityKgPerM3: z.number().positive(),
+      referenceDensityKgPerM3: z.number().positive().optional(),
       volumetricExpansionPerK: z.number().min(0).max(0.01),
     })
     .optional(),
@@ -82,8 +86,8 @@ export interface ResolvedAnalysisOptions {
   /** True when Tref was chosen automatically. */
   referenceTemperatureAuto: boolean;
   shiftQuantities: 'auto' | QuantityId[];
-  verticalShift: 'none' | 'density' | 'data';
-  density: { referenceDensityKgPerM3: number; volumetricExpansionPerK: number } | null;
+  verticalShift: 'auto' | 'none' | 'density' | 'data';
+  density: { referenceDensityKgPerM3?: number; volumetricExpansionPerK: number } | null;
   models: ('wlf' | 'arrhenius' | 'polynomial')[];
   pronyModesPerDecade: 0 | 1 | 2;
   pronyEquilibrium: 'auto' | 'fit' | 'zero';
@@ -142,10 +146,10 @@ export function resolveAnalysisOptions(
     throw new OptionsError(`Invalid analysis option ${text}`, key);
   }
   const o = parsed.data;
-  const verticalShift = o.verticalShift ?? 'none';
+  const verticalShift = o.verticalShift ?? 'auto';
   if (verticalShift === 'density' && !o.density)
     throw new OptionsError(
-      'Invalid analysis option density: verticalShift "density" needs density.referenceDensityKgPerM3 and density.volumetricExpansionPerK',
+      'Invalid analysis option density: verticalShift "density" needs density.volumetricExpansionPerK (density.referenceDensityKgPerM3 is optional)',
       'density',
     );
   const auto = o.referenceTemperatureK === undefined;

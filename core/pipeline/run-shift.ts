@@ -16,7 +16,9 @@ export function shiftOptionsFor(s: ResolvedAnalysisOptions): ShiftOptions {
     ...(s.density && {
       density: {
         kind: 'expansion' as const,
-        referenceDensityKgPerM3: s.density.referenceDensityKgPerM3,
+        ...(s.density.referenceDensityKgPerM3 !== undefined && {
+          referenceDensityKgPerM3: s.density.referenceDensityKgPerM3,
+        }),
         volumetricExpansionPerK: s.density.volumetricExpansionPerK,
       },
     }),
@@ -37,7 +39,8 @@ export function cleanLog(v: number | null): number | null {
 function noteOf(c: ShiftResult['curves'][number]): string | undefined {
   const notes: string[] = [];
   if (c.excluded) notes.push('excluded by the user');
-  if (c.overlapsNothing) notes.push('overlaps no other isotherm: no shift can be found');
+  if (c.leftOut && c.leftOut.code !== 'excluded') notes.push(c.leftOut.message);
+  else if (c.overlapsNothing) notes.push('overlaps no other isotherm: no shift can be found');
   if (c.locked) notes.push('shift fixed by hand');
   if (c.outlierPoints.length) notes.push(`${c.outlierPoints.length} outlier point(s) left out`);
   return notes.length ? notes.join('; ') : undefined;
@@ -64,6 +67,7 @@ export function runShift(
       included: c.included,
       qualityRmsDecades: c.rmsResidualDecades,
       ...(note && { note }),
+      ...(c.leftOut && { leftOut: { ...c.leftOut } }),
     };
   });
   return { result, curves };

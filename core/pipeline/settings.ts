@@ -38,9 +38,9 @@ export const settingsSchema = z.strictObject({
   referenceTemperature: temperature.optional(),
   /** Quantities that drive the horizontal shift. @default 'auto' */
   shiftBy: z.union([z.literal('auto'), z.array(quantityId).min(1)]).optional(),
-  /** @default 'none' */
-  verticalShift: z.enum(['none', 'density', 'data']).optional(),
-  /** Density at the reference temperature, kg/m³ (for verticalShift 'density'). */
+  /** @default 'auto' */
+  verticalShift: z.enum(['auto', 'none', 'density', 'data']).optional(),
+  /** Density at the reference temperature, kg/m³ (for the record; bT needs only expansionPerK). */
   densityKgPerM3: z.number().positive().optional(),
   /** Volumetric thermal expansion coefficient αV, 1/K (for verticalShift 'density'). */
   expansionPerK: z.number().min(0).max(0.01).optional(),
@@ -176,18 +176,17 @@ export function settingsToAnalysisOptions(
     );
   if (s.shiftBy !== undefined) o.shiftQuantities = s.shiftBy;
   if (s.verticalShift !== undefined) o.verticalShift = s.verticalShift;
-  if (s.verticalShift === 'density') {
-    if (s.densityKgPerM3 === undefined || s.expansionPerK === undefined)
-      throw new SettingsError(
-        `${source}: verticalShift "density" needs densityKgPerM3 and expansionPerK`,
-        s.densityKgPerM3 === undefined ? 'densityKgPerM3' : 'expansionPerK',
-        source,
-      );
+  if (s.verticalShift === 'density' && s.expansionPerK === undefined)
+    throw new SettingsError(
+      `${source}: verticalShift "density" needs expansionPerK (densityKgPerM3 is optional)`,
+      'expansionPerK',
+      source,
+    );
+  if (s.expansionPerK !== undefined && s.verticalShift !== 'none' && s.verticalShift !== 'data')
     o.density = {
-      referenceDensityKgPerM3: s.densityKgPerM3,
+      ...(s.densityKgPerM3 !== undefined && { referenceDensityKgPerM3: s.densityKgPerM3 }),
       volumetricExpansionPerK: s.expansionPerK,
     };
-  }
   if (s.models !== undefined) o.models = s.models;
   if (s.pronyModesPerDecade !== undefined) o.pronyModesPerDecade = s.pronyModesPerDecade;
   if (s.pronyEquilibrium !== undefined) o.pronyEquilibrium = s.pronyEquilibrium;

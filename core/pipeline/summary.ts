@@ -3,6 +3,7 @@
  * Keys are documented in docs/cli.md; add keys, never rename or remove them.
  * Temperatures in °C unless the key ends in K; log quantities in decades.
  */
+import { appliedVertical } from './vertical-at';
 import type {
   Analysis,
   AnalysisCurve,
@@ -54,6 +55,17 @@ export interface AnalysisSummary {
   referenceTemperatureK: number;
   conventions: typeof CONVENTIONS;
   shiftQuantities: string[];
+  /** The vertical shift applied ('auto' resolved: `chosen`) and why (`reason`). */
+  vertical: {
+    requested: string;
+    chosen: 'none' | 'density' | 'data';
+    reason: string;
+    /** αV used or fitted, 1/K; null without one. */
+    expansionPerK: number | null;
+    expansionStdErr: number | null;
+    /** Largest |log10 bT| the data (or the density) imply over the measured temperatures, decades. */
+    effectDecades: number | null;
+  };
   curves: SummaryCurve[];
   overallQualityRmsDecades: number | null;
   models: {
@@ -203,6 +215,14 @@ export function analysisSummary(analysis: Analysis): AnalysisSummary {
     referenceTemperatureK: roundKelvin(analysis.referenceTemperatureK),
     conventions: CONVENTIONS,
     shiftQuantities: [...analysis.shiftQuantities],
+    vertical: {
+      requested: analysis.settings.verticalShift,
+      chosen: appliedVertical(analysis),
+      reason: analysis.vertical?.reason ?? `requested: ${analysis.settings.verticalShift}`,
+      expansionPerK: analysis.vertical?.expansionPerK ?? null,
+      expansionStdErr: analysis.vertical?.expansionStdErr ?? null,
+      effectDecades: analysis.vertical?.effectDecades ?? null,
+    },
     curves: analysis.curves.map((c) => ({
       isothermId: c.isothermId,
       temperature: toCelsius(c.temperatureK),
@@ -214,6 +234,7 @@ export function analysisSummary(analysis: Analysis): AnalysisSummary {
       included: c.included,
       qualityRmsDecades: c.qualityRmsDecades,
       ...(c.note !== undefined && { note: c.note }),
+      ...(c.leftOut !== undefined && { leftOut: { ...c.leftOut } }),
     })),
     overallQualityRmsDecades: analysis.overallQualityRmsDecades,
     models,

@@ -9,7 +9,7 @@
  */
 import type { AbscissaKind, Dataset, DeformationMode, QuantityId, TestKind } from '../data/types';
 import type { ShiftModelSpec } from '../models/types';
-import type { CurveShift } from '../shift/types';
+import type { CurveShift, LeftOut, VerticalChoice } from '../shift/types';
 import type { ResolvedAnalysisOptions } from './options';
 
 /** A problem found while analysing, shown to users; file/row/column when it concerns lab data. */
@@ -43,6 +43,8 @@ export interface AnalysisCurve extends Pick<
   qualityRmsDecades: number | null;
   /** Why the isotherm is not included, or how its shift was set. */
   note?: string;
+  /** Why the isotherm is not part of the master curve (stable code and sentence); absent when included. */
+  leftOut?: LeftOut;
 }
 
 /** The reduced master curve at the reference temperature, one entry per point, sorted by reducedX. */
@@ -207,6 +209,8 @@ export interface Analysis {
   dataset: Dataset;
   /** Quantities that drove the horizontal shift. */
   shiftQuantities: QuantityId[];
+  /** The vertical shift applied ('auto' resolved) and why. Absent in analyses saved before it existed. */
+  vertical?: VerticalChoice;
   curves: AnalysisCurve[];
   /** Overall RMS residual of all included isotherms against the master curve, decades. */
   overallQualityRmsDecades: number | null;

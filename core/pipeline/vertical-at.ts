@@ -6,6 +6,13 @@
  */
 import { densityFromExpansion, entropicBT } from '../models/shift-laws';
 import type { Analysis } from './types';
+import { entropicLog10bT } from '../shift/vertical';
+
+/** The vertical-shift mode the analysis applied ('auto' resolved to its choice). */
+export function appliedVertical(a: Analysis): 'none' | 'density' | 'data' {
+  const requested = a.settings.verticalShift;
+  return a.vertical?.chosen ?? (requested === 'auto' ? 'none' : requested);
+}
 
 export interface VerticalShiftAt {
   log10bT: number;
@@ -32,10 +39,19 @@ export function interpolateSorted(
 
 export function log10bTAt(a: Analysis, temperatureK: number): VerticalShiftAt {
   const s = a.settings;
-  if (s.verticalShift === 'none')
+  const mode = appliedVertical(a);
+  if (mode === 'none')
     return { log10bT: 0, note: 'no vertical shift (bT = 1)', extrapolated: false };
-  if (s.verticalShift === 'density' && s.density) {
-    const { referenceDensityKgPerM3: rhoRef, volumetricExpansionPerK: alpha } = s.density;
+  if (mode === 'data' && a.vertical?.expansionPerK != null)
+    return {
+      log10bT: entropicLog10bT(temperatureK, s.referenceTemperatureK, a.vertical.expansionPerK),
+      note: 'bT from the entropic law with αV fitted to δ against |G*|',
+      extrapolated: false,
+    };
+  if (mode === 'density' && s.density) {
+    const { volumetricExpansionPerK: alpha } = s.density;
+    // ρref cancels in bT (1 stands in when it was not given).
+    const rhoRef = s.density.referenceDensityKgPerM3 ?? 1;
     const rho = densityFromExpansion(temperatureK, s.referenceTemperatureK, rhoRef, alpha);
     const bT = entropicBT(temperatureK, s.referenceTemperatureK, rho, rhoRef);
     return {

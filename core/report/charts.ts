@@ -11,6 +11,7 @@ import { pronyLoss, pronyRelaxation, pronyStorage } from '../spectrum/prony-mode
 import type { ChartSeries, ChartSpec, LegendEntry } from './svg/chart-types';
 import { temperatureColour } from './svg/colour';
 import { toCelsius } from '../pipeline/temperature';
+import { appliedVertical } from '../pipeline/vertical-at';
 import { vanGurpPalmenSeries } from '../pipeline/van-gurp-palmen';
 import {
   outputUnitLabel,
@@ -295,7 +296,7 @@ export function vanGurpPalmenChart(a: Analysis, unit: ModulusUnit): ChartSpec | 
     height: H,
     x: {
       kind: 'log',
-      label: `${a.settings.verticalShift === 'none' ? '' : 'bT·'}${sym} (${unit})`,
+      label: `${appliedVertical(a) === 'none' ? '' : 'bT·'}${sym} (${unit})`,
     },
     y: { kind: 'linear', label: 'phase angle δ (°)', domain: [0, 90] },
     series,
@@ -305,7 +306,7 @@ export function vanGurpPalmenChart(a: Analysis, unit: ModulusUnit): ChartSpec | 
 
 /** log10 bT ± s.e. against temperature; null when no vertical shift was applied. */
 export function verticalShiftChart(a: Analysis): ChartSpec | null {
-  if (a.settings.verticalShift === 'none') return null;
+  if (appliedVertical(a) === 'none') return null;
   const [lo, hi] = temperatureRange(a);
   const series: ChartSeries[] = a.curves
     .filter((c) => c.log10bT !== null)
@@ -320,7 +321,7 @@ export function verticalShiftChart(a: Analysis): ChartSpec | null {
     }));
   if (series.length === 0) return null;
   const how =
-    a.settings.verticalShift === 'density' ? 'entropic, from density' : 'estimated from the data';
+    appliedVertical(a) === 'density' ? 'entropic, from density' : 'estimated from the data';
   return {
     id: 'chart-vertical',
     title: 'Vertical shift factors against temperature',

@@ -5,6 +5,7 @@
 import type { Analysis } from '../pipeline/types';
 import { quantitySymbol } from '../data/quantities';
 import { toCelsius } from '../pipeline/temperature';
+import { appliedVertical } from '../pipeline/vertical-at';
 import { pronySymbols } from '../spectrum/prony-symbols';
 
 export const CAUTIONS: readonly string[] = [
@@ -27,12 +28,17 @@ export function methodParagraphs(a: Analysis): string[] {
   const s = a.settings;
   const sym = (q: Parameters<typeof quantitySymbol>[0]): string =>
     quantitySymbol(q, a.sample.deformation);
+  const mode = appliedVertical(a);
+  const why = a.vertical
+    ? ` Vertical shift ${a.vertical.requested === 'auto' ? 'chosen automatically' : 'as requested'}: ${a.vertical.reason}.`
+    : '';
   const vertical =
-    s.verticalShift === 'none'
+    (mode === 'none'
       ? 'No vertical shift was applied (bT = 1).'
-      : s.verticalShift === 'density'
-        ? `The vertical shift is the entropic estimate bT = Tref·ρref/(T·ρ(T)) (Ferry 1980) with ρref = ${s.density?.referenceDensityKgPerM3} kg/m³ and αV = ${s.density?.volumetricExpansionPerK} 1/K.`
-        : 'The vertical shift bT was estimated from the data. Fitting aT and bT together weakens the physical meaning of both; treat large or erratic bT as a sign that superposition fails.';
+      : mode === 'density'
+        ? `The vertical shift is the entropic estimate bT = Tref·ρref/(T·ρ(T)) (Ferry 1980) with αV = ${s.density?.volumetricExpansionPerK} 1/K${s.density?.referenceDensityKgPerM3 !== undefined ? ` (ρref = ${s.density.referenceDensityKgPerM3} kg/m³, for the record: bT depends on αV alone)` : ''}.`
+        : 'The vertical shift bT was estimated from the data (δ against |G*|, which needs no horizontal shift). Treat large or erratic bT as a sign that superposition fails.') +
+    why;
   const xName = a.sample.abscissa === 'angularFrequency' ? 'log ω' : 'log t';
   const paragraphs = [
     `${a.dataset.isotherms.length} isotherms (${a.sample.testKind}, ${a.sample.deformation}) were shifted to the reference temperature ${toCelsius(a.referenceTemperatureK)} °C${s.referenceTemperatureAuto ? ' (chosen automatically: the measured temperature nearest the middle of the range)' : ''}. ` +

@@ -91,12 +91,48 @@ export function gradeOf(
   disagreement: number | null,
   z: number | null,
 ): SuperpositionGrade {
+  return gradeWithReasons(mismatch, vgp, disagreement, z, null).grade;
+}
+
+/**
+ * Shifts from two quantities count as disagreeing for a `fair` grade only beyond this many
+ * combined standard errors: the largest of many isotherms' differences is compared, and at 2.5
+ * about one set in twenty of a simple material with ten isotherms would be called fair by chance
+ * (Bonferroni, as in fit-offsets.ts).
+ */
+export const FAIR_DISAGREE_Z = 4;
+
+/** The grade and, for each criterion that set it, a sentence with its figure and threshold. */
+export function gradeWithReasons(
+  mismatch: number | null,
+  vgp: number | null,
+  disagreement: number | null,
+  z: number | null,
+  ignoredBTDecades: number | null,
+): { grade: SuperpositionGrade; reasons: string[] } {
   const ratios = [mismatch, vgp].filter((r): r is number => r !== null && Number.isFinite(r));
+  if (ratios.length === 0 && disagreement === null) return { grade: 'unknown', reasons: [] };
   const disagrees = (lim: number, zl: number): boolean =>
     disagreement !== null && z !== null && disagreement > lim && z > zl;
-  if (ratios.length === 0 && disagreement === null) return 'unknown';
-  if (ratios.some((r) => r > POOR_RATIO) || disagrees(DISAGREE_DECADES, DISAGREE_Z)) return 'poor';
-  if (ratios.some((r) => r > FAIR_RATIO) || disagrees(DISAGREE_DECADES / 2, DISAGREE_Z / 2))
-    return 'fair';
-  return 'good';
+  const poor: string[] = [];
+  const fair: string[] = [];
+  const ratioReason = (name: string, r: number | null): void => {
+    if (r === null || !Number.isFinite(r)) return;
+    if (r > POOR_RATIO) poor.push(`${name} ${r.toFixed(1)}× the noise (poor above ${POOR_RATIO})`);
+    else if (r > FAIR_RATIO)
+      fair.push(`${name} ${r.toFixed(1)}× the noise (fair above ${FAIR_RATIO})`);
+  };
+  ratioReason('mismatch after shifting', mismatch);
+  ratioReason('van Gurp–Palmen spread', vgp);
+  const dis = (): string =>
+    `shifts from different quantities differ by up to ${disagreement!.toFixed(2)} decades (${z!.toFixed(1)} standard errors)`;
+  if (disagrees(DISAGREE_DECADES, DISAGREE_Z)) poor.push(dis());
+  else if (disagrees(DISAGREE_DECADES / 2, FAIR_DISAGREE_Z)) fair.push(dis());
+  if (ignoredBTDecades !== null)
+    fair.push(
+      `the data carry a vertical shift of up to ${ignoredBTDecades.toFixed(3)} decades that was not applied`,
+    );
+  if (poor.length) return { grade: 'poor', reasons: [...poor, ...fair] };
+  if (fair.length) return { grade: 'fair', reasons: fair };
+  return { grade: 'good', reasons: [] };
 }

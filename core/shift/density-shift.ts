@@ -22,7 +22,8 @@ export function densityLog10bT(
       return densityFromExpansion(
         T,
         referenceK,
-        density.referenceDensityKgPerM3,
+        // ρref cancels in bT; 1 stands in when it was not given.
+        density.referenceDensityKgPerM3 ?? 1,
         density.volumetricExpansionPerK,
       );
     const pts = [...density.points].sort((a, b) => a.temperatureK - b.temperatureK);

@@ -2,9 +2,9 @@
  * Which quantities drive the horizontal shift, and how each enters the fit in log space.
  * Default rule (documented in docs/shifting.md):
  *   relaxation → G(t)/E(t); creep → J(t)/D(t);
- *   oscillatory with vertical 'data' → tan δ (independent of bT, Mavridis & Shroff 1992);
- *   oscillatory otherwise → G' and G'' together when both are present, else the first present of
- *   tan δ, |G*|, G', G'', δ, |η*|.
+ *   oscillatory (whatever the vertical mode: bT from the data is one global constant, see
+ *   vertical.ts) → G' and G'' together when both are present, else the first present of
+ *   tan δ, |G*|, G', G'', δ, |η*| (one quantity is enough).
  */
 import type { Dataset, QuantityId } from '../data/types';
 import type { VerticalMode } from './types';
@@ -13,12 +13,10 @@ export function hasQuantity(dataset: Dataset, q: QuantityId): boolean {
   return dataset.isotherms.some((iso) => (iso.quantities[q]?.length ?? 0) > 0);
 }
 
-export function defaultDrivers(dataset: Dataset, vertical: VerticalMode): QuantityId[] {
+export function defaultDrivers(dataset: Dataset, _vertical: VerticalMode): QuantityId[] {
   if (dataset.testKind === 'relaxation') return ['relaxationModulus'];
   if (dataset.testKind === 'creep') return ['creepCompliance'];
   const has = (q: QuantityId): boolean => hasQuantity(dataset, q);
-  if (vertical === 'data' && (has('tanDelta') || (has('storageModulus') && has('lossModulus'))))
-    return ['tanDelta'];
   if (has('storageModulus') && has('lossModulus')) return ['storageModulus', 'lossModulus'];
   // One quantity is enough: a file with only G' (or only G''/E'') shifts on it.
   const order: QuantityId[] = [

@@ -35,6 +35,13 @@ export interface OffsetFitInput {
   referenceK: number;
   /** Curve index → fixed horizontal offset. */
   locked: Map<number, number>;
+  /**
+   * Locked curves take part in the comparisons (the others move towards them). @default false:
+   * they stand aside (see locksStandAside).
+   */
+  locksInform?: boolean;
+  /** Work out standard errors and the covariance (costly). @default true */
+  uncertainty?: boolean;
   /** Warm start per curve (NaN = unknown), or null. */
   initial: Float64Array | null;
   loss: RobustLoss;
@@ -87,6 +94,9 @@ export interface OffsetFit {
   robustSigma: number;
   /** Weighted residual variance of the last pass (the s² of the standard errors), decades². */
   residualVariance: number;
+  /** Σ w r² of the last pass and the number of residuals in it. */
+  weightedSquares: number;
+  residualCount: number;
   /** Per curve, point indices flagged as outliers. */
   outliers: Set<number>[];
   info: FitInfo;
@@ -160,28 +170,58 @@ function chooseMainGroup(
   return best;
 }
 
+/** Isotherms within this of Tref are measured at Tref (as in reference.ts), K. */
+const AT_REFERENCE_K = 0.01;
+
+/**
+ * Whether the locked curves stay out of the comparisons: a shift fixed by hand is a hard
+ * constraint on that curve only, and the others are fitted (and their outliers judged) as if it
+ * were not there, so a hand-placed curve can neither drag them nor make their good points look
+ * like outliers. Not possible when a locked curve is the one measured at Tref (the lock then
+ * defines the reference) or fewer than two curves are left free.
+ */
+function locksStandAside(input: OffsetFitInput, n: number): boolean {
+  if (input.locked.size === 0 || input.locksInform) return false;
+  for (const k of input.locked.keys())
+    if (Math.abs(input.temperaturesK[k] - input.referenceK) <= AT_REFERENCE_K) return false;
+  return n - input.locked.size >= 2;
+}
+
 export function fitOffsets(input: OffsetFitInput): OffsetFit {
   let problem = input.build(undefined);
   const n = problem.curves.length;
   const size = problem.joint ? 2 * n : n;
   const temps = input.temperaturesK;
+  const aside = locksStandAside(input, n);
+  const informing = aside ? new Map<number, number>() : input.locked;
+  const withoutLocked = (pairs: Int32Array): Int32Array => {
+    if (!aside) return pairs;
+    const keep: number[] = [];
+    for (let q = 0; q < pairs.length; q += 2)
+      if (!input.locked.has(pairs[q]) && !input.locked.has(pairs[q + 1]))
+        keep.push(pairs[q], pairs[q + 1]);
+    return Int32Array.from(keep);
+  };
+  problem = { ...problem, pairs: withoutLocked(problem.pairs) };
   const groups = overlapGroups(n, problem.pairs);
   const partners = new Uint8Array(n);
   for (let q = 0; q < problem.pairs.length; q++) partners[problem.pairs[q]] = 1;
-  const main = n > 0 ? chooseMainGroup(groups, temps, input.referenceK, input.locked) : -1;
+  const main = n > 0 ? chooseMainGroup(groups, temps, input.referenceK, informing) : -1;
   const included = new Uint8Array(n);
   const overlapsNothing = new Uint8Array(n);
   const disconnected = new Uint8Array(n);
   for (let k = 0; k < n; k++) {
     const inMain = groups[k] === main && (partners[k] || n === 1);
     if (inMain || input.locked.has(k)) included[k] = 1;
+    if (input.locked.has(k) && aside) continue;
     if (!partners[k]) overlapsNothing[k] = 1;
     else if (!inMain) disconnected[k] = 1;
   }
   const restrict = (p: FitProblem): FitProblem => {
     const keep: number[] = [];
-    for (let q = 0; q < p.pairs.length; q += 2)
-      if (included[p.pairs[q]] && included[p.pairs[q + 1]]) keep.push(p.pairs[q], p.pairs[q + 1]);
+    const pairs = withoutLocked(p.pairs);
+    for (let q = 0; q < pairs.length; q += 2)
+      if (included[pairs[q]] && included[pairs[q + 1]]) keep.push(pairs[q], pairs[q + 1]);
     return { ...p, pairs: Int32Array.from(keep) };
   };
   problem = restrict(problem);
@@ -192,12 +232,13 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
     input.initial !== null &&
     inc.every((k) => input.locked.has(k) || Number.isFinite(input.initial![k]));
   let theta: Float64Array = new Float64Array(size);
-  const known = new Map(input.locked);
+  const known = new Map(informing);
   if (warm) {
     inc.forEach((k) => (theta[k] = input.locked.get(k) ?? input.initial![k]));
   } else if (inc.length > 0) {
     if (known.size === 0) {
-      const anchor = inc.reduce((a, b) =>
+      const free = aside ? inc.filter((k) => !input.locked.has(k)) : inc;
+      const anchor = free.reduce((a, b) =>
         Math.abs(temps[a] - input.referenceK) <= Math.abs(temps[b] - input.referenceK) ? a : b,
       );
       known.set(anchor, 0);
@@ -208,16 +249,18 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
       maxOffset: input.maxOffset,
     });
     theta = start.theta;
+    for (const [k, v] of input.locked) theta[k] = v;
     for (const k of inc)
-      if (!start.placed[k]) {
+      if (!start.placed[k] && !(aside && input.locked.has(k))) {
         included[k] = 0;
         disconnected[k] = 1;
       }
     problem = restrict(problem);
   }
   const incFinal = [...Array(n).keys()].filter((k) => included[k]);
+  const refCurves = aside ? incFinal.filter((k) => !input.locked.has(k)) : incFinal;
   const reference =
-    incFinal.length > 0 ? referenceWeights(incFinal, temps, input.referenceK) : null;
+    refCurves.length > 0 ? referenceWeights(refCurves, temps, input.referenceK) : null;
   const constraints: LinearConstraint[] = [];
   const fixed = new Uint8Array(size);
   let lockConflict: number | null = null;
@@ -233,11 +276,11 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
       reference.coef.forEach((c, k) => (v += c * (input.locked.get(k) ?? 0)));
       if (Math.abs(v) > 1e-9) lockConflict = v;
     } else if (own < 0) constraints.push({ coef: ch, rhs: 0 });
-    if (input.locked.size === 0) {
+    if (informing.size === 0) {
       // Move all curves together so the reference holds without distorting the start.
       let v = 0;
       reference.coef.forEach((c, k) => (v += c * theta[k]));
-      for (const k of incFinal) theta[k] -= v;
+      for (const k of refCurves) theta[k] -= v;
     }
     if (own >= 0 && !allLocked) {
       theta[own] = 0;
@@ -286,7 +329,8 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
   };
   // A first pass that outlier flagging may follow leaves the (costly) covariance for later.
   const mayRefit = input.flagOutliers && incFinal.length > 1;
-  let outcome = runPass(theta, !mayRefit);
+  const wantUncertainty = input.uncertainty !== false;
+  let outcome = runPass(theta, !mayRefit && wantUncertainty);
   let iterations = outcome.iterations;
   let passes = 1;
   if (mayRefit) {
@@ -312,15 +356,12 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
     if (flagged === 0) {
       finalStats = stats;
       finalSigma = sigma;
-      outcome.uncertainty = offsetUncertainty(
-        problem,
-        outcome.theta,
-        settings!,
-        outcome.residualVariance,
-      );
+      outcome.uncertainty = wantUncertainty
+        ? offsetUncertainty(problem, outcome.theta, settings!, outcome.residualVariance)
+        : null;
     } else {
       problem = restrict(input.build(outliers));
-      outcome = runPass(outcome.theta, true);
+      outcome = runPass(outcome.theta, wantUncertainty);
       iterations += outcome.iterations;
       passes = 2;
     }
@@ -353,6 +394,8 @@ export function fitOffsets(input: OffsetFitInput): OffsetFit {
     rms: stats.rms(),
     robustSigma,
     residualVariance: outcome.residualVariance,
+    weightedSquares: outcome.weightedSquares,
+    residualCount: outcome.residualCount,
     outliers,
     buffer,
     prior,

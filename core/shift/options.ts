@@ -25,17 +25,18 @@ export function resolveShiftOptions(dataset: Dataset, o: ShiftOptions): Resolved
     throw new ShiftOptionsError(
       `The referenceK option must be a temperature in kelvin above 0 (got ${o?.referenceK}).`,
     );
-  const vertical = o.vertical ?? 'none';
-  if (!['none', 'density', 'data'].includes(vertical))
+  const vertical = o.vertical ?? 'auto';
+  if (!['auto', 'none', 'density', 'data'].includes(vertical))
     throw new ShiftOptionsError(
-      `The vertical option must be 'none', 'density' or 'data' (got ${vertical}).`,
+      `The vertical option must be 'auto', 'none', 'density' or 'data' (got ${vertical}).`,
     );
   if (vertical === 'density' && !o.density)
     throw new ShiftOptionsError(
       "The density option is required when vertical is 'density' (a density table or ρref with an expansion coefficient).",
     );
   if (o.density?.kind === 'expansion') {
-    positive('density.referenceDensityKgPerM3', o.density.referenceDensityKgPerM3);
+    if (o.density.referenceDensityKgPerM3 !== undefined)
+      positive('density.referenceDensityKgPerM3', o.density.referenceDensityKgPerM3);
     if (!Number.isFinite(o.density.volumetricExpansionPerK))
       throw new ShiftOptionsError(
         'The density.volumetricExpansionPerK option must be a number (1/K).',

@@ -1,6 +1,13 @@
 /** Runs the superposition checks after the main fit and turns them into a grade and warnings. */
 import type { Dataset, QuantityId } from '../data/types';
-import { gradeOf, mismatchRatio, noiseOfProblem, vanGurpPalmenDispersion } from './checks';
+import {
+  DISAGREE_DECADES,
+  DISAGREE_Z,
+  gradeWithReasons,
+  mismatchRatio,
+  noiseOfProblem,
+  vanGurpPalmenDispersion,
+} from './checks';
 import { hasQuantity } from './drivers';
 import type { OffsetFit } from './fit-offsets';
 import { quantityDisagreement } from './quantity-shifts';
@@ -26,6 +33,8 @@ export function runChecks(
   active: number[],
   vertical: VerticalOutcome,
   warnings: ShiftWarning[],
+  /** Size of a vertical shift the data carry but the user turned off, decades; else null. */
+  ignoredBTDecades: number | null = null,
 ): ShiftChecks {
   const includedCount = fit.included.reduce((a, b) => a + b, 0);
   const position = new Map(active.map((k, c) => [k, c]));
@@ -49,10 +58,16 @@ export function runChecks(
       : null;
   const dis =
     compared.length >= 2 ? quantityDisagreement(dataset, s, fit, active, vertical, compared) : null;
-  const grade =
+  const { grade, reasons } =
     includedCount > 1
-      ? gradeOf(mismatch, vgp?.ratio ?? null, dis?.decades ?? null, dis?.z ?? null)
-      : 'unknown';
+      ? gradeWithReasons(
+          mismatch,
+          vgp?.ratio ?? null,
+          dis?.decades ?? null,
+          dis?.z ?? null,
+          ignoredBTDecades,
+        )
+      : { grade: 'unknown' as const, reasons: [] };
   const checks: ShiftChecks = {
     vanGurpPalmenRmsDeg: vgp?.rmsDeg ?? null,
     vanGurpPalmenRatio: vgp?.ratio ?? null,
@@ -64,17 +79,7 @@ export function runChecks(
     grade,
     superpositionOk: grade === 'good' || grade === 'fair',
   };
-  const figures = [
-    mismatch !== null ? `mismatch ${mismatch.toFixed(1)}× the noise` : '',
-    vgp
-      ? `van Gurp–Palmen spread ${vgp.ratio !== null ? `${vgp.ratio.toFixed(1)}× the noise, ` : ''}${vgp.rmsDeg.toFixed(1)}° RMS`
-      : '',
-    dis
-      ? `shifts from ${compared.join(' and ')} differ by up to ${dis.decades.toFixed(2)} decades`
-      : '',
-  ]
-    .filter(Boolean)
-    .join('; ');
+  const figures = reasons.join('; ');
   if (grade === 'poor')
     warn(
       warnings,
@@ -87,7 +92,7 @@ export function runChecks(
       'fair-superposition',
       `Superposition is only fair (${figures}); check the shifted curves before using the master curve.`,
     );
-  if (dis && dis.decades > 0.1 && dis.z > 3)
+  if (dis && dis.decades > DISAGREE_DECADES && dis.z > DISAGREE_Z)
     warn(
       warnings,
       'quantities-disagree',

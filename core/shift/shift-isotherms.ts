@@ -12,13 +12,21 @@ import { resolveShiftOptions, ShiftOptionsError } from './options';
 import { runChecks } from './run-checks';
 import type {
   CurveShift,
+  LeftOut,
   ResolvedShiftOptions,
   ShiftCovariance,
   ShiftOptions,
   ShiftResult,
   ShiftWarning,
 } from './types';
-import { verticalShift } from './vertical';
+import {
+  AUTO_CHI2_DROP,
+  AUTO_MIN_EFFECT_DECADES,
+  AUTO_Z,
+  PLAUSIBLE_EXPANSION_PER_K,
+  verticalShift,
+} from './vertical';
+import { shiftErrorFloor } from './shift-information';
 import { describeIsotherm, formatC, warn } from './warnings';
 
 export const SHIFT_CONVENTION =
@@ -43,15 +51,36 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
   let active = activeIsotherms(dataset, s, warnings);
 
   const vertical = verticalShift(dataset, active, s);
-  if (s.vertical === 'data') {
+  const noVertical = new Set<number>();
+  if (vertical.free) {
     warn(
       warnings,
       'free-vertical-shift',
-      vertical.joint
-        ? 'bT was fitted together with aT from the data: the two trade off against each other and lose physical meaning; prefer bT from density unless the data demand otherwise.'
-        : 'bT was estimated from the data (δ against |G*|): free vertical shifts weaken the physical meaning of the master curve; prefer bT from density unless the data demand otherwise.',
+      'bT was estimated from the data (δ against |G*|) for each isotherm on its own: free vertical shifts weaken the physical meaning of the master curve; prefer bT from density unless the data demand otherwise.',
     );
-    if (vertical.vgpFit) active = active.filter((k) => Number.isFinite(vertical.log10bT[k]));
+    for (const k of active) if (!Number.isFinite(vertical.log10bT[k])) noVertical.add(k);
+    active = active.filter((k) => !noVertical.has(k));
+  }
+  const vc = vertical.choice;
+  let ignoredBTDecades: number | null = null;
+  if (
+    vc.requested === 'none' &&
+    vc.chi2Drop !== undefined &&
+    vc.expansionPerK !== null &&
+    vc.effectDecades !== null &&
+    vc.chi2Drop > AUTO_CHI2_DROP &&
+    vc.z !== null &&
+    Math.abs(vc.z) > AUTO_Z &&
+    vc.expansionPerK >= PLAUSIBLE_EXPANSION_PER_K[0] &&
+    vc.expansionPerK <= PLAUSIBLE_EXPANSION_PER_K[1] &&
+    vc.effectDecades >= AUTO_MIN_EFFECT_DECADES
+  ) {
+    ignoredBTDecades = vc.effectDecades;
+    warn(
+      warnings,
+      'vertical-shift-ignored',
+      `No vertical shift was asked for, but δ against |G*| shows one: with bT (αV ≈ ${(vc.expansionPerK * 1e4).toFixed(1)}·10⁻⁴ /K) the mismatch drops by ${vc.chi2Drop.toFixed(0)} residual variances and bT would reach ${vc.effectDecades.toFixed(3)} decades over the measured temperatures, and leaving it out moves the shifts by about as much divided by the slope of the curves. Use vertical 'auto', 'density' or 'data'.`,
+    );
   }
   for (const T of vertical.extrapolatedK)
     warn(warnings, 'density-extrapolated', `The density table was extrapolated to ${formatC(T)}.`);
@@ -127,11 +156,17 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
       locked: lockedHere,
       rmsResidualDecades: c >= 0 && Number.isFinite(fit.curveRms[c]) ? fit.curveRms[c] : null,
       outlierPoints: c >= 0 ? [...fit.outliers[c]].sort((a, b) => a - b) : [],
+      leftOut: null,
     };
   });
+  noShiftInformation(dataset, s, curves, warnings);
 
   structuralWarnings(dataset, s, fit, position, curves, includedCount, warnings);
-  const checks = runChecks(dataset, s, fit, active, vertical, warnings);
+  const checks = runChecks(dataset, s, fit, active, vertical, warnings, ignoredBTDecades);
+  curves.forEach((cs, k) => {
+    if (!cs.included)
+      cs.leftOut = leftOutReason(dataset, fit, position[k], cs, noVertical.has(k), n);
+  });
   return {
     referenceK: s.referenceK,
     convention: SHIFT_CONVENTION,
@@ -148,7 +183,75 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
     warnings,
     settings: s,
     fit: fit.info,
+    vertical: vc,
   };
+}
+
+/** Standard errors of a shift above this many decades from the curve's own shape: no information. */
+export const NO_SHIFT_INFORMATION_DECADES = 0.1;
+
+/**
+ * Isotherms too flat to fix a shift (shift-information.ts): their standard error is raised to
+ * what their shape allows, with the `no-shift-information` warning (never a confident shift).
+ */
+function noShiftInformation(
+  dataset: Dataset,
+  s: ResolvedShiftOptions,
+  curves: CurveShift[],
+  warnings: ShiftWarning[],
+): void {
+  curves.forEach((cs, k) => {
+    // The isotherm at Tref defines aT = 1: its shape needs to tell nothing.
+    if (!cs.included || cs.locked || Math.abs(cs.temperatureK - s.referenceK) <= 0.01) return;
+    const floor = shiftErrorFloor(dataset.isotherms[k], s.drivers);
+    if (!(floor > NO_SHIFT_INFORMATION_DECADES)) return;
+    cs.log10aTStdErr = Math.max(cs.log10aTStdErr ?? 0, floor);
+    warn(
+      warnings,
+      'no-shift-information',
+      `Isotherm ${describeIsotherm(dataset.isotherms[k])} is too flat to tell its shift: its shape fixes log10 aT only to ±${floor >= 10 ? floor.toExponential(0) : floor.toFixed(2)} decades (a plateau moves onto itself). Its shift is not to be trusted; measure a wider window or leave it out.`,
+    );
+  });
+}
+
+/** The structured reason an isotherm is not part of the master curve. */
+function leftOutReason(
+  dataset: Dataset,
+  fit: OffsetFit,
+  c: number,
+  cs: CurveShift,
+  noVertical: boolean,
+  activeCount: number,
+): LeftOut {
+  const iso = dataset.isotherms.find((i) => i.id === cs.id)!;
+  const who = describeIsotherm(iso);
+  if (cs.excluded) return { code: 'excluded', message: `${who} was excluded by the user.` };
+  if (noVertical)
+    return {
+      code: 'no-vertical-shift',
+      message: `${who}: δ against |G*| overlaps no other isotherm, so its bT cannot be estimated from the data; it is left out (give a density, or use vertical 'auto').`,
+    };
+  if (c < 0)
+    return {
+      code: 'no-data',
+      message: `${who} has fewer than two usable points for the shift quantities.`,
+    };
+  if (fit.reference?.kind === 'single' && activeCount > 0 && fit.included.every((v) => !v))
+    return {
+      code: 'too-few-isotherms',
+      message: `${who}: only one temperature can be used, so no shift relative to the reference can be found.`,
+    };
+  if (cs.overlapsNothing)
+    return {
+      code: 'no-overlap',
+      message: `${who} overlaps no other isotherm: it carries no shift information.`,
+    };
+  if (fit.disconnected[c])
+    return {
+      code: 'disconnected-group',
+      message: `${who} overlaps only isotherms that do not connect to the rest.`,
+    };
+  return { code: 'no-overlap', message: `${who} could not be placed against the other isotherms.` };
 }
 
 /** The covariance of the included isotherms' shifts, in `curves` order (see ShiftCovariance). */

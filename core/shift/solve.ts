@@ -57,6 +57,8 @@ export interface SolveOutcome {
   residualVariance: number;
   /** Residuals (compared entries) at θ. */
   residualCount: number;
+  /** Σ w r² at θ (the numerator of residualVariance), decades². */
+  weightedSquares: number;
   objective: number;
 }
 
@@ -139,6 +141,7 @@ export function solveOffsets(
     uncertainty: s.covariance === false ? null : offsetUncertainty(p, theta, s, residualVariance),
     residualVariance,
     residualCount: cur.residuals,
+    weightedSquares: cur.weightedSquares,
     objective: cur.objective(),
   };
 }

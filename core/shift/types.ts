@@ -6,15 +6,54 @@
  */
 import type { QuantityId } from '../data/types';
 
-/** How the vertical shift factor bT is obtained. */
-export type VerticalMode = 'none' | 'density' | 'data';
+/**
+ * How the vertical shift factor bT is obtained: 'auto' decides from the data (docs/shifting.md,
+ * "Vertical shift bT"); the others force one way.
+ */
+export type VerticalMode = 'auto' | 'none' | 'density' | 'data';
+
+/** The vertical-shift mode actually applied, and why. */
+export interface VerticalChoice {
+  requested: VerticalMode;
+  chosen: 'none' | 'density' | 'data';
+  /** One sentence for the user: what was applied and the evidence. */
+  reason: string;
+  /** αV of the entropic law (given, or fitted to δ against |G*|), 1/K; null when none. */
+  expansionPerK: number | null;
+  /** Standard error of a fitted αV, 1/K; null when given or not fitted. */
+  expansionStdErr: number | null;
+  /** Largest |log10 bT| over the measured temperatures that the data (or density) imply, decades. */
+  effectDecades: number | null;
+  /** How many standard errors the data's bT lies from bT ≡ 1; null when not estimated. */
+  z: number | null;
+  /**
+   * How much the weighted squares of the shifted curves drop with the data's bT, in residual
+   * variances (the evidence 'auto' weighs); absent when not estimated.
+   */
+  chi2Drop?: number;
+}
+
+/** Why an isotherm is not part of the master curve (a stable code and a sentence). */
+export interface LeftOut {
+  code:
+    | 'excluded'
+    | 'no-overlap'
+    | 'disconnected-group'
+    | 'too-few-isotherms'
+    | 'no-data'
+    | 'no-vertical-shift';
+  message: string;
+}
 
 /** Density of the sample, for the entropic bT = Tref·ρref / (T·ρ(T)) (Ferry 1980). */
 export type DensityInput =
   | {
       kind: 'expansion';
-      /** Density at the reference temperature, kg/m³ (any consistent unit works). */
-      referenceDensityKgPerM3: number;
+      /**
+       * Density at the reference temperature, kg/m³, for the record only: bT depends on αV
+       * alone (ρref cancels). @default undefined
+       */
+      referenceDensityKgPerM3?: number;
       /** Volumetric thermal expansion coefficient αV, 1/K: ρ(T) = ρref / (1 + αV (T − Tref)). */
       volumetricExpansionPerK: number;
     }
@@ -45,9 +84,12 @@ export interface ShiftOptions {
    * are present, else the first present of tanDelta, complexModulus, phaseAngle.
    */
   drivers?: QuantityId[];
-  /** Vertical shift: none, entropic from density, or estimated from the data. @default 'none' */
+  /**
+   * Vertical shift: decided from the data ('auto'), none, entropic from density, or estimated from
+   * the data. With 'auto' and a density given, the density is used. @default 'auto'
+   */
   vertical?: VerticalMode;
-  /** Density for vertical 'density'. Required in that mode. @default undefined */
+  /** Density (αV) for vertical 'density'. Required in that mode; used by 'auto' when given. @default undefined */
   density?: DensityInput;
   /** Isotherm ids left out of the fit (reported with included = false). @default [] */
   excluded?: string[];
@@ -119,7 +161,9 @@ export type ShiftWarningCode =
   | 'outliers-flagged'
   | 'not-converged'
   | 'bad-values'
-  | 'large-uncertainty';
+  | 'large-uncertainty'
+  | 'vertical-shift-ignored'
+  | 'no-shift-information';
 
 export interface ShiftWarning {
   code: ShiftWarningCode;
@@ -149,6 +193,8 @@ export interface CurveShift {
   rmsResidualDecades: number | null;
   /** Indices (into the isotherm's points) flagged as outliers and left out of the fit. */
   outlierPoints: number[];
+  /** Why it is not part of the master curve; null when it is included. */
+  leftOut: LeftOut | null;
 }
 
 export type SuperpositionGrade = 'good' | 'fair' | 'poor' | 'unknown';
@@ -221,6 +267,8 @@ export interface ShiftResult {
   warnings: ShiftWarning[];
   settings: ResolvedShiftOptions;
   fit: FitInfo;
+  /** The vertical-shift mode applied and why. */
+  vertical: VerticalChoice;
 }
 
 /** One point of the master curve: reduced abscissa and reduced quantities. */

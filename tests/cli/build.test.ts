@@ -121,6 +121,16 @@ describe('thermoshift build (synthetic files with known truth)', () => {
     const s = JSON.parse(first.stdout) as AnalysisSummary;
     expect(JSON.parse(readFileSync(join(out, 'summary.json'), 'utf8'))).toEqual(s);
     expect(s.sample.files).toHaveLength(9);
+    // No --vertical given: the choice and its reason are in the summary.
+    expect(s.vertical.requested).toBe('auto');
+    expect(['none', 'data']).toContain(s.vertical.chosen);
+    expect(s.vertical.reason.length).toBeGreaterThan(20);
+  });
+
+  it('build without --json or --out prints which vertical shift was chosen and why', () => {
+    const r = runCli(['build', data, '--tref', '373.15K', '--vertical', 'auto']);
+    expect(r.status, r.stderr).toBe(EXIT.ok);
+    expect(r.stdout).toMatch(/^vertical shift: (none|data) \((bT = 1|bT from the data)/m);
   });
 
   it('build recovers log10 aT within 0.02 decades and the WLF constants of the truth', () => {

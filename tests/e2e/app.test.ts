@@ -237,6 +237,8 @@ describe('the Thermoshift app in Chromium', () => {
   });
 
   it('nudges a curve with its button, as one undo step', async () => {
+    // The undo of the mask above re-fits; read the shift once that is done.
+    await settled();
     const id = await rowIdAt('10.0');
     const before = Number(await rowText(id, 'log-aT'));
     await page.click(`tr[data-isotherm="${id}"] [data-role="nudge-right"]`);

@@ -103,9 +103,10 @@ export function textSummary(a: Analysis): string {
   const lines = [
     `${a.sample.name}: ${a.curves.length} isotherms, Tref = ${toCelsius(a.referenceTemperatureK)} °C`,
     `shifted on ${a.shiftQuantities.map((q) => quantitySymbol(q, a.dataset.deformation)).join(' and ')}`,
+    `vertical shift: ${a.vertical ? `${a.vertical.chosen} (${a.vertical.reason})` : a.settings.verticalShift}`,
     ...a.curves.map(
       (c) =>
-        `  ${c.isothermId} ${formatFixed(toCelsius(c.temperatureK), 2).padStart(8)} °C  log10 aT = ${formatFixed(c.log10aT, 3)} ± ${formatFixed(c.log10aTStdErr, 3)}${c.included ? '' : `  (not included${c.note ? `: ${c.note}` : ''})`}`,
+        `  ${c.isothermId} ${formatFixed(toCelsius(c.temperatureK), 2).padStart(8)} °C  log10 aT = ${formatFixed(c.log10aT, 3)} ± ${formatFixed(c.log10aTStdErr, 3)}${c.included ? '' : `  (not included${c.leftOut ? `: ${c.leftOut.message}` : c.note ? `: ${c.note}` : ''})`}`,
     ),
   ];
   const { wlf, arrhenius } = a.models;

@@ -3,6 +3,7 @@ import type { Analysis } from '../../pipeline/types';
 import { conventionCommentLines } from '../../pipeline/conventions';
 import { toCelsius, toKelvinText } from '../../pipeline/temperature';
 import { csvDocument, csvNumber } from './csv-format';
+import { appliedVertical } from '../../pipeline/vertical-at';
 
 export const SHIFT_TABLE_COLUMNS = [
   'isotherm',
@@ -14,6 +15,8 @@ export const SHIFT_TABLE_COLUMNS = [
   'log10_bT_stderr',
   'rms_residual_decades',
   'included',
+  'left_out_code',
+  'left_out_reason',
   'note',
 ] as const;
 
@@ -22,7 +25,7 @@ export function shiftTableCsv(a: Analysis): string {
     [
       `Thermoshift ${a.version} shift table — sample: ${a.sample.name}`,
       `reference temperature: ${toCelsius(a.referenceTemperatureK)} °C (${toKelvinText(a.referenceTemperatureK)} K)`,
-      `shift driven by: ${a.shiftQuantities.join(', ')}; vertical shift: ${a.settings.verticalShift}`,
+      `shift driven by: ${a.shiftQuantities.join(', ')}; vertical shift: ${appliedVertical(a)}${a.vertical ? ` (${a.vertical.reason})` : ''}`,
       ...conventionCommentLines(),
       'rms_residual_decades: RMS residual of the isotherm against the master curve (quality; smaller is better)',
     ],
@@ -37,6 +40,8 @@ export function shiftTableCsv(a: Analysis): string {
       csvNumber(c.log10bTStdErr),
       csvNumber(c.qualityRmsDecades),
       c.included ? 'yes' : 'no',
+      c.leftOut?.code ?? '',
+      c.leftOut?.message ?? '',
       c.note ?? '',
     ]),
   );

@@ -19,6 +19,11 @@ function withEngineDrop(): Analysis {
             log10aT: null,
             log10aTStdErr: null,
             note: 'overlaps no other isotherm: no shift can be found; 3 outlier point(s) left out',
+            // The reason comes from the structured field, not from the note's text.
+            leftOut: {
+              code: 'no-overlap' as const,
+              message: 'overlaps no other isotherm: no shift can be found',
+            },
           }
         : c,
     ),

@@ -12,7 +12,7 @@ describe('resolveAnalysisOptions()', () => {
       referenceTemperatureK: 310,
       referenceTemperatureAuto: true,
       shiftQuantities: 'auto',
-      verticalShift: 'none',
+      verticalShift: 'auto',
       density: null,
       models: DEFAULT_MODELS,
       pronyModesPerDecade: 2,

@@ -28,7 +28,7 @@ describe('shiftOptionsFor()', () => {
     const o = shiftOptionsFor(resolveAnalysisOptions({}, [300]));
     expect(o.drivers).toBeUndefined();
     expect(o.density).toBeUndefined();
-    expect(o.vertical).toBe('none');
+    expect(o.vertical).toBe('auto');
   });
 });
 

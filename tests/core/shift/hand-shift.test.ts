@@ -40,12 +40,7 @@ describe('shiftIsotherms() with a shift set by hand', () => {
     checkLocked(0.05);
   });
 
-  // KNOWN DEFECT on this branch's base (the shift engine, core/shift): a lock of −0.3 decades on
-  // T03 throws the reference T05 out as "overlaps no other isotherm" with 15 "disagreeing" points
-  // and moves every shift by about −0.3; ±0.05 and +0.3 flag 4–22 new outlier points. These
-  // cases are expected to fail until the engine treats a lock as a constraint the others fit
-  // around; turn `it.fails` into `it` then.
-  it.fails.each([-0.3, -0.05, 0.3])(
+  it.each([-0.3, -0.05, 0.3])(
     'shiftIsotherms() with T03 locked %s decades off its free shift keeps every isotherm and flags no new outliers',
     (offset) => checkLocked(offset),
   );

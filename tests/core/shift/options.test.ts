@@ -10,7 +10,7 @@ describe('resolveShiftOptions()', () => {
     expect(s).toEqual({
       referenceK: 463.15,
       drivers: ['storageModulus', 'lossModulus'],
-      vertical: 'none',
+      vertical: 'auto',
       density: null,
       excluded: [],
       locked: [],
@@ -30,8 +30,10 @@ describe('resolveShiftOptions()', () => {
   });
 
   it('resolveShiftOptions() picks the drivers from the data and the vertical mode', () => {
+    // bT from the data is one global constant (vertical.ts), so G′ and G″ still drive the shift.
     expect(resolveShiftOptions(dataset, { referenceK: 463.15, vertical: 'data' }).drivers).toEqual([
-      'tanDelta',
+      'storageModulus',
+      'lossModulus',
     ]);
     expect(
       resolveShiftOptions(make(RELAX_WLF, 0.02, 1).dataset, { referenceK: 300 }).drivers,

@@ -32,13 +32,31 @@ describe('AnalysisSettings', () => {
     });
   });
 
-  it('AnalysisSettings asks for density inputs when bT comes from density', async () => {
+  it('AnalysisSettings offers αV as a typical value, not as if measured, and leaves ρ empty', async () => {
     const w = make();
+    expect((w.find('[data-role="vertical"]').element as HTMLSelectElement).value).toBe('auto');
     await w.find('[data-role="vertical"]').setValue('density');
     const patch = w.emitted('change')![0][0] as { verticalShift: string; density: object };
     expect(patch.verticalShift).toBe('density');
-    expect(patch.density).toEqual({ referenceDensityKgPerM3: 900, volumetricExpansionPerK: 6e-4 });
-    const w2 = make({ verticalShift: 'data' });
-    expect(w2.text()).toMatch(/weakens the meaning of both/);
+    // bT needs αV alone: no density is filled in for the user.
+    expect(patch.density).toEqual({ volumetricExpansionPerK: 6e-4 });
+    const w1 = make({ verticalShift: 'density', density: { volumetricExpansionPerK: 6e-4 } });
+    expect(w1.find('[data-role="typical"]').text()).toMatch(/typical value.*not a measurement/);
+    const rho = w1.findAll('input[type="number"]')[0].element as HTMLInputElement;
+    expect(rho.value).toBe('');
+    const w2 = make({ verticalShift: 'density', density: { volumetricExpansionPerK: 7.1e-4 } });
+    expect(w2.find('[data-role="typical"]').exists()).toBe(false);
+  });
+
+  it('AnalysisSettings shows which vertical shift the analysis applied and why', () => {
+    const w = mount(AnalysisSettings, {
+      props: {
+        dataset: tinyDataset(),
+        options: {},
+        usedReferenceK: 300,
+        verticalChoice: { chosen: 'data', reason: 'bT from the data: the mismatch drops' },
+      },
+    });
+    expect(w.find('[data-role="vertical-reason"]').text()).toMatch(/data — bT from the data/);
   });
 });

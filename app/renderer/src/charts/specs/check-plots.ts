@@ -5,6 +5,7 @@
  * from core (coleColeSeries, lossTangentSeries, overlapResiduals); this styles them, with
  * left-out isotherms faded.
  */
+import { appliedVertical } from '../../../../../core/pipeline/vertical-at';
 import { quantitySymbol } from '../../../../../core/data/quantities';
 import type { QuantityId } from '../../../../../core/data/types';
 import type { IsothermState } from '../../../../../core/pipeline/isotherm-states';
@@ -50,7 +51,7 @@ function checkSeries(
   });
 }
 
-const bTPrefix = (a: Analysis): string => (a.settings.verticalShift === 'none' ? '' : 'bT·');
+const bTPrefix = (a: Analysis): string => (appliedVertical(a) === 'none' ? '' : 'bT·');
 
 /** G″ against G′; null without measured G′ and G″. */
 export function coleColePlot(

@@ -5,6 +5,7 @@
  * that are not in the fit and the engine's outlier points are drawn faded. Curves can be dragged
  * sideways. The points and curves come from core (reducedIsotherms, pronyCurve).
  */
+import { appliedVertical } from '../../../../../core/pipeline/vertical-at';
 import { quantitySymbol } from '../../../../../core/data/quantities';
 import type { QuantityId } from '../../../../../core/data/types';
 import type { IsothermState } from '../../../../../core/pipeline/isotherm-states';
@@ -143,7 +144,7 @@ export function masterPlot(
     x: { kind: 'log', label: xAxisLabel(abscissa, true, units) },
     y: {
       kind: 'log',
-      label: yAxisLabel(qs, mode, a.settings.verticalShift !== 'none', units),
+      label: yAxisLabel(qs, mode, appliedVertical(a) !== 'none', units),
     },
     series,
     bands: [],

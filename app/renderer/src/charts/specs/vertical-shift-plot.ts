@@ -3,6 +3,7 @@
  * order (bT·ln 10·s.e. of log10 bT). Large or erratic bT is itself a sign that superposition
  * fails; with bT from density the points lie on Tref·ρref/(T·ρ).
  */
+import { appliedVertical } from '../../../../../core/pipeline/vertical-at';
 import type { IsothermState } from '../../../../../core/pipeline/isotherm-states';
 import type { Analysis } from '../../../../../core/pipeline/types';
 import { toCelsius } from '../../../../../core/pipeline/temperature';
@@ -31,9 +32,9 @@ export function verticalShiftPlot(a: Analysis, states?: readonly IsothermState[]
     ];
   });
   const how =
-    a.settings.verticalShift === 'none'
+    appliedVertical(a) === 'none'
       ? 'none (bT = 1)'
-      : a.settings.verticalShift === 'density'
+      : appliedVertical(a) === 'density'
         ? 'from density, Tref·ρref/(T·ρ)'
         : 'estimated from the data';
   return {

@@ -4,6 +4,7 @@
  * superposition; a fan of lines says it fails. With a vertical shift, |G*| is multiplied by bT.
  * The points come from core (vanGurpPalmenSeries); this only styles them.
  */
+import { appliedVertical } from '../../../../../core/pipeline/vertical-at';
 import { quantitySymbol } from '../../../../../core/data/quantities';
 import type { IsothermState } from '../../../../../core/pipeline/isotherm-states';
 import type { Analysis } from '../../../../../core/pipeline/types';
@@ -47,7 +48,7 @@ export function vgpPlot(
   });
   if (!series.length) return null;
   const sym = quantitySymbol('complexModulus', a.sample.deformation);
-  const prefix = a.settings.verticalShift === 'none' ? '' : 'bT·';
+  const prefix = appliedVertical(a) === 'none' ? '' : 'bT·';
   const unit = unitOf('complexModulus', units);
   return {
     id: 'van-gurp-palmen',
