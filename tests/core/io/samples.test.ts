@@ -15,8 +15,10 @@ import type { SampleTruth } from '../../helpers/sample-truth';
 const root = fileURLToPath(new URL('../../../samples/', import.meta.url));
 
 const scenarios = readdirSync(root, { withFileTypes: true })
-  // samples/workbooks holds the seal-dma data as .xlsx (tests/scripts/samples-workbook.test.ts).
+  // samples/workbooks holds the seal-dma data as .xlsx (tests/scripts/samples-workbook.test.ts);
+  // samples/lot-release holds lots with their own truth format (tests/core/compare).
   .filter((d) => d.isDirectory() && existsSync(join(root, d.name, 'truth.json')))
+  .filter((d) => d.name !== 'lot-release')
   .map((d) => d.name)
   .sort();
 
