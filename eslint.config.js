@@ -4,7 +4,7 @@ import vue from 'eslint-plugin-vue';
 import prettier from 'eslint-config-prettier';
 
 // Spreading an array into a call passes every element as an argument: Math.max(...x) overflows
-// the call stack at a few 10⁵ elements (issue 9). Use extent()/minOf()/maxOf() from core/data.
+// the call stack at a few 10⁵ elements (docs/conventions.md §7). Use extent()/minOf()/maxOf() from core/data.
 const NO_SPREAD_INTO_MATH_EXTREMES = {
   selector:
     "CallExpression[callee.object.name='Math'][callee.property.name=/^(max|min)$/] > SpreadElement",

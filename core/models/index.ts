@@ -1,4 +1,4 @@
-/** Shift-factor models (DOMAIN.md §3): fits, bands, re-referencing, derived quantities, hints. */
+/** Shift-factor models (docs/conventions.md §3): fits, bands, re-referencing, derived quantities, hints. */
 export * from './shift-laws';
 export type * from './types';
 export { studentTCdf, studentTQuantile } from './student-t';

@@ -1,6 +1,6 @@
 /**
  * Model-constrained shifting: the constants of a WLF or Arrhenius law fitted directly to the
- * overlap mismatch of the isotherms, so every shift follows the law exactly (DOMAIN.md §2–3).
+ * overlap mismatch of the isotherms, so every shift follows the law exactly (docs/conventions.md §2–§3).
  * The mismatch comes from the shift engine (core/shift: prepareOverlap/overlapMismatch) and is
  * passed in as a function, which keeps this module free of the engine's internals.
  * Minimised by Nelder–Mead on constants scaled by their starting values.

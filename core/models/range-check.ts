@@ -15,7 +15,7 @@ export interface ShiftRangeFlags {
 const c = (k: number): string => `${(k - 273.15).toFixed(1)} °C`;
 
 /**
- * Flags for using a shift model at `temperatureK` (DOMAIN.md §3, §6): outside the fitted range is
+ * Flags for using a shift model at `temperatureK` (docs/conventions.md §3, §6): outside the fitted range is
  * extrapolation; WLF constants fitted above Tg must not be used below Tg; WLF diverges at Tr − C2.
  */
 export function checkShiftModelRange(model: ShiftModelSpec, temperatureK: number): ShiftRangeFlags {

@@ -1,5 +1,5 @@
 /**
- * Closed-form temperature-shift laws (DOMAIN.md §2–3). Temperatures in kelvin.
+ * Closed-form temperature-shift laws (docs/conventions.md §2–§3). Temperatures in kelvin.
  * Sign convention: reduced frequency ω_r = aT·ω; above Tref aT < 1, log10 aT < 0.
  */
 

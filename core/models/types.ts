@@ -1,5 +1,5 @@
 /**
- * Shared types of the shift-factor models (DOMAIN.md §3). Temperatures in kelvin inside;
+ * Shared types of the shift-factor models (docs/conventions.md §3). Temperatures in kelvin inside;
  * log10 aT follows the convention ω_r = aT·ω, log10 aT < 0 above the reference temperature.
  */
 

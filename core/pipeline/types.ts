@@ -3,7 +3,7 @@
  * JSON-serialisable data (numbers that could not be determined are `null`, never NaN).
  * Units are SI and carried in the names; temperatures in kelvin.
  *
- * Conventions (DOMAIN.md §2): reduced frequency ω_r = aT·ω, reduced time t_r = t/aT,
+ * Conventions (docs/conventions.md §2): reduced frequency ω_r = aT·ω, reduced time t_r = t/aT,
  * aT(Tref) = 1, log10 aT < 0 above Tref; reduced modulus = bT × measured modulus,
  * bT = Tref·ρref/(T·ρ(T)), bT(Tref) = 1.
  */

@@ -4,7 +4,7 @@
  *  - 'density': entropic formula (density-shift.ts), no statistical error;
  *  - 'data' with δ and |G*| available (oscillatory): shift log tan δ along log|G*| — δ carries no
  *    vertical shift, so the offset along log|G*| is log10 bT itself, free of aT (Mavridis & Shroff,
- *    Polym. Eng. Sci. 32, 1992; DOMAIN.md §2);
+ *    Polym. Eng. Sci. 32, 1992; docs/conventions.md §2);
  *  - 'data' otherwise (relaxation, creep): refused with a ShiftOptionsError (see below).
  */
 import type { Dataset } from '../data/types';

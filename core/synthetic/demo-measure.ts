@@ -1,7 +1,7 @@
 /**
  * Turns an invented demo scenario into measurements: measured temperatures, noise-free values from
  * the true model at each point's measured temperature, then seeded multiplicative noise.
- * Conventions as in DOMAIN.md: measured at T, G(ω) = G_ref(aT·ω) / bT and G(t) = G_ref(t/aT) / bT.
+ * Conventions as in docs/conventions.md §2: measured at T, G(ω) = G_ref(aT·ω) / bT and G(t) = G_ref(t/aT) / bT.
  */
 import { densityFromExpansion, entropicBT } from '../models/shift-laws';
 import { pronyLoss, pronyRelaxation, pronyStorage } from '../spectrum/prony-model';

@@ -38,7 +38,7 @@ export interface SyntheticSetOptions {
   name?: string;
 }
 
-/** bT at `temperatureK` (DOMAIN.md §2, entropic: Tref·ρref/(T·ρ)); 1 without a density model. */
+/** bT at `temperatureK` (docs/conventions.md §2, entropic: Tref·ρref/(T·ρ)); 1 without a density model. */
 export function syntheticBT(
   temperatureK: number,
   referenceK: number,

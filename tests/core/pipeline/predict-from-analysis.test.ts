@@ -143,8 +143,8 @@ describe('predictFromAnalysis() on a solid with known truth', () => {
       timeS: TEN_YEARS_S,
     });
     const expected = pronyRelaxation(SEAL_PRONY, TEN_YEARS_S / 10 ** sealLog10aT(T));
-    // 5 %: 1 % noise, the shift error at the coldest isotherm (≤ 0.02 decades, issue 3) and the
-    // Prony fit's own error (≤ 3 %, issue 4)
+    // 5 %: 1 % noise, the shift error at the coldest isotherm (≤ 0.02 decades, docs/conventions.md §7) and the
+    // Prony fit's own error (≤ 3 %, docs/conventions.md §7)
     expectRelClose(p.value, expected, 0.05, 'G(10 years) at 60 °C');
     expect(p.model).toBe('wlf');
     expect(p.unit).toBe('Pa');
