@@ -5,6 +5,7 @@
  */
 export * from './data';
 export * from './units';
+export * from './numeric';
 export * from './io';
 export * from './shift';
 export * from './models';

@@ -3,29 +3,8 @@
  * number of import statements behind it, then the cycles between folders and inside each core
  * folder. The layering rules it is checked against are in docs/architecture.md.
  */
-import { readdirSync, readFileSync, statSync } from 'node:fs';
-import { join, relative, sep } from 'node:path';
-import { cycles, fileCycles, folderEdges, type SourceFile } from './import-graph-core.ts';
-
-const root = join(import.meta.dirname, '..');
-
-function walk(dir: string, out: string[]): void {
-  for (const name of readdirSync(dir)) {
-    const full = join(dir, name);
-    if (statSync(full).isDirectory()) walk(full, out);
-    else if (/\.(ts|vue)$/.test(name)) out.push(full);
-  }
-}
-
-export function readSources(): SourceFile[] {
-  const paths: string[] = [];
-  walk(join(root, 'core'), paths);
-  walk(join(root, 'app'), paths);
-  return paths.map((p) => ({
-    path: relative(root, p).split(sep).join('/'),
-    text: readFileSync(p, 'utf8'),
-  }));
-}
+import { cycles, fileCycles, folderEdges } from './import-graph-core.ts';
+import { readSources } from './import-graph-files.ts';
 
 const files = readSources();
 const edges = folderEdges(files);

@@ -24,3 +24,29 @@ export function reductionFactor(q: QuantityId, aT: number, bT: number): number {
       return bT;
   }
 }
+
+/**
+ * Entropic vertical shift bT = (Tref·ρref)/(T·ρ(T)); reduced modulus = bT × measured modulus.
+ * Ferry (1980). Densities in any consistent unit.
+ */
+export function entropicBT(
+  temperatureK: number,
+  referenceK: number,
+  density: number,
+  referenceDensity: number,
+): number {
+  return (referenceK * referenceDensity) / (temperatureK * density);
+}
+
+/**
+ * Density from a volumetric thermal expansion coefficient αV (1/K), linearised about Tref:
+ * ρ(T) = ρref / (1 + αV (T − Tref)).
+ */
+export function densityFromExpansion(
+  temperatureK: number,
+  referenceK: number,
+  referenceDensity: number,
+  volumetricExpansionPerK: number,
+): number {
+  return referenceDensity / (1 + volumetricExpansionPerK * (temperatureK - referenceK));
+}

@@ -1,7 +1,6 @@
 /** Shift-factor models (docs/conventions.md §3): fits, bands, re-referencing, derived quantities, hints. */
 export * from './shift-laws';
 export type * from './types';
-export { studentTCdf, studentTQuantile } from './student-t';
 export { resolveShiftFitOptions } from './shift-fit-options';
 export type { ResolvedShiftFitOptions } from './shift-fit-options';
 export { preparePoints } from './prepare-points';

@@ -1,5 +1,5 @@
 import type { WlfFit } from './types';
-import { studentTQuantile } from './student-t';
+import { studentTQuantile } from '../numeric/student-t';
 
 /**
  * WLF constants at another reference temperature (Ferry 1980, ch. 11; docs/conventions.md §3):

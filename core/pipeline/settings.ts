@@ -10,7 +10,7 @@ import { QUANTITY_IDS, type Dataset, type QuantityId } from '../data/types';
 import { parseTemperatureText } from '../units/temperature';
 import type { ImportOptions } from '../io/types';
 import { describeIssue, type AnalysisOptions } from './options';
-import { MODULUS_UNITS, type ModulusUnit } from '../report/output-units';
+import { MODULUS_UNITS, type ModulusUnit } from '../units/output-units';
 import { toCelsius } from './temperature';
 
 const quantityId = z.enum(QUANTITY_IDS as [QuantityId, ...QuantityId[]]);

@@ -12,7 +12,7 @@ import type { ChartSeries, ChartSpec, LegendEntry } from './svg/chart-types';
 import { temperatureColour } from './svg/colour';
 import { toCelsius } from '../pipeline/temperature';
 import { vanGurpPalmenSeries } from '../pipeline/van-gurp-palmen';
-import { outputUnitLabel, toOutputUnit, type ModulusUnit } from './output-units';
+import { outputUnitLabel, toOutputUnit, type ModulusUnit } from '../units/output-units';
 
 const W = 640;
 const H = 380;

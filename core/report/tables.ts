@@ -8,7 +8,7 @@ import { toCelsius, toKelvinText } from '../pipeline/temperature';
 import { formatFixed, formatNumber } from './format';
 import { quantitySymbol } from '../data/quantities';
 import type { TableSpec } from './html-table';
-import { modulusFactor, type ModulusUnit } from './output-units';
+import { modulusFactor, type ModulusUnit } from '../units/output-units';
 import { pronySymbols } from '../spectrum/prony-symbols';
 
 const CONVENTION_NOTE = `Conventions: ${CONVENTIONS.horizontal}. ${CONVENTIONS.vertical}.`;

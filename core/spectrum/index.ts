@@ -24,3 +24,4 @@ export type {
   PredictionQuery,
   PredictedQuantity,
 } from './predict';
+export { pronySymbols, type PronySymbols } from './prony-symbols';

@@ -3,7 +3,7 @@
  * the true model at each point's measured temperature, then seeded multiplicative noise.
  * Conventions as in docs/conventions.md §2: measured at T, G(ω) = G_ref(aT·ω) / bT and G(t) = G_ref(t/aT) / bT.
  */
-import { densityFromExpansion, entropicBT } from '../models/shift-laws';
+import { densityFromExpansion, entropicBT } from '../data/reduction';
 import { pronyLoss, pronyRelaxation, pronyStorage } from '../spectrum/prony-model';
 import type { DemoMeasurements, DemoPoint, DemoScenario } from './demo-types';
 import { shiftLawLog10aT } from './isotherm-set';

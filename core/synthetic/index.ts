@@ -13,3 +13,4 @@ export type { DemoTruth, DemoTruthIsotherm, DemoTruthLaw } from './demo-truth';
 export { demoTruth } from './demo-truth';
 export type { DemoSample } from './demo-samples';
 export { buildDemoSample, demoDataset, demoSampleFiles } from './demo-samples';
+export { INVENTED_DEMO_MARKER, isInventedDemo } from './demo-header';

@@ -5,7 +5,7 @@
  * syntheticCreep so both generate the same way (and regenerate the same numbers from a seed).
  */
 import type { Isotherm, QuantityId } from '../data/types';
-import { densityFromExpansion, entropicBT } from '../models/shift-laws';
+import { densityFromExpansion, entropicBT } from '../data/reduction';
 
 /** Density model for an entropic vertical shift. */
 export interface SyntheticDensity {

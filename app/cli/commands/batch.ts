@@ -7,10 +7,10 @@
 import { Command } from 'commander';
 import { readdirSync, statSync } from 'node:fs';
 import { basename, join } from 'node:path';
-import { batchIndexCsv, type BatchIndexRow } from '../../../core/report/csv/batch-index-csv.ts';
-import { THERMOSHIFT_VERSION } from '../../../core/pipeline/version.ts';
-import { toCelsius } from '../../../core/pipeline/temperature.ts';
-import type { Settings } from '../../../core/pipeline/settings.ts';
+import { batchIndexCsv, type BatchIndexRow } from '@core/report';
+import { THERMOSHIFT_VERSION } from '@core/pipeline';
+import { toCelsius } from '@core/pipeline';
+import type { Settings } from '@core/pipeline';
 import { addSampleOptions, resolveSettings, type SampleOptionValues } from '../sample-options.ts';
 import { DATA_FILE_PATTERN, readInputs } from '../io/read-inputs.ts';
 import { analyseSample } from '../run-sample.ts';

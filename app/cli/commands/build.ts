@@ -3,10 +3,10 @@
  * whole job and prints the JSON summary (--json) and/or writes the output files (--out DIR).
  */
 import { Command } from 'commander';
-import { analysisSummary } from '../../../core/pipeline/summary.ts';
-import { toCelsius } from '../../../core/pipeline/temperature.ts';
-import type { Analysis } from '../../../core/pipeline/types.ts';
-import { formatFixed } from '../../../core/report/format.ts';
+import { analysisSummary } from '@core/pipeline';
+import { toCelsius } from '@core/pipeline';
+import type { Analysis } from '@core/pipeline';
+import { formatFixed } from '@core/report';
 import { addSampleOptions, resolveSettings, type SampleOptionValues } from '../sample-options.ts';
 import { readInputs } from '../io/read-inputs.ts';
 import { analyseSample } from '../run-sample.ts';

@@ -5,15 +5,10 @@
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { basename, join } from 'node:path';
 import { Command, Option } from 'commander';
-import { quantitySymbol } from '../../../core/data/quantities.ts';
-import type {
-  ColumnMapping,
-  ColumnRole,
-  ImportResult,
-  SourceFile,
-} from '../../../core/io/index.ts';
-import { COLUMN_ROLES, ImportError, importFiles } from '../../../core/io/index.ts';
-import { parseTemperatureText } from '../../../core/units/index.ts';
+import { quantitySymbol } from '@core/data';
+import type { ColumnMapping, ColumnRole, ImportResult, SourceFile } from '@core/io';
+import { COLUMN_ROLES, ImportError, importFiles } from '@core/io';
+import { parseTemperatureText } from '@core/units';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
 

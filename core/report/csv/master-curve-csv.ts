@@ -6,7 +6,7 @@ import { quantitySymbol } from '../../data/quantities';
 import { conventionCommentLines } from '../../pipeline/conventions';
 import { toCelsius, toKelvinText } from '../../pipeline/temperature';
 import { csvDocument, csvNumber } from './csv-format';
-import { outputUnitLabel, toOutputUnit, type ModulusUnit } from '../output-units';
+import { outputUnitLabel, toOutputUnit, type ModulusUnit } from '../../units/output-units';
 
 const COLUMN_STEM: Record<QuantityId, string> = {
   storageModulus: 'storage_modulus',

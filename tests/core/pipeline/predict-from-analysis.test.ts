@@ -10,11 +10,8 @@ import { syntheticIsotherms } from '../../../core/synthetic';
 import { SEAL_DATA, SEAL_PRONY, sealLog10aT, TEN_YEARS_S } from './seal-fixture';
 import { importFiles } from '../../../core/io';
 import { buildMasterCurve } from '../../../core/pipeline';
-import {
-  arrheniusLog10aT,
-  densityFromExpansion,
-  entropicBT,
-} from '../../../core/models/shift-laws';
+import { arrheniusLog10aT } from '../../../core/models/shift-laws';
+import { densityFromExpansion, entropicBT } from '../../../core/data/reduction';
 import { pronyRelaxation, pronyStorage } from '../../../core/spectrum/prony-model';
 import {
   defaultPredictionModel,

@@ -4,13 +4,13 @@
  * fitted above Tg do not hold below it). Isotherms that are not in the fit are drawn as faded
  * rings.
  */
-import type { IsothermState } from '../../../../../core/pipeline/isotherm-states';
-import type { Analysis } from '../../../../../core/pipeline/types';
-import { toCelsius } from '../../../../../core/pipeline/temperature';
+import type { IsothermState } from '@core/pipeline';
+import type { Analysis } from '@core/pipeline';
+import { toCelsius } from '@core/pipeline';
 import { formatWithError } from '../../format/numbers';
 import type { PlotBand, PlotSeries, PlotSpec } from '../plot-spec';
 import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';
-import { maxOf, minOf } from '../../../../../core/data/extent';
+import { maxOf, minOf } from '@core/data';
 
 export const MODEL_COLOURS = {
   wlf: '#23676b',
