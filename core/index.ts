@@ -12,5 +12,5 @@ export * from './models';
 export * from './spectrum';
 export * from './pipeline';
 export * from './report';
-// Both models and pipeline name the kind of shift model; they are the same union.
+// core/pipeline re-exports the kind of shift model from core/models: name the one source.
 export type { ShiftModelKind } from './models';

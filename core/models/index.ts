@@ -34,3 +34,4 @@ export type {
   ConstrainedFitResult,
   OverlapObjective,
 } from './overlap-constrained-fit';
+export { SHIFT_MODEL_KINDS } from './types';

@@ -58,3 +58,4 @@ export { arrheniusPlot, type ArrheniusPlot, type ArrheniusPoint } from './arrhen
 export { overlapResiduals, type IsothermResiduals } from './overlap-residuals';
 export { pronyCurve, type PronyCurve } from './prony-curves';
 export { relaxationSpectrum, type RelaxationSpectrum } from './relaxation-spectrum';
+export { SHIFT_MODEL_KINDS } from '../models/types';

@@ -8,7 +8,7 @@
  * bT = Tref·ρref/(T·ρ(T)), bT(Tref) = 1.
  */
 import type { AbscissaKind, Dataset, DeformationMode, QuantityId, TestKind } from '../data/types';
-import type { ShiftModelSpec } from '../models/types';
+import type { ShiftModelKind, ShiftModelSpec } from '../models/types';
 import type { CurveShift } from '../shift/types';
 import type { ResolvedAnalysisOptions } from './options';
 
@@ -137,7 +137,8 @@ export interface PolynomialModel extends ModelFitStats {
   referenceK: number;
 }
 
-export type ShiftModelKind = 'wlf' | 'arrhenius' | 'polynomial';
+// The kinds of shift model are defined once, in core/models/types.ts.
+export type { ShiftModelKind } from '../models/types';
 
 export interface AnalysisModels {
   wlf?: WlfModel;

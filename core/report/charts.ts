@@ -13,6 +13,7 @@ import { temperatureColour } from './svg/colour';
 import { toCelsius } from '../pipeline/temperature';
 import { vanGurpPalmenSeries } from '../pipeline/van-gurp-palmen';
 import { outputUnitLabel, toOutputUnit, type ModulusUnit } from '../units/output-units';
+import { SHIFT_MODEL_KINDS } from '../models/types';
 
 const W = 640;
 const H = 380;
@@ -196,7 +197,7 @@ export function shiftFactorChart(a: Analysis): ChartSpec {
   const legend: LegendEntry[] = [
     { name: 'fitted log10 aT ± s.e.', colour: '#444', marker: 'disc', line: 'none' },
   ];
-  for (const kind of ['wlf', 'arrhenius', 'polynomial'] as const) {
+  for (const kind of SHIFT_MODEL_KINDS) {
     const m = a.models[kind];
     if (!m) continue;
     const st = MODEL_STYLE[kind];

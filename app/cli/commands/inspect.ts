@@ -5,7 +5,7 @@
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { basename, join } from 'node:path';
 import { Command, Option } from 'commander';
-import { quantitySymbol } from '@core/data';
+import { kelvinToCelsius, quantitySymbol } from '@core/data';
 import type { ColumnMapping, ColumnRole, ImportResult, SourceFile } from '@core/io';
 import { COLUMN_ROLES, ImportError, importFiles } from '@core/io';
 import { parseTemperatureText } from '@core/units';
@@ -121,7 +121,7 @@ function tolerance(text: string | undefined): number | undefined {
   return v;
 }
 
-const C = (k: number): number => Number((k - 273.15).toFixed(2));
+const C = (k: number): number => Number(kelvinToCelsius(k).toFixed(2));
 const g = (v: number): string => Number(v.toPrecision(4)).toString();
 
 /** The inspection as plain data: what `--json` prints. */

@@ -4,6 +4,7 @@
  * fitted above Tg do not hold below it). Isotherms that are not in the fit are drawn as faded
  * rings.
  */
+import { SHIFT_MODEL_KINDS } from '@core/pipeline';
 import type { IsothermState } from '@core/pipeline';
 import type { Analysis } from '@core/pipeline';
 import { toCelsius } from '@core/pipeline';
@@ -52,7 +53,7 @@ export function shiftPlot(a: Analysis, states?: readonly IsothermState[]): PlotS
   const legend: PlotSpec['legend'] = [
     { label: 'log10 aT of an isotherm (±1 s.e.)', colour: '#4a5358', style: 'disc' },
   ];
-  for (const kind of ['wlf', 'arrhenius', 'polynomial'] as const) {
+  for (const kind of SHIFT_MODEL_KINDS) {
     const m = a.models[kind];
     if (!m) continue;
     const x = m.band.temperatureK.map(toCelsius);
