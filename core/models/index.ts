@@ -26,12 +26,4 @@ export { checkShiftModelRange } from './range-check';
 export type { ShiftRangeFlags } from './range-check';
 export { suggestShiftModel, WLF_WINDOW_ABOVE_TG_K } from './model-hint';
 export type { ModelHint } from './model-hint';
-export { nelderMead } from './nelder-mead';
-export type { NelderMeadOptions, NelderMeadResult } from './nelder-mead';
-export { fitModelToOverlap } from './overlap-constrained-fit';
-export type {
-  ConstrainedFitOptions,
-  ConstrainedFitResult,
-  OverlapObjective,
-} from './overlap-constrained-fit';
 export { SHIFT_MODEL_KINDS } from './types';
