@@ -90,5 +90,4 @@ export async function run(): Promise<void> {
   console.log(
     `Cross and Carreau–Yasuda fits of |η*| (the data choose), 60 points: ${visMs.toFixed(2)} ms`,
   );
-
 }
