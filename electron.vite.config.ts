@@ -8,11 +8,13 @@ import { defineConfig } from 'electron-vite';
 import vue from '@vitejs/plugin-vue';
 import { fileURLToPath } from 'node:url';
 import { devStyleNonce } from './scripts/vite-dev-style-nonce.ts';
+import { coreAlias } from './scripts/core-alias.ts';
 
 const at = (p: string): string => fileURLToPath(new URL(p, import.meta.url));
 
 export default defineConfig({
   main: {
+    resolve: { alias: coreAlias },
     build: {
       externalizeDeps: false,
       outDir: at('./out/main'),
@@ -35,6 +37,7 @@ export default defineConfig({
     base: './',
     publicDir: false,
     plugins: [vue(), devStyleNonce()],
+    resolve: { alias: coreAlias },
     worker: { format: 'es' },
     build: {
       outDir: at('./out/renderer'),

@@ -4,7 +4,7 @@ import vue from 'eslint-plugin-vue';
 import prettier from 'eslint-config-prettier';
 
 // Spreading an array into a call passes every element as an argument: Math.max(...x) overflows
-// the call stack at a few 10⁵ elements (issue 9). Use extent()/minOf()/maxOf() from core/data.
+// the call stack at a few 10⁵ elements (docs/conventions.md §7). Use extent()/minOf()/maxOf() from core/data.
 const NO_SPREAD_INTO_MATH_EXTREMES = {
   selector:
     "CallExpression[callee.object.name='Math'][callee.property.name=/^(max|min)$/] > SpreadElement",
@@ -63,7 +63,7 @@ export default tseslint.config(
       ],
     },
   },
-  // core/ is a pure library: no DOM, no Node, no Electron.
+  // core/ is a pure library: no DOM, no Node, no Electron, nothing from app/ at any depth.
   {
     files: ['core/**/*.ts'],
     rules: {
@@ -71,14 +71,36 @@ export default tseslint.config(
         'error',
         {
           patterns: [
-            'node:*',
-            'fs',
-            'path',
-            'electron',
-            'vue',
-            'chart.js',
-            '../app/*',
-            '../../app/*',
+            {
+              group: ['node:*', 'fs', 'fs/*', 'path', 'electron', 'electron/*', 'vue', 'chart.js'],
+              message: 'core/ is pure: no Node, DOM, Electron or UI library.',
+            },
+            {
+              regex: '^(\\.\\.?/)*(\\.\\./)+app(/|$)',
+              message: 'core/ never imports app/.',
+            },
+            { regex: '^@core', message: 'Inside core/, import by relative path.' },
+          ],
+        },
+      ],
+    },
+  },
+  // The app reaches the library only through its public entry points (docs/architecture.md).
+  {
+    files: ['app/**/*.{ts,vue}'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              regex: '^(\\.\\.?/)*(\\.\\./)+core(/|$)',
+              message: 'Import core through @core or @core/<folder> (its index.ts).',
+            },
+            {
+              regex: '^@core/[^/]+/',
+              message: 'Import core through @core or @core/<folder> (its index.ts), not deeper.',
+            },
           ],
         },
       ],

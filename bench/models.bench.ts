@@ -2,8 +2,7 @@
  * `npm run bench -- models`: timing of the shift-model fits, the Prony fit and interconversion,
  * on invented synthetic data (core/synthetic). Prints median wall times and the accuracy reached.
  */
-import { fitArrhenius, fitModelToOverlap, fitWlf, wlfLog10aT } from '../core/models/index.ts';
-import { overlapMismatch, prepareOverlap } from '../core/shift/index.ts';
+import { fitArrhenius, fitWlf, wlfLog10aT } from '../core/models/index.ts';
 import {
   creepCompliance,
   creepFromProny,
@@ -12,7 +11,7 @@ import {
   pronyLoss,
   pronyStorage,
 } from '../core/spectrum/index.ts';
-import { seededRandom, smoothProny, syntheticIsotherms } from '../core/synthetic/index.ts';
+import { seededRandom, smoothProny } from '../core/synthetic/index.ts';
 import { medianMs } from './timing.ts';
 
 export async function run(): Promise<void> {
@@ -90,35 +89,5 @@ export async function run(): Promise<void> {
   const visMs = medianMs(() => fitViscosityCurve(omega, eta), 11, 2);
   console.log(
     `Cross and Carreau–Yasuda fits of |η*| (the data choose), 60 points: ${visMs.toFixed(2)} ms`,
-  );
-
-  // model-constrained shifting: WLF constants fitted to the shift engine's overlap mismatch
-  const { dataset } = syntheticIsotherms({
-    testKind: 'oscillatory',
-    deformation: 'shear',
-    referenceK: 303.15,
-    temperaturesK: [273.15, 283.15, 293.15, 303.15, 313.15, 323.15, 333.15],
-    components: [{ prony: truth, law: { kind: 'wlf', c1: 9, c2K: 100 } }],
-    xMin: 0.1,
-    xMax: 100,
-    pointsPerDecade: 8,
-    relativeNoise: 0.01,
-    seed: 3,
-  });
-  const prepared = prepareOverlap(dataset, { referenceK: 303.15, vertical: 'none' });
-  const objective = {
-    temperaturesK: prepared.temperaturesK,
-    referenceK: prepared.referenceK,
-    mismatch: (a: number[]) => overlapMismatch(prepared, a),
-  };
-  const consMs = medianMs(
-    () => fitModelToOverlap(objective, { kind: 'wlf', initial: [12, 130] }),
-    5,
-    1,
-  );
-  const cons = fitModelToOverlap(objective, { kind: 'wlf', initial: [12, 130] });
-  console.log(
-    `Model-constrained WLF on the overlap mismatch, 7 isotherms × 25 points: ${consMs.toFixed(1)} ms ` +
-      `(${cons.evaluations} evaluations, C1 ${cons.values[0].toFixed(3)}, C2 ${cons.values[1].toFixed(2)} K; truth 9, 100 K)`,
   );
 }

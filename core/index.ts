@@ -5,11 +5,13 @@
  */
 export * from './data';
 export * from './units';
+export * from './numeric';
 export * from './io';
 export * from './shift';
 export * from './models';
 export * from './spectrum';
 export * from './pipeline';
 export * from './report';
-// Both models and pipeline name the kind of shift model; they are the same union.
+export * from './compare';
+// core/pipeline re-exports the kind of shift model from core/models: name the one source.
 export type { ShiftModelKind } from './models';

@@ -2,10 +2,10 @@
  * Maps the core's typed errors to one-line CLI errors with the documented exit codes. Messages from
  * the core already name the file, row and column (import) or the key (settings, options).
  */
-import { ImportError } from '../../core/io/import-error.ts';
-import { SettingsError } from '../../core/pipeline/settings.ts';
-import { OptionsError } from '../../core/pipeline/options.ts';
-import { PipelineError } from '../../core/pipeline/errors.ts';
+import { ImportError } from '@core/io';
+import { SettingsError } from '@core/pipeline';
+import { OptionsError } from '@core/pipeline';
+import { PipelineError } from '@core/pipeline';
 import { CliError } from './cli-error.ts';
 import { EXIT } from './exit-codes.ts';
 

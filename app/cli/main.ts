@@ -6,7 +6,7 @@ import { Command, CommanderError } from 'commander';
 import { registerCommands } from './commands/index.ts';
 import { EXIT } from './exit-codes.ts';
 import { CliError } from './cli-error.ts';
-import { THERMOSHIFT_VERSION } from '../../core/pipeline/version.ts';
+import { THERMOSHIFT_VERSION } from '@core/pipeline';
 
 export async function main(argv: string[]): Promise<number> {
   const program = new Command();

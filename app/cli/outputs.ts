@@ -4,8 +4,8 @@
  * written, each atomically. Nothing is written when any target exists and --force is off.
  */
 import { join } from 'node:path';
-import type { Analysis } from '../../core/pipeline/types.ts';
-import { outputFiles, type OutputFileOptions } from '../../core/report/output-files.ts';
+import type { Analysis } from '@core/pipeline';
+import { outputFiles, type OutputFileOptions } from '@core/report';
 import { assertWritable, writeFileAtomic } from './io/atomic-write.ts';
 
 export interface OutputOptions extends OutputFileOptions {

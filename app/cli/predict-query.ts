@@ -4,10 +4,10 @@
  * Temperatures as everywhere on the command line (°C, or kelvin with K); times in s, min, h, d,
  * y; frequencies in Hz, kHz, mHz or rad/s. Parsed into core's AnalysisQuery (SI units).
  */
-import type { AnalysisQuery } from '../../core/pipeline/predict-from-analysis.ts';
-import { settingTemperatureK } from '../../core/pipeline/settings.ts';
-import type { ShiftModelKind } from '../../core/pipeline/types.ts';
-import type { PredictedQuantity } from '../../core/spectrum/predict.ts';
+import type { AnalysisQuery } from '@core/pipeline';
+import { settingTemperatureK } from '@core/pipeline';
+import type { ShiftModelKind } from '@core/pipeline';
+import type { PredictedQuantity } from '@core/spectrum';
 import { CliError } from './cli-error.ts';
 import { EXIT } from './exit-codes.ts';
 

@@ -2,13 +2,9 @@
  * `build --predict`: answers design queries from the analysis through core's predictFromAnalysis,
  * as JSON entries (added to the `--json` summary under `predictions`) and as text lines.
  */
-import {
-  predictFromAnalysis,
-  PredictionError,
-  type AnalysisPrediction,
-} from '../../core/pipeline/predict-from-analysis.ts';
-import { toCelsius } from '../../core/pipeline/temperature.ts';
-import type { Analysis } from '../../core/pipeline/types.ts';
+import { predictFromAnalysis, PredictionError, type AnalysisPrediction } from '@core/pipeline';
+import { toCelsius } from '@core/pipeline';
+import type { Analysis } from '@core/pipeline';
 import { CliError } from './cli-error.ts';
 import { EXIT } from './exit-codes.ts';
 import { parsePredictQuery } from './predict-query.ts';

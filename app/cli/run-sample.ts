@@ -3,14 +3,10 @@
  * then the single core entry point buildMasterCurve. Used by `build`, `batch` and the batch bench,
  * so all three run exactly the same code.
  */
-import { importFiles } from '../../core/io/index.ts';
-import { buildMasterCurve } from '../../core/pipeline/build-master-curve.ts';
-import {
-  settingsToAnalysisOptions,
-  settingsToImportOptions,
-  type Settings,
-} from '../../core/pipeline/settings.ts';
-import type { Analysis } from '../../core/pipeline/types.ts';
+import { importFiles } from '@core/io';
+import { buildMasterCurve } from '@core/pipeline';
+import { settingsToAnalysisOptions, settingsToImportOptions, type Settings } from '@core/pipeline';
+import type { Analysis } from '@core/pipeline';
 import type { InputFile } from './io/read-inputs.ts';
 
 export function analyseSample(

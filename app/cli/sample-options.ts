@@ -4,14 +4,9 @@
  * Every value is checked here with a message naming the option.
  */
 import { Command, Option } from 'commander';
-import { QUANTITY_IDS, type QuantityId } from '../../core/data/types.ts';
-import {
-  mergeSettings,
-  parseSettings,
-  settingTemperatureK,
-  type Settings,
-} from '../../core/pipeline/settings.ts';
-import { MODULUS_UNITS } from '../../core/report/output-units.ts';
+import { QUANTITY_IDS, type QuantityId } from '@core/data';
+import { mergeSettings, parseSettings, settingTemperatureK, type Settings } from '@core/pipeline';
+import { MODULUS_UNITS } from '@core/units';
 import { CliError } from './cli-error.ts';
 import { EXIT } from './exit-codes.ts';
 import { readSettingsFile } from './io/settings-file.ts';

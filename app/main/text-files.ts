@@ -4,7 +4,7 @@
  */
 import { readdir, readFile, rename, stat, writeFile } from 'node:fs/promises';
 import { basename, join } from 'node:path';
-import { isWorkbookName, workbookToSourceFiles } from '../../core/io/workbook';
+import { isWorkbookName, workbookToSourceFiles } from '@core/io';
 import type { TextFile } from '../shared/ipc-channels';
 
 /** File name endings taken from a chosen folder (other files, e.g. notes or images, are skipped). */

@@ -70,16 +70,3 @@ export interface IpcChannels {
 export type IpcChannel = keyof IpcChannels;
 export type IpcRequest<C extends IpcChannel> = IpcChannels[C]['request'];
 export type IpcResponse<C extends IpcChannel> = IpcChannels[C]['response'];
-
-export const IPC_CHANNELS: readonly IpcChannel[] = [
-  'data-files:open',
-  'data-folder:open',
-  'file:save',
-  'analysis:open',
-  'analysis:save',
-  'recent:list',
-  'recent:open',
-  'recent:confirm',
-  'autosave:write',
-  'autosave:read',
-];

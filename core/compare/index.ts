@@ -21,3 +21,13 @@ export { toPercent } from './verdicts';
 export { comparisonCsv, verdictsCsv } from './comparison-csv';
 export type { SpecVerdict } from './spec-types';
 export type * from './types';
+export {
+  comparisonReportHtml,
+  differenceChart,
+  overlayChart,
+  sampleColour,
+  SAMPLE_COLOURS,
+  verdictTable,
+  figuresTable,
+  type ComparisonReportOptions,
+} from './comparison-report';

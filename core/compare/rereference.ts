@@ -2,7 +2,7 @@
  * Brings one analysis to the common reference temperature T* through its own shift model.
  *
  * With aT referred to the analysis's own Tref, the master curve at T* is the same curve moved by
- * log10 aT(T*): ω* = ω_r / aT(T*), t* = t_r · aT(T*) (DOMAIN.md §2 conventions: ω_r = aT·ω,
+ * log10 aT(T*): ω* = ω_r / aT(T*), t* = t_r · aT(T*) (docs/conventions.md §2: ω_r = aT·ω,
  * t_r = t/aT). Moduli are divided by bT(T*) (bT = Tref·ρref/(T·ρ) re-referenced), |η*| is
  * multiplied by aT(T*)/bT(T*), tan δ is unchanged. The standard error of log10 aT(T*) comes
  * from the model's band (delta method, full covariance; core/models shiftModelBand).

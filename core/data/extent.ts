@@ -1,6 +1,6 @@
 /**
  * Smallest and largest finite value of an array, by one loop: `Math.min(...values)` passes every
- * element as a function argument and overflows the call stack at a few 10⁵ elements (issue 9),
+ * element as a function argument and overflows the call stack at a few 10⁵ elements (docs/conventions.md §7),
  * so the codebase uses these instead (an ESLint rule forbids spreading into Math.min/max).
  * NaN and ±Infinity are skipped; an array with no finite value gives [Infinity, −Infinity], as
  * Math.min() and Math.max() of nothing do.

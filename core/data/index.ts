@@ -2,3 +2,4 @@ export * from './types';
 export * from './quantities';
 export * from './reduction';
 export * from './extent';
+export { formatCelsius } from './temperature';

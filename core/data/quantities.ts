@@ -42,17 +42,9 @@ export function quantityUnit(q: QuantityId): string {
   }
 }
 
-/** True for quantities that a vertical shift bT multiplies (moduli) or divides (compliance). */
-export function isVerticallyShifted(q: QuantityId): boolean {
-  return q !== 'tanDelta' && q !== 'phaseAngle';
-}
-
 export function abscissaLabel(kind: AbscissaKind): string {
   return kind === 'angularFrequency' ? 'ω (rad/s)' : 't (s)';
 }
 
-/** 0 °C in kelvin (exact, SI Brochure, BIPM 2019). */
-export const ZERO_CELSIUS_K = 273.15;
-
-export const celsiusToKelvin = (c: number): number => c + ZERO_CELSIUS_K;
-export const kelvinToCelsius = (k: number): number => k - ZERO_CELSIUS_K;
+// K ↔ °C and temperature text: core/data/temperature.ts (re-exported here for the callers).
+export { ZERO_CELSIUS_K, celsiusToKelvin, kelvinToCelsius } from './temperature';

@@ -1,3 +1,4 @@
+import { formatCelsius } from '../data/temperature';
 import type { Isotherm, PointSource, QuantityId } from '../data/types';
 import { QUANTITY_IDS } from '../data/types';
 import type { GroupingSummary } from './grouping';
@@ -39,7 +40,7 @@ export function mergeRecords(records: PointRecords[]): MergedPoints {
   return out;
 }
 
-const fmtC = (k: number): string => `${(k - 273.15).toFixed(1)} °C`;
+const fmtC = (k: number): string => formatCelsius(k);
 
 function sameValues(p: MergedPoints, a: number, b: number): boolean {
   for (const v of p.quantities.values()) {

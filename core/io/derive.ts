@@ -3,7 +3,7 @@ import type { Isotherm, QuantityId } from '../data/types';
 const DEG = Math.PI / 180;
 
 /**
- * Fills quantities that follow from others, point by point, where they are missing (DOMAIN.md §1):
+ * Fills quantities that follow from others, point by point, where they are missing (docs/conventions.md §1):
  * G' = |G*| cos δ and G'' = |G*| sin δ from |G*| with δ (degrees) or tan δ (δ = atan tan δ);
  * tan δ = G''/G' from G' and G''. Measured values are never overwritten. Returns what was filled.
  */

@@ -2,7 +2,7 @@ import { modelGradient, modelLog10aT } from './shift-model-eval';
 import { invert } from './linear-algebra';
 import type { PreparedPoints } from './prepare-points';
 import type { ShiftWeighting } from './shift-weighting';
-import { studentTQuantile } from './student-t';
+import { studentTQuantile } from '../numeric/student-t';
 import type { ErrorScaling, FitStatus, ShiftFitCommon, ShiftModelKind } from './types';
 
 const NAMES: Record<ShiftModelKind, [string, string][]> = {

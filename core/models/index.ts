@@ -1,7 +1,6 @@
-/** Shift-factor models (DOMAIN.md §3): fits, bands, re-referencing, derived quantities, hints. */
+/** Shift-factor models (docs/conventions.md §3): fits, bands, re-referencing, derived quantities, hints. */
 export * from './shift-laws';
 export type * from './types';
-export { studentTCdf, studentTQuantile } from './student-t';
 export { resolveShiftFitOptions } from './shift-fit-options';
 export type { ResolvedShiftFitOptions } from './shift-fit-options';
 export { preparePoints } from './prepare-points';
@@ -27,11 +26,4 @@ export { checkShiftModelRange } from './range-check';
 export type { ShiftRangeFlags } from './range-check';
 export { suggestShiftModel, WLF_WINDOW_ABOVE_TG_K } from './model-hint';
 export type { ModelHint } from './model-hint';
-export { nelderMead } from './nelder-mead';
-export type { NelderMeadOptions, NelderMeadResult } from './nelder-mead';
-export { fitModelToOverlap } from './overlap-constrained-fit';
-export type {
-  ConstrainedFitOptions,
-  ConstrainedFitResult,
-  OverlapObjective,
-} from './overlap-constrained-fit';
+export { SHIFT_MODEL_KINDS } from './types';

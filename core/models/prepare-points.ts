@@ -1,3 +1,4 @@
+import { formatCelsius } from '../data/temperature';
 import type { FitWarning, ShiftPoint } from './types';
 
 /** A shift point left out of a fit on purpose, with the reason (not a problem: no warning). */
@@ -24,7 +25,7 @@ export interface PreparedPoints {
 /** Within this distance of Tref a point with log10 aT = 0 is the reference isotherm (as the engine). */
 const REFERENCE_MATCH_K = 0.01;
 
-const celsius = (k: number): string => `${(k - 273.15).toFixed(1)} °C`;
+const celsius = (k: number): string => formatCelsius(k);
 
 /**
  * Checks shift points before a fit; messages name temperatures, never positions in the list.

@@ -1,3 +1,4 @@
+import { formatCelsius } from '../data/temperature';
 import type { ShiftModelSpec } from './types';
 
 /** Why a shift-model answer at some temperature must be read with care. */
@@ -12,10 +13,10 @@ export interface ShiftRangeFlags {
   messages: string[];
 }
 
-const c = (k: number): string => `${(k - 273.15).toFixed(1)} °C`;
+const c = (k: number): string => formatCelsius(k);
 
 /**
- * Flags for using a shift model at `temperatureK` (DOMAIN.md §3, §6): outside the fitted range is
+ * Flags for using a shift model at `temperatureK` (docs/conventions.md §3, §6): outside the fitted range is
  * extrapolation; WLF constants fitted above Tg must not be used below Tg; WLF diverges at Tr − C2.
  */
 export function checkShiftModelRange(model: ShiftModelSpec, temperatureK: number): ShiftRangeFlags {

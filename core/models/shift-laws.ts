@@ -1,6 +1,7 @@
 /**
- * Closed-form temperature-shift laws (DOMAIN.md §2–3). Temperatures in kelvin.
- * Sign convention: reduced frequency ω_r = aT·ω; above Tref aT < 1, log10 aT < 0.
+ * Closed-form temperature-shift laws (docs/conventions.md §2–§3). Temperatures in kelvin.
+ * Sign convention: reduced frequency ω_r = aT·ω; above Tref aT < 1, log10 aT < 0. The vertical
+ * factor bT (entropic, from density) is a reduction rule: core/data/reduction.ts.
  */
 
 const R_J_PER_MOL_K = 8.314462618; // molar gas constant, CODATA 2018
@@ -25,32 +26,6 @@ export function arrheniusLog10aT(
   return (
     ((activationEnergyJPerMol / R_J_PER_MOL_K) * (1 / temperatureK - 1 / referenceK)) / Math.LN10
   );
-}
-
-/**
- * Entropic vertical shift bT = (Tref·ρref)/(T·ρ(T)); reduced modulus = bT × measured modulus.
- * Ferry (1980). Densities in any consistent unit.
- */
-export function entropicBT(
-  temperatureK: number,
-  referenceK: number,
-  density: number,
-  referenceDensity: number,
-): number {
-  return (referenceK * referenceDensity) / (temperatureK * density);
-}
-
-/**
- * Density from a volumetric thermal expansion coefficient αV (1/K), linearised about Tref:
- * ρ(T) = ρref / (1 + αV (T − Tref)).
- */
-export function densityFromExpansion(
-  temperatureK: number,
-  referenceK: number,
-  referenceDensity: number,
-  volumetricExpansionPerK: number,
-): number {
-  return referenceDensity / (1 + volumetricExpansionPerK * (temperatureK - referenceK));
 }
 
 export const GAS_CONSTANT_J_PER_MOL_K = R_J_PER_MOL_K;

@@ -1,6 +1,6 @@
 /**
  * Evaluates a shift model and its gradient with respect to its parameters (for the delta-method
- * band). Formulas: DOMAIN.md §3 — WLF (Williams, Landel & Ferry, JACS 77, 3701, 1955),
+ * band). Formulas: docs/conventions.md §3 — WLF (Williams, Landel & Ferry, JACS 77, 3701, 1955),
  * Arrhenius, and the quadratic polynomial.
  */
 import { GAS_CONSTANT_J_PER_MOL_K } from './shift-laws';

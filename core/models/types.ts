@@ -1,5 +1,5 @@
 /**
- * Shared types of the shift-factor models (DOMAIN.md §3). Temperatures in kelvin inside;
+ * Shared types of the shift-factor models (docs/conventions.md §3). Temperatures in kelvin inside;
  * log10 aT follows the convention ω_r = aT·ω, log10 aT < 0 above the reference temperature.
  */
 
@@ -53,8 +53,11 @@ export interface ShiftFitWeighting {
   leftOut: { temperatureK: number; reason: string }[];
 }
 
+/** The kinds of shift model, in the order the app, the summary and the exports list them. */
+export const SHIFT_MODEL_KINDS = ['wlf', 'arrhenius', 'polynomial'] as const;
+
 /** Which law, and its parameter vector in a fixed order (the order of the covariance matrix). */
-export type ShiftModelKind = 'wlf' | 'arrhenius' | 'polynomial';
+export type ShiftModelKind = (typeof SHIFT_MODEL_KINDS)[number];
 
 /**
  * A shift model that can be evaluated: `values` are

@@ -2,7 +2,7 @@ import { GAS_CONSTANT_J_PER_MOL_K } from './shift-laws';
 
 /**
  * Apparent activation energy of a WLF law at temperature T, kJ/mol:
- * Ea(T) = ln10·R·C1·C2·T²/(C2 + T − Tr)² (from d ln aT / d(1/T); DOMAIN.md §3). T in kelvin.
+ * Ea(T) = ln10·R·C1·C2·T²/(C2 + T − Tr)² (from d ln aT / d(1/T); docs/conventions.md §3). T in kelvin.
  */
 export function wlfApparentActivationEnergyKJPerMol(
   temperatureK: number,

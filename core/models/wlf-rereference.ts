@@ -1,8 +1,8 @@
 import type { WlfFit } from './types';
-import { studentTQuantile } from './student-t';
+import { studentTQuantile } from '../numeric/student-t';
 
 /**
- * WLF constants at another reference temperature (Ferry 1980, ch. 11; DOMAIN.md §3):
+ * WLF constants at another reference temperature (Ferry 1980, ch. 11; docs/conventions.md §3):
  * C1' = C1·C2/(C2 + T' − Tr), C2' = C2 + T' − Tr. The curve itself is unchanged, only the point
  * where log10 aT = 0 moves.
  */

@@ -6,6 +6,7 @@
  */
 import { isothermStates, type IsothermUse } from './isotherm-states';
 import type { Analysis, ShiftModelKind } from './types';
+import { SHIFT_MODEL_KINDS } from '../models/types';
 
 export interface ArrheniusPoint {
   isothermId: string;
@@ -52,7 +53,7 @@ export function arrheniusPlot(a: Analysis): ArrheniusPlot {
       },
     ];
   });
-  const models = (['wlf', 'arrhenius', 'polynomial'] as const).flatMap((kind) => {
+  const models = SHIFT_MODEL_KINDS.flatMap((kind) => {
     const m = a.models[kind];
     if (!m) return [];
     const b = m.band;

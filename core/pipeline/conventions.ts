@@ -1,6 +1,6 @@
 /**
  * The sign and vertical-shift conventions, worded once and stated on every table, export and
- * report (DOMAIN.md §2). Two bT conventions are in print; ours is reduced = bT × measured.
+ * report (docs/conventions.md §2). Two bT conventions are in print; ours is reduced = bT × measured.
  */
 export const CONVENTIONS = {
   horizontal:

@@ -45,3 +45,17 @@ export { vanGurpPalmenSeries, type VanGurpPalmenSeries } from './van-gurp-palmen
 export { THERMOSHIFT_VERSION } from './version';
 export { toCelsius } from './temperature';
 export type * from './types';
+// Plot series and per-isotherm views of an analysis, shared by the report and the app.
+export { isothermStates, type IsothermState, type IsothermUse } from './isotherm-states';
+export {
+  hasQuantity,
+  isothermValues,
+  reducedIsotherms,
+  type ReducedIsotherm,
+} from './reduced-isotherms';
+export { coleColeSeries, lossTangentSeries, type CheckSeries } from './superposition-plots';
+export { arrheniusPlot, type ArrheniusPlot, type ArrheniusPoint } from './arrhenius-plot';
+export { overlapResiduals, type IsothermResiduals } from './overlap-residuals';
+export { pronyCurve, type PronyCurve } from './prony-curves';
+export { relaxationSpectrum, type RelaxationSpectrum } from './relaxation-spectrum';
+export { SHIFT_MODEL_KINDS } from '../models/types';

@@ -9,6 +9,7 @@
 import { shiftModelLog10aT } from '../models/shift-model-eval';
 import { log10bTAt } from './vertical-at';
 import type { Analysis, ShiftModelKind } from './types';
+import { SHIFT_MODEL_KINDS } from '../models/types';
 
 export type IsothermUse = 'used' | 'excluded' | 'left-out';
 
@@ -40,8 +41,7 @@ export function isothermStates(a: Analysis): IsothermState[] {
   const locks = a.settings.lockedLog10aT;
   const hint = a.models.hint?.model;
   const model =
-    (hint && a.models[hint] ? hint : undefined) ??
-    (['wlf', 'arrhenius', 'polynomial'] as const).find((k) => a.models[k]);
+    (hint && a.models[hint] ? hint : undefined) ?? SHIFT_MODEL_KINDS.find((k) => a.models[k]);
   return a.curves.map((c): IsothermState => {
     const locked = c.isothermId in locks;
     const use: IsothermUse = c.included

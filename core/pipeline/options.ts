@@ -5,6 +5,7 @@
 import { z } from 'zod';
 import { QUANTITY_IDS, type DataWarning, type QuantityId } from '../data/types';
 import { extent } from '../data/extent';
+import { SHIFT_MODEL_KINDS, type ShiftModelKind } from '../models/types';
 
 const quantityId = z.enum(QUANTITY_IDS as [QuantityId, ...QuantityId[]]);
 
@@ -40,7 +41,7 @@ export const analysisOptionsSchema = z.strictObject({
    * Shift-factor models to fit.
    * @default ['wlf', 'arrhenius', 'polynomial']
    */
-  models: z.array(z.enum(['wlf', 'arrhenius', 'polynomial'])).optional(),
+  models: z.array(z.enum(SHIFT_MODEL_KINDS)).optional(),
   /**
    * Relaxation times per decade of the Prony series (1 or 2); 0 skips the Prony fit. 2 is the
    * default: 1 per decade can leave ripples in G″ above the 3 % RMS target (4.5–4.9 % on some
@@ -88,7 +89,7 @@ export interface ResolvedAnalysisOptions {
   shiftQuantities: 'auto' | QuantityId[];
   verticalShift: 'auto' | 'none' | 'density' | 'data';
   density: { referenceDensityKgPerM3?: number; volumetricExpansionPerK: number } | null;
-  models: ('wlf' | 'arrhenius' | 'polynomial')[];
+  models: ShiftModelKind[];
   pronyModesPerDecade: 0 | 1 | 2;
   pronyEquilibrium: 'auto' | 'fit' | 'zero';
   glassTransitionK: number | null;
@@ -97,7 +98,7 @@ export interface ResolvedAnalysisOptions {
   lockedLog10aT: Record<string, number>;
 }
 
-export const DEFAULT_MODELS: ResolvedAnalysisOptions['models'] = ['wlf', 'arrhenius', 'polynomial'];
+export const DEFAULT_MODELS: ResolvedAnalysisOptions['models'] = [...SHIFT_MODEL_KINDS];
 
 /** Prony relaxation times per decade when none is given (see `pronyModesPerDecade`). */
 export const DEFAULT_PRONY_MODES_PER_DECADE = 2;

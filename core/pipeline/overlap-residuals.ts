@@ -2,7 +2,7 @@
  * Residuals of every point against the other isotherms it overlaps on the master curve: at the
  * point's reduced abscissa, each other used isotherm whose reduced range covers it is
  * interpolated linearly in log–log space, and the residual is log10(point) − the mean of those,
- * in decades — the mismatch the overlap fit minimises (DOMAIN.md §2). A trend with temperature
+ * in decades — the mismatch the overlap fit minimises (docs/conventions.md §2). A trend with temperature
  * says superposition fails; a point far off says check it. Points no other isotherm overlaps
  * get no residual. Left-out isotherms are compared with the used ones too (at the shift they
  * are drawn at), to show why they do not fit.

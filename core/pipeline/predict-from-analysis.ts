@@ -14,6 +14,7 @@ import {
 } from '../spectrum/predict';
 import type { Analysis, ShiftModelKind } from './types';
 import { log10bTAt } from './vertical-at';
+import { SHIFT_MODEL_KINDS } from '../models/types';
 
 export interface AnalysisQuery {
   quantity: PredictedQuantity;
@@ -55,7 +56,7 @@ export class PredictionError extends Error {
   }
 }
 
-const MODEL_ORDER: readonly ShiftModelKind[] = ['wlf', 'arrhenius', 'polynomial'];
+const MODEL_ORDER: readonly ShiftModelKind[] = SHIFT_MODEL_KINDS;
 
 /** The model a query without `model` uses: the suggested one, else the first fitted. */
 export function defaultPredictionModel(a: Analysis): ShiftModelKind | null {

@@ -1,5 +1,5 @@
 /**
- * The fitted Prony series (generalised Maxwell model, Ferry 1980 ch. 3; DOMAIN.md §5) drawn as a
+ * The fitted Prony series (generalised Maxwell model, Ferry 1980 ch. 3; docs/conventions.md §5) drawn as a
  * curve of any quantity a master-curve view shows, over the reduced window it was fitted on:
  * G′, G″, |G*|, tan δ = G″/G′ and |η*| = |G*|/ω against reduced frequency, and the relaxation
  * modulus G(t) = Ge + Σ g_i exp(−t/τ_i) against reduced time (for frequency data over

@@ -1,7 +1,7 @@
 /**
  * Every isotherm's points at the reference temperature for one quantity: the measured values,
  * or the ones derived from G′ and G″ (|G*| = √(G′² + G″²), tan δ = G″/G′, δ = atan2(G″, G′),
- * |η*| = |G*|/ω; DOMAIN.md §1), reduced with the isotherm's shift (core/data/reduction: aT·ω or
+ * |η*| = |G*|/ω; docs/conventions.md §1), reduced with the isotherm's shift (core/data/reduction: aT·ω or
  * t/aT; moduli × bT, |η*| × bT/aT, tan δ and δ unchanged). Used isotherms come at their fitted
  * shift with the engine's outlier flags; the others at the shift `isothermStates` places them
  * at, so plots can draw them faded. Masked points are left out.

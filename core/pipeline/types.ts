@@ -3,12 +3,12 @@
  * JSON-serialisable data (numbers that could not be determined are `null`, never NaN).
  * Units are SI and carried in the names; temperatures in kelvin.
  *
- * Conventions (DOMAIN.md §2): reduced frequency ω_r = aT·ω, reduced time t_r = t/aT,
+ * Conventions (docs/conventions.md §2): reduced frequency ω_r = aT·ω, reduced time t_r = t/aT,
  * aT(Tref) = 1, log10 aT < 0 above Tref; reduced modulus = bT × measured modulus,
  * bT = Tref·ρref/(T·ρ(T)), bT(Tref) = 1.
  */
 import type { AbscissaKind, Dataset, DeformationMode, QuantityId, TestKind } from '../data/types';
-import type { ShiftModelSpec } from '../models/types';
+import type { ShiftModelKind, ShiftModelSpec } from '../models/types';
 import type { CurveShift, LeftOut, VerticalChoice } from '../shift/types';
 import type { ResolvedAnalysisOptions } from './options';
 
@@ -139,7 +139,8 @@ export interface PolynomialModel extends ModelFitStats {
   referenceK: number;
 }
 
-export type ShiftModelKind = 'wlf' | 'arrhenius' | 'polynomial';
+// The kinds of shift model are defined once, in core/models/types.ts.
+export type { ShiftModelKind } from '../models/types';
 
 export interface AnalysisModels {
   wlf?: WlfModel;

@@ -3,7 +3,7 @@
  * unmasked point, with |G*| multiplied by the isotherm's bT when a vertical shift applies. No
  * horizontal shift is needed (van Gurp & Palmen, Rheology Bulletin 67, 1998): isotherms on one
  * line support superposition. |G*| = √(G′² + G″²) and δ = atan2(G″, G′) when G′ and G″ were
- * measured, else the measured |G*| and δ (DOMAIN.md §1). The report and the app both plot these.
+ * measured, else the measured |G*| and δ (docs/conventions.md §1). The report and the app both plot these.
  */
 import type { Analysis } from './types';
 

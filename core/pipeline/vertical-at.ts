@@ -4,7 +4,7 @@
  * Polymers, 3rd ed., 1980); with bT estimated from the data, linear interpolation between the
  * included isotherms (the nearest one's value outside them, said in the note).
  */
-import { densityFromExpansion, entropicBT } from '../models/shift-laws';
+import { densityFromExpansion, entropicBT } from '../data/reduction';
 import type { Analysis } from './types';
 import { entropicLog10bT } from '../shift/vertical';
 

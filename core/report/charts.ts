@@ -19,7 +19,8 @@ import {
   toOutputUnit,
   type FrequencyUnit,
   type ModulusUnit,
-} from './output-units';
+} from '../units/output-units';
+import { SHIFT_MODEL_KINDS } from '../models/types';
 
 /** The abscissa of a chart in the output frequency unit (time stays in s). */
 function xOut(a: Analysis, x: number, f: FrequencyUnit): number {
@@ -224,7 +225,7 @@ export function shiftFactorChart(a: Analysis): ChartSpec {
   const legend: LegendEntry[] = [
     { name: 'fitted log10 aT ± s.e.', colour: '#444', marker: 'disc', line: 'none' },
   ];
-  for (const kind of ['wlf', 'arrhenius', 'polynomial'] as const) {
+  for (const kind of SHIFT_MODEL_KINDS) {
     const m = a.models[kind];
     if (!m) continue;
     const st = MODEL_STYLE[kind];

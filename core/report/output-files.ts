@@ -7,7 +7,7 @@ import { analysisSummary } from '../pipeline/summary';
 import { CONVENTIONS } from '../pipeline/conventions';
 import type { Analysis } from '../pipeline/types';
 import { masterCurveCsv, modelsCsv, pronyCsv, shiftTableCsv } from './csv';
-import type { FrequencyUnit, ModulusUnit } from './output-units';
+import type { FrequencyUnit, ModulusUnit } from '../units/output-units';
 import { reportHtml } from './report-html';
 
 /** Output file names (documented in docs/cli.md). */

@@ -22,7 +22,7 @@ import { renderChart } from './svg/render-chart';
 import type { ChartSpec } from './svg/chart-types';
 import { htmlTable, type TableSpec } from './html-table';
 import { indicatorTable, modelTable, pronyTable, settingsTable, shiftTable } from './tables';
-import type { FrequencyUnit, ModulusUnit } from './output-units';
+import type { FrequencyUnit, ModulusUnit } from '../units/output-units';
 
 export interface ReportOptions {
   /** Date printed in the title block (passed in: core reads no clock), e.g. "2026-12-01". */

@@ -13,7 +13,7 @@ import {
   toOutputFrequency,
   type FrequencyUnit,
   type ModulusUnit,
-} from './output-units';
+} from '../units/output-units';
 import { pronySymbols } from '../spectrum/prony-symbols';
 
 const CONVENTION_NOTE = `Conventions: ${CONVENTIONS.horizontal}. ${CONVENTIONS.vertical}.`;

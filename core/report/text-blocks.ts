@@ -1,5 +1,5 @@
 /**
- * Fixed wording of the report: the cautions (DOMAIN.md §6) and the method description, which is
+ * Fixed wording of the report: the cautions (docs/conventions.md §6) and the method description, which is
  * assembled from the resolved settings so it states exactly what was done.
  */
 import type { Analysis } from '../pipeline/types';

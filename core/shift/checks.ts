@@ -1,5 +1,5 @@
 /**
- * Superposition checks (DOMAIN.md §4): the van Gurp–Palmen dispersion (δ against |G*|, needs no
+ * Superposition checks (docs/conventions.md §4): the van Gurp–Palmen dispersion (δ against |G*|, needs no
  * horizontal shift; van Gurp & Palmen, Rheology Bulletin 67, 1998), the mismatch left after
  * shifting compared with the noise inside each curve, and the disagreement between shifts found
  * from different quantities. Each is expressed as a ratio to what noise alone would give, so the

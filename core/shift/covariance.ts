@@ -18,7 +18,7 @@ import { forEachPair } from './residuals';
 import { ResidualBuffer } from './residual-buffer';
 import { NormalSink } from './normal-equations';
 import { SandwichSink } from './sandwich';
-import type { SolveSettings } from './solve';
+import type { SolveSettings } from './solve-settings';
 
 export interface OffsetUncertainty {
   /** Standard error of every parameter, decades (0 for fixed ones). */

@@ -1,8 +1,8 @@
 /**
  * Entropic vertical shift from density: bT = Tref·ρref / (T·ρ(T)), reduced modulus = bT × measured
- * (Ferry, Viscoelastic Properties of Polymers, 3rd ed., 1980; DOMAIN.md §2).
+ * (Ferry, Viscoelastic Properties of Polymers, 3rd ed., 1980; docs/conventions.md §2).
  */
-import { densityFromExpansion, entropicBT } from '../models/shift-laws';
+import { densityFromExpansion, entropicBT } from '../data/reduction';
 import type { DensityInput } from './types';
 
 export interface DensityShift {

@@ -36,7 +36,7 @@ export function alphaOf(q: QuantityId): number {
   return q === 'complexViscosity' ? -1 : 0;
 }
 
-/** Coefficient of log10 bT in the reduced log ordinate (DOMAIN.md §2). */
+/** Coefficient of log10 bT in the reduced log ordinate (docs/conventions.md §2). */
 export function betaOf(q: QuantityId): number {
   if (q === 'tanDelta' || q === 'phaseAngle') return 0;
   return q === 'creepCompliance' ? -1 : 1;

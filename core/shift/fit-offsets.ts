@@ -17,7 +17,7 @@ import { offsetUncertainty } from './covariance';
 import { solveOffsets } from './solve';
 import { startingOffsets } from './start';
 import { StatsSink } from './stats-sink';
-import { studentTQuantile } from '../models/student-t';
+import { studentTQuantile } from '../numeric/student-t';
 import type { FitInfo, ResolvedShiftOptions, RobustLoss } from './types';
 
 /** Cauchy tuning constant for 95 % efficiency under normal errors (Holland & Welsch 1977). */

@@ -1,5 +1,5 @@
 /**
- * Reduced data for plots, reports and the Prony fit (DOMAIN.md §2): ω_r = aT·ω or t_r = t/aT;
+ * Reduced data for plots, reports and the Prony fit (docs/conventions.md §2): ω_r = aT·ω or t_r = t/aT;
  * moduli × bT, compliance / bT, |η*| × bT/aT; tan δ and δ unchanged. Only isotherms included in the
  * shift result appear; points keep their dataset mask and the engine's outlier flag.
  */

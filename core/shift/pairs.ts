@@ -2,7 +2,7 @@
  * Candidate pairs: two isotherms can inform each other's shift only if, for every driving
  * quantity both carry, their value ranges overlap with at least `minOverlapPoints` values of the
  * two curves inside the common band. A horizontal shift cannot make curves with disjoint value
- * ranges meet, so such a pair carries no information (DOMAIN.md §2).
+ * ranges meet, so such a pair carries no information (docs/conventions.md §2).
  *
  * Only isotherms at most NEIGHBOUR_POSITIONS apart in order of temperature are paired (all pairs
  * up to eleven isotherms): isotherms far apart in temperature overlap little or not at all, and

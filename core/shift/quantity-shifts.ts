@@ -1,6 +1,6 @@
 /**
  * Agreement of the shifts found from each driving quantity alone (e.g. G' alone against G''
- * alone), a check of superposition (DOMAIN.md §4): for a thermorheologically simple material both
+ * alone), a check of superposition (docs/conventions.md §4): for a thermorheologically simple material both
  * give the same aT within their noise.
  *
  * Each single-quantity fit starts at the joint optimum and takes at most two Levenberg–Marquardt

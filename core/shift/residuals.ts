@@ -5,7 +5,7 @@
  *   r = [y_i + α h_i + β v_i] − [Y_j(lx_i + σ(h_i − h_j)) + α h_j + β v_j]      (decades)
  *   ∂r/∂h_i = α − σ·Y'_j,  ∂r/∂h_j = −∂r/∂h_i,  ∂r/∂v_i = β,  ∂r/∂v_j = −β.
  * A pair whose overlap holds fewer than `minOverlapPoints` entries carries no information and
- * yields no residuals (DOMAIN.md §2: never invent a shift).
+ * yields no residuals (docs/conventions.md §2: never invent a shift).
  */
 import type { FitProblem, FitSeries } from './problem';
 import { ResidualBuffer } from './residual-buffer';

@@ -1,7 +1,7 @@
 /**
  * shiftIsotherms(): the shift engine's entry point. Finds log10 aT (and log10 bT) for every
  * isotherm by a global robust overlap fit, with standard errors, quality figures, superposition
- * checks and warnings. Method and conventions: docs/shifting.md, DOMAIN.md §2 and §4.
+ * checks and warnings. Method and conventions: docs/shifting.md, docs/conventions.md §2 and §4.
  */
 import type { Dataset } from '../data/types';
 import { buildProblem } from './build-problem';

@@ -11,7 +11,6 @@
  */
 import type { FitProblem } from './problem';
 import { parameterCount } from './problem';
-import type { ResidualBuffer } from './residual-buffer';
 import type { OffsetUncertainty } from './covariance';
 import { offsetUncertainty, support } from './covariance';
 import type { LinearConstraint } from './kkt';
@@ -19,32 +18,11 @@ import { addPrior, kktStep, projectOntoConstraints } from './kkt';
 import { parameterLayout } from './layout';
 import type { NormalSink } from './normal-equations';
 import { comparedSets, normalAt } from './normal-walk';
-import type { RobustLoss } from './types';
 
 export type { LinearConstraint } from './kkt';
-
-export interface SolveSettings {
-  loss: RobustLoss;
-  scale: number;
-  maxIterations: number;
-  /** 1 = parameter kept at its starting value. */
-  fixed: Uint8Array;
-  constraints: LinearConstraint[];
-  /** Stop when no parameter moves by more than this, decades. */
-  toleranceDecades: number;
-  /**
-   * Optional Gaussian prior per parameter: 1/σ² (decades⁻²), 0 for none. Enters as
-   * ½·scale²·θ²/σ², on the same footing as the standardised residuals.
-   */
-  prior?: Float64Array;
-  /** Reused residual storage (optional). */
-  buffer?: ResidualBuffer;
-  /**
-   * Compute the uncertainty at the optimum (a sandwich over every residual). Off for a pass that
-   * is followed by another one. @default true
-   */
-  covariance?: boolean;
-}
+// The settings live in their own file so that covariance.ts can read them without importing the solver.
+export type { SolveSettings } from './solve-settings';
+import type { SolveSettings } from './solve-settings';
 
 export interface SolveOutcome {
   theta: Float64Array;

@@ -1,6 +1,6 @@
 /**
  * Shared types of the shift engine: options, result and the internal fit problem.
- * Conventions (DOMAIN.md §2): ω_r = aT·ω, t_r = t/aT, aT(Tref) = 1, log10 aT < 0 above Tref;
+ * Conventions (docs/conventions.md §2): ω_r = aT·ω, t_r = t/aT, aT(Tref) = 1, log10 aT < 0 above Tref;
  * reduced modulus = bT × measured, reduced compliance = measured / bT,
  * reduced |η*| = |η*|·bT/aT; tan δ and δ carry no vertical shift.
  */

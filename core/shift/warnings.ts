@@ -1,5 +1,5 @@
 /** Wording of the warnings, in terms a lab technician can act on. */
-import { kelvinToCelsius } from '../data/quantities';
+import { formatCelsius, kelvinToCelsius } from '../data/temperature';
 import type { Isotherm } from '../data/types';
 import type { ShiftWarning, ShiftWarningCode } from './types';
 
@@ -12,4 +12,4 @@ export function warn(list: ShiftWarning[], code: ShiftWarningCode, message: stri
   list.push({ code, message });
 }
 
-export const formatC = (k: number): string => `${kelvinToCelsius(k).toFixed(1)} °C`;
+export const formatC = (k: number): string => formatCelsius(k);

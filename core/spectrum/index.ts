@@ -1,4 +1,4 @@
-/** Prony series, interconversion, master-curve indicators and design predictions (DOMAIN.md §5). */
+/** Prony series, interconversion, master-curve indicators and design predictions (docs/conventions.md §5). */
 export * from './prony-model';
 export type * from './types';
 export { relaxationTimeGrid } from './tau-grid';
@@ -24,3 +24,4 @@ export type {
   PredictionQuery,
   PredictedQuantity,
 } from './predict';
+export { pronySymbols, type PronySymbols } from './prony-symbols';

@@ -1,5 +1,5 @@
 /**
- * Log-binning of a master curve before the Prony and viscosity fits (issue 9): dense curves
+ * Log-binning of a master curve before the Prony and viscosity fits (docs/conventions.md §7): dense curves
  * (10⁵–10⁶ points) become one point per 1/binsPerDecade of log x, so the fits cost the same at
  * any size. Each bin gives, per quantity, the mean of log10 y at the mean of log10 x (the value
  * of the bin's own straight-line fit there, so the curve's slope across the bin does not bias it)

@@ -2,7 +2,7 @@ import type { PronySeries } from './prony-model';
 
 /**
  * Shear ↔ tension for an isotropic material with a constant Poisson's ratio ν:
- * E = 2(1 + ν)G (DOMAIN.md §1). ν = 0.5 (incompressible rubber) gives E = 3G. A constant ν is
+ * E = 2(1 + ν)G (docs/conventions.md §1). ν = 0.5 (incompressible rubber) gives E = 3G. A constant ν is
  * itself an approximation for viscoelastic solids (ν changes from the glass to the rubber).
  */
 export function tensileFactor(poissonRatio: number): number {

@@ -1,6 +1,6 @@
 /**
  * Design queries: a modelled quantity at a chosen temperature and time or frequency, through the
- * shift model and the Prony series (DOMAIN.md §5): ω_r = aT(T)·ω, t_r = t/aT(T); measured
+ * shift model and the Prony series (docs/conventions.md §5): ω_r = aT(T)·ω, t_r = t/aT(T); measured
  * modulus = reduced modulus / bT, measured compliance = reduced compliance × bT,
  * |η*|(T, ω) = |G*_r(ω_r)| / (bT·ω). Every answer carries its extrapolation flags and cautions.
  */
@@ -73,7 +73,7 @@ const UNIT: Record<PredictedQuantity, string> = {
   creep: '1/Pa',
 };
 
-/** Cautions every prediction carries (DOMAIN.md §6). */
+/** Cautions every prediction carries (docs/conventions.md §6). */
 export const STANDING_CAUTIONS: readonly string[] = [
   'Predictions outside the measured reduced window or temperature range are extrapolations.',
   'Time–temperature superposition does not hold for every material; check its validity (e.g. van Gurp–Palmen plot).',

@@ -1,6 +1,6 @@
 /**
  * Prony series (generalised Maxwell model) fitted to a master curve by non-negative least squares
- * on relative residuals (DOMAIN.md §5; Baumgaertel & Winter, Rheol. Acta 28, 1989, for the fixed
+ * on relative residuals (docs/conventions.md §5; Baumgaertel & Winter, Rheol. Acta 28, 1989, for the fixed
  * log grid of relaxation times). The curve is first log-binned (log-bins.ts): each bin mean is a
  * row, weighted by its standard error, so every decade counts by the points and the agreement it
  * holds, and 10⁶ points cost no more than 10³. The τ grid covers only the densest stretch of the

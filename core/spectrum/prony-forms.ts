@@ -4,7 +4,7 @@ import type { NormalisedProny } from './types';
 
 /**
  * Normalised form of a Prony series, as FEA programs usually take it: g_i/G0 and Ge/G0 with
- * G0 = Ge + Σ g_i (DOMAIN.md §5). Give it together with G0 and the shift model.
+ * G0 = Ge + Σ g_i (docs/conventions.md §5). Give it together with G0 and the shift model.
  */
 export function normaliseProny(series: PronySeries): NormalisedProny {
   const g0 = pronyInstantaneous(series);

@@ -1,6 +1,6 @@
 /**
  * Generalised Maxwell model (Prony series). Ferry, Viscoelastic Properties of Polymers, 3rd ed.
- * (1980), ch. 3; see DOMAIN.md §5:
+ * (1980), ch. 3; see docs/conventions.md §5:
  *   G'(ω)  = Ge + Σ g_i ω²τ_i² / (1 + ω²τ_i²)
  *   G''(ω) = Σ g_i ωτ_i / (1 + ω²τ_i²)
  *   G(t)   = Ge + Σ g_i exp(−t/τ_i)

@@ -1,7 +1,7 @@
 import type { DeformationMode } from '../data/types';
 
 /**
- * Symbols of a Prony series as users write them: G for shear, E for tension (DOMAIN.md §1: keep E
+ * Symbols of a Prony series as users write them: G for shear, E for tension (docs/conventions.md §1: keep E
  * and G apart; for an incompressible rubber E ≈ 3G, so a tensile series typed in as shear terms is
  * off by about three).
  */

@@ -5,7 +5,7 @@
  * each isotherm is measured as
  *   J(T, t) = bT · J_ref(t / aT)
  * so that the reduced compliance J(T, t)/bT at the reduced time t/aT falls on the reference curve
- * (DOMAIN.md §2: reduced compliance = measured / bT). Noise is multiplicative and seeded, as in
+ * (docs/conventions.md §2: reduced compliance = measured / bT). Noise is multiplicative and seeded, as in
  * syntheticIsotherms. Everything is invented and reproducible from the seed.
  */
 import type { Dataset, DeformationMode, Isotherm } from '../data/types';

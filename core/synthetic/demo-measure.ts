@@ -1,9 +1,10 @@
 /**
  * Turns an invented demo scenario into measurements: measured temperatures, noise-free values from
  * the true model at each point's measured temperature, then seeded multiplicative noise.
- * Conventions as in DOMAIN.md: measured at T, G(ω) = G_ref(aT·ω) / bT and G(t) = G_ref(t/aT) / bT.
+ * Conventions as in docs/conventions.md §2: measured at T, G(ω) = G_ref(aT·ω) / bT and G(t) = G_ref(t/aT) / bT.
  */
-import { densityFromExpansion, entropicBT } from '../models/shift-laws';
+import { ZERO_CELSIUS_K } from '../data/temperature';
+import { densityFromExpansion, entropicBT } from '../data/reduction';
 import { pronyLoss, pronyRelaxation, pronyStorage } from '../spectrum/prony-model';
 import type { DemoMeasurements, DemoPoint, DemoScenario } from './demo-types';
 import { shiftLawLog10aT } from './isotherm-set';
@@ -11,7 +12,7 @@ import type { Random } from './random';
 import { seededRandom } from './random';
 import { wanderingOffsetsK } from './wander';
 
-const C_TO_K = 273.15;
+const C_TO_K = ZERO_CELSIUS_K;
 
 /** A point counts as low-torque when the torque floor is at least this share of its true value. */
 export const LOW_TORQUE_SHARE = 0.1;

@@ -2,6 +2,7 @@
  * The invented demo samples as text files and as a Dataset: what `npm run samples` writes to
  * samples/, and what the app can rebuild without reading any file. Pure: no file system here.
  */
+import { celsiusToKelvin } from '../data/temperature';
 import type { Dataset, Isotherm, QuantityId } from '../data/types';
 import { maxOf, minOf } from '../data/extent';
 import type { DemoFile, DemoMeasurements, DemoScenario, DemoWritten } from './demo-types';
@@ -111,7 +112,7 @@ export function demoDataset(sample: DemoSample): Dataset {
     }
     return sortedIsotherm({
       id: `T${String(k + 1).padStart(2, '0')}`,
-      temperatureK: mean + 273.15,
+      temperatureK: celsiusToKelvin(mean),
       temperatureSpreadK: maxOf(temps) - minOf(temps),
       x: iso.points.map((p) => p.xSI),
       quantities,

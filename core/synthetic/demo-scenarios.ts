@@ -7,10 +7,11 @@
  * `demoScenarios()` returns fresh objects each call, so callers may change a copy (e.g. set the
  * noise to zero) without affecting anyone else.
  */
+import { ZERO_CELSIUS_K } from '../data/temperature';
 import type { DemoScenario } from './demo-types';
 import { meltProny, transitionProny } from './spectrum-shapes';
 
-const C_TO_K = 273.15;
+const C_TO_K = ZERO_CELSIUS_K;
 
 /** Log-spaced values from `from` to `to` (either order), rounded to `digits` significant digits. */
 function roundedLogGrid(from: number, to: number, perDecade: number, digits = 5): number[] {

@@ -4,6 +4,7 @@
  * noise, seed) plus, per isotherm, the true shift at the mean measured temperature, so tests and
  * users can check how well a master curve recovers it.
  */
+import { kelvinToCelsius } from '../data/temperature';
 import type { DemoMeasurements, DemoScenario, DemoWritten } from './demo-types';
 import { LOW_TORQUE_SHARE, demoShiftAt } from './demo-measure';
 import { GAS_CONSTANT_J_PER_MOL_K } from '../models/shift-laws';
@@ -151,7 +152,7 @@ export function demoTruth(m: DemoMeasurements, written: DemoWritten): DemoTruth 
           ? 'measured E(t) or G(t) at T = Prony G(t/aT) / bT'
           : "measured storage/loss modulus at T = Prony G'(aT·ω) / bT, G''(aT·ω) / bT; ω = 2π f",
     },
-    referenceTemperatureC: Math.round((s.referenceK - 273.15) * 1e9) / 1e9,
+    referenceTemperatureC: Math.round(kelvinToCelsius(s.referenceK) * 1e9) / 1e9,
     referenceTemperatureK: s.referenceK,
     shiftLaw: truthLaw(s),
     verticalShift: s.density

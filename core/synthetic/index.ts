@@ -16,3 +16,13 @@ export { buildDemoSample, demoDataset, demoSampleFiles } from './demo-samples';
 export * from './workbook-writer';
 export type { DemoBinaryFile } from './demo-workbook';
 export { DEMO_WORKBOOK_PATH, demoWorkbook, demoWorkbookReadme } from './demo-workbook';
+export { INVENTED_DEMO_MARKER, isInventedDemo } from './demo-header';
+export {
+  LOT_FIRM,
+  LOT_PRODUCT,
+  LOTS,
+  lotReleaseFiles,
+  lotScenario,
+  lotSpecification,
+} from './lot-release';
+export type { LotDefinition } from './lot-release';

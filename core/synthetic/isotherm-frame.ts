@@ -5,7 +5,7 @@
  * syntheticCreep so both generate the same way (and regenerate the same numbers from a seed).
  */
 import type { Isotherm, QuantityId } from '../data/types';
-import { densityFromExpansion, entropicBT } from '../models/shift-laws';
+import { densityFromExpansion, entropicBT } from '../data/reduction';
 
 /** Density model for an entropic vertical shift. */
 export interface SyntheticDensity {
@@ -38,7 +38,7 @@ export interface SyntheticSetOptions {
   name?: string;
 }
 
-/** bT at `temperatureK` (DOMAIN.md §2, entropic: Tref·ρref/(T·ρ)); 1 without a density model. */
+/** bT at `temperatureK` (docs/conventions.md §2, entropic: Tref·ρref/(T·ρ)); 1 without a density model. */
 export function syntheticBT(
   temperatureK: number,
   referenceK: number,

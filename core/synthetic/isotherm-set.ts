@@ -1,7 +1,7 @@
 /**
  * Synthetic isotherms from a known Prony model and a known shift law: the yardstick for every
  * accuracy test and the source of the invented demo samples. Everything is reproducible from the
- * seed. Sign conventions as in DOMAIN.md: measured at T, G(ω) = G_ref(aT·ω) / bT.
+ * seed. Sign conventions as in docs/conventions.md §2: measured at T, G(ω) = G_ref(aT·ω) / bT.
  */
 import type { Dataset, DeformationMode, Isotherm, QuantityId, TestKind } from '../data/types';
 import type { PronySeries } from '../spectrum/prony-model';

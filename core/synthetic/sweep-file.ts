@@ -4,6 +4,7 @@
  * temperature of each row wandering about its set point (an AR(1) walk, wander.ts). Used to test
  * the importer's grouping on closely spaced isotherms and dense sweeps. Invented data.
  */
+import { ZERO_CELSIUS_K } from '../data/temperature';
 import type { Dataset } from '../data/types';
 import { seededRandom } from './random';
 import { wanderingOffsetsK } from './wander';
@@ -17,7 +18,7 @@ export interface SweepFileOptions {
   seed?: number;
 }
 
-const C_TO_K = 273.15;
+const C_TO_K = ZERO_CELSIUS_K;
 
 /**
  * The isotherms of `dataset` (G′ and G″ required) as one long CSV text: Temperature (°C),

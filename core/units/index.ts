@@ -10,3 +10,10 @@ export {
 export { siUnitOf, unitsOf } from './unit-table';
 export { parseTemperatureText } from './temperature';
 export type { TemperatureReading } from './temperature';
+export {
+  MODULUS_UNITS,
+  type ModulusUnit,
+  modulusFactor,
+  toOutputUnit,
+  outputUnitLabel,
+} from './output-units';

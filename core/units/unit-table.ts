@@ -1,4 +1,5 @@
 import type { UnitConversion, UnitDimension } from './types';
+import { ZERO_CELSIUS_K } from '../data/temperature';
 
 /**
  * Every unit Thermoshift understands, keyed by its normalised spelling (see normaliseUnitText).
@@ -18,7 +19,12 @@ const TABLE: Record<UnitDimension, { siUnit: string; entries: Entry[] }> = {
   temperature: {
     siUnit: 'K',
     entries: [
-      [['°c', 'degc', 'c', 'celsius', 'degreescelsius', 'degreecelsius', 'oc'], '°C', 1, 273.15],
+      [
+        ['°c', 'degc', 'c', 'celsius', 'degreescelsius', 'degreecelsius', 'oc'],
+        '°C',
+        1,
+        ZERO_CELSIUS_K,
+      ],
       [['k', 'kelvin', '°k'], 'K', 1, 0],
       [['°f', 'degf', 'f', 'fahrenheit', 'degreesfahrenheit', 'of'], '°F', F_FACTOR, F_OFFSET],
     ],

@@ -62,7 +62,7 @@ describe('thermoshift build (samples/)', () => {
           c.log10bT!,
           truth.isotherms[i].log10bT,
           0.005,
-          `${sample} bT (issue 3: 0.005 decades)`,
+          `${sample} bT (bT target, docs/conventions.md §7: 0.005 decades)`,
         );
       });
       expectAbsClose(s.referenceTemperature, truth.referenceTemperatureC, 1e-9, 'as given');
@@ -75,7 +75,7 @@ describe('thermoshift build (samples/)', () => {
           s.models.arrhenius!.activationEnergy,
           truth.shiftLaw.activationEnergyKJPerMol!,
           0.02,
-          'issue 4: Ea within 2 %',
+          'model target, docs/conventions.md §7: Ea within 2 %',
         );
       expect(s.prony?.terms.length).toBeGreaterThan(0);
       if (truth.prony.zeroShearViscosityPaS)
@@ -136,7 +136,12 @@ describe('thermoshift build (synthetic files with known truth)', () => {
   it('build recovers log10 aT within 0.02 decades and the WLF constants of the truth', () => {
     const s = JSON.parse(first.stdout) as AnalysisSummary;
     s.curves.forEach((c, i) =>
-      expectAbsClose(c.log10aT!, truth.log10aT[i], 0.02, 'issue 3: 2 % noise, 9 isotherms'),
+      expectAbsClose(
+        c.log10aT!,
+        truth.log10aT[i],
+        0.02,
+        'shift target, docs/conventions.md §7: 2 % noise, 9 isotherms',
+      ),
     );
     expectRelClose(
       s.models.wlf!.C1,

@@ -47,7 +47,7 @@ describe('thermoshift build --predict', () => {
     const [p] = (JSON.parse(r.stdout) as { predictions: PredictionEntry[] }).predictions;
     const T = 333.15;
     const expected = pronyRelaxation(SEAL_PRONY, TEN_YEARS_S / 10 ** sealLog10aT(T));
-    // 5 %: 1 % noise, the shift error (≤ 0.02 decades, issue 3), the Prony fit (≤ 3 %, issue 4)
+    // 5 %: 1 % noise, the shift error (≤ 0.02 decades, docs/conventions.md §7), the Prony fit (≤ 3 %, docs/conventions.md §7)
     expectRelClose(p.value, expected, 0.05, 'G(10 years) at 60 °C');
     expect(p.unit).toBe('Pa');
     expect(p.temperature).toBe(60);

@@ -3,7 +3,7 @@
  * 120 px worth of decades on the axis as it was at pointer-down (checked step by step and on the
  * pixels drawn), the plot does not move at pointer-down, a lock and its undo, every view of the
  * demo and of an imported DMA folder (samples/seal-dma) on screen and exported as PNG and SVG,
- * display units, and the small defects of issue 11 (key 6, Recent, one download for Export → All,
+ * display units, and the small defects (key 6, Recent, one download for Export → All,
  * export names, toolbar at 1400 px, tables that fit, Copy, import preview, prediction range).
  * Screenshots go to test-results/artifacts/ (view-demo-*.png, view-seal-*.png, drag-*.png).
  */

@@ -41,7 +41,7 @@ describe('shiftIsotherms() on the invented samples', () => {
       result.curves.forEach((c, k) => {
         const t = truth.isotherms[k];
         expect(c.included).toBe(true);
-        // 0.02 decades: the accuracy target for 2 % noise, 3 decades per isotherm (issue 3).
+        // 0.02 decades: the accuracy target for 2 % noise, 3 decades per isotherm (docs/conventions.md §7).
         expectAbsClose(c.log10aT ?? NaN, t.log10aT, 0.02, `${id} log10 aT at ${t.setPointC} °C`);
         // bT from the same density formula as the truth: only rounding differs.
         expectAbsClose(c.log10bT ?? NaN, t.log10bT, 1e-6, `${id} log10 bT at ${t.setPointC} °C`);

@@ -7,10 +7,10 @@
 import { Command } from 'commander';
 import { readdirSync, statSync } from 'node:fs';
 import { basename, join } from 'node:path';
-import { batchIndexCsv, type BatchIndexRow } from '../../../core/report/csv/batch-index-csv.ts';
-import { THERMOSHIFT_VERSION } from '../../../core/pipeline/version.ts';
-import { toCelsius } from '../../../core/pipeline/temperature.ts';
-import type { Settings } from '../../../core/pipeline/settings.ts';
+import { batchIndexCsv, type BatchIndexRow } from '@core/report';
+import { THERMOSHIFT_VERSION } from '@core/pipeline';
+import { toCelsius } from '@core/pipeline';
+import type { Settings } from '@core/pipeline';
 import { addSampleOptions, resolveSettings, type SampleOptionValues } from '../sample-options.ts';
 import { DATA_FILE_PATTERN, readWorkbookInputs } from '../io/read-inputs.ts';
 import { analyseSample } from '../run-sample.ts';
@@ -21,8 +21,8 @@ import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
 import { checkDate } from './build.ts';
 import { loadAnalysis, readSpecFile } from './compare.ts';
-import { compareAnalyses } from '../../../core/compare/compare-analyses.ts';
-import type { Specification } from '../../../core/compare/spec-schema.ts';
+import { compareAnalyses } from '@core/compare';
+import type { Specification } from '@core/compare';
 
 /**
  * With --spec: the overall verdict of each sample against the reference (pass, fail,

@@ -3,11 +3,11 @@
  * whole job and prints the JSON summary (--json) and/or writes the output files (--out DIR).
  */
 import { Command } from 'commander';
-import { quantitySymbol } from '../../../core/data/quantities.ts';
-import { analysisSummary } from '../../../core/pipeline/summary.ts';
-import { toCelsius } from '../../../core/pipeline/temperature.ts';
-import type { Analysis } from '../../../core/pipeline/types.ts';
-import { formatFixed } from '../../../core/report/format.ts';
+import { analysisSummary } from '@core/pipeline';
+import { toCelsius } from '@core/pipeline';
+import type { Analysis } from '@core/pipeline';
+import { formatFixed } from '@core/report';
+import { quantitySymbol } from '@core/data';
 import { addSampleOptions, resolveSettings, type SampleOptionValues } from '../sample-options.ts';
 import { readWorkbookInputs } from '../io/read-inputs.ts';
 import { analyseSample } from '../run-sample.ts';

@@ -10,19 +10,15 @@
 import { Command } from 'commander';
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { compareAnalyses } from '../../../core/compare/compare-analyses.ts';
-import { comparisonCsv, verdictsCsv } from '../../../core/compare/comparison-csv.ts';
-import { comparisonReportHtml } from '../../../core/compare/comparison-report.ts';
-import {
-  parseSpecification,
-  SpecError,
-  type Specification,
-} from '../../../core/compare/spec-schema.ts';
-import { CompareError } from '../../../core/compare/options.ts';
-import type { Comparison } from '../../../core/compare/types.ts';
-import { buildMasterCurve } from '../../../core/pipeline/build-master-curve.ts';
-import { settingTemperatureK, type Settings } from '../../../core/pipeline/settings.ts';
-import type { Analysis } from '../../../core/pipeline/types.ts';
+import { compareAnalyses } from '@core/compare';
+import { comparisonCsv, verdictsCsv } from '@core/compare';
+import { comparisonReportHtml } from '@core/compare';
+import { parseSpecification, SpecError, type Specification } from '@core/compare';
+import { CompareError } from '@core/compare';
+import type { Comparison } from '@core/compare';
+import { buildMasterCurve } from '@core/pipeline';
+import { settingTemperatureK, type Settings } from '@core/pipeline';
+import type { Analysis } from '@core/pipeline';
 import { parseAnalysis, ANALYSIS_FILE_SUFFIX } from '../../renderer/src/document/analysis-file.ts';
 import { addSampleOptions, resolveSettings, type SampleOptionValues } from '../sample-options.ts';
 import { readInputs } from '../io/read-inputs.ts';

@@ -5,21 +5,10 @@
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { basename, join } from 'node:path';
 import { Command, Option } from 'commander';
-import { quantitySymbol } from '../../../core/data/quantities.ts';
-import type {
-  ColumnMapping,
-  ColumnRole,
-  ImportResult,
-  SourceFile,
-} from '../../../core/io/index.ts';
-import {
-  COLUMN_ROLES,
-  expandWorkbooks,
-  ImportError,
-  importFiles,
-  isWorkbookName,
-} from '../../../core/io/index.ts';
-import { parseTemperatureText } from '../../../core/units/index.ts';
+import { kelvinToCelsius, quantitySymbol } from '@core/data';
+import type { ColumnMapping, ColumnRole, ImportResult, SourceFile } from '@core/io';
+import { COLUMN_ROLES, expandWorkbooks, ImportError, importFiles, isWorkbookName } from '@core/io';
+import { parseTemperatureText } from '@core/units';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
 import { readDecodedChunks } from '../io/read-text-chunks.ts';
@@ -130,7 +119,7 @@ function tolerance(text: string | undefined): number | undefined {
   return v;
 }
 
-const C = (k: number): number => Number((k - 273.15).toFixed(2));
+const C = (k: number): number => Number(kelvinToCelsius(k).toFixed(2));
 const g = (v: number): string => Number(v.toPrecision(4)).toString();
 
 /** The inspection as plain data: what `--json` prints. */

@@ -5,10 +5,10 @@
  */
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';
-import { expandWorkbooks, isWorkbookName } from '../../../core/io/index.ts';
+import { expandWorkbooks, isWorkbookName } from '@core/io';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
-import type { TextEncodingName } from '../../../core/io/index.ts';
+import type { TextEncodingName } from '@core/io';
 import { readDecodedChunks } from './read-text-chunks.ts';
 
 /** File name endings taken from a folder (other files, e.g. notes or images, are skipped). */

@@ -7,8 +7,8 @@
  */
 import { isUtf8 } from 'node:buffer';
 import { closeSync, openSync, readSync } from 'node:fs';
-import { ChunkDecoder, LineChunker, detectEncoding } from '../../../core/io/index.ts';
-import type { TextEncodingName } from '../../../core/io/index.ts';
+import { ChunkDecoder, LineChunker, detectEncoding } from '@core/io';
+import type { TextEncodingName } from '@core/io';
 
 /** Bytes read per call: large enough for few calls, small enough to stay far below string limits. */
 export const CHUNK_BYTES = 4 << 20;

@@ -1,6 +1,6 @@
 /** Reads a JSON settings file (`--settings FILE`) and validates it; errors name the file and key. */
 import { readFileSync } from 'node:fs';
-import { parseSettings, type Settings } from '../../../core/pipeline/settings.ts';
+import { parseSettings, type Settings } from '@core/pipeline';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
 

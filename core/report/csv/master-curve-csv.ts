@@ -12,7 +12,7 @@ import {
   toOutputUnit,
   type FrequencyUnit,
   type ModulusUnit,
-} from '../output-units';
+} from '../../units/output-units';
 
 const COLUMN_STEM: Record<QuantityId, string> = {
   storageModulus: 'storage_modulus',

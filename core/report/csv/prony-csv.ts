@@ -8,7 +8,7 @@ import type { Analysis } from '../../pipeline/types';
 import { conventionCommentLines } from '../../pipeline/conventions';
 import { toCelsius } from '../../pipeline/temperature';
 import { csvDocument, csvNumber } from './csv-format';
-import { modulusFactor, type ModulusUnit } from '../output-units';
+import { modulusFactor, type ModulusUnit } from '../../units/output-units';
 import { pronySymbols } from '../../spectrum/prony-symbols';
 
 /** Returns null when the analysis has no Prony series. */

@@ -2,7 +2,7 @@ import { describe, it, expect } from 'vitest';
 import { reducedAbscissa, reductionFactor } from '../../../core/data/reduction';
 import { expectRelClose } from '../../helpers/assert-close';
 
-// Conventions of DOMAIN.md §2 (Ferry, Viscoelastic Properties of Polymers, 3rd ed., 1980).
+// Conventions of docs/conventions.md §2 (Ferry, Viscoelastic Properties of Polymers, 3rd ed., 1980).
 describe('reducedAbscissa()', () => {
   it('reducedAbscissa() multiplies frequency by aT and divides time by aT', () => {
     expect(reducedAbscissa('angularFrequency', 10, 0.1)).toBe(1);

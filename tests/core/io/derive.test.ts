@@ -17,7 +17,7 @@ function iso(quantities: Isotherm['quantities']): Isotherm {
 }
 
 describe('deriveQuantities()', () => {
-  // G' = |G*| cos δ, G'' = |G*| sin δ, tan δ = G''/G' (DOMAIN.md §1; definitions of the complex modulus).
+  // G' = |G*| cos δ, G'' = |G*| sin δ, tan δ = G''/G' (docs/conventions.md §1; definitions of the complex modulus).
   it("deriveQuantities() gives G' = |G*| cos δ and G'' = |G*| sin δ from |G*| and δ", () => {
     const i = iso({ complexModulus: [2e6, 1e5], phaseAngle: [60, 30] });
     expect(deriveQuantities(i).sort()).toEqual(['lossModulus', 'storageModulus', 'tanDelta']);

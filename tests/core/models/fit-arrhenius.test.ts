@@ -26,7 +26,7 @@ describe('fitArrhenius()', () => {
     expect(f.parameters[0]).toMatchObject({ name: 'Ea', unit: 'kJ/mol' });
   });
 
-  // Acceptance (issue 4): Ea within 2 % at 2 % noise on the shift factors. A melt, nine
+  // Acceptance (docs/conventions.md §7): Ea within 2 % at 2 % noise on the shift factors. A melt, nine
   // isotherms 150–230 °C, Ea = 45 kJ/mol (invented), σ(log10 aT) = 0.02/ln10 = 0.0087 decades.
   // The error of Ea is itself random: measured over 500 seeds, 95.4 % of fits land within 2 %
   // (median 0.69 %, worst 2.9 %). The test asserts the fixed-seed case and the distribution.

@@ -54,7 +54,7 @@ describe('fitWlf()', () => {
     });
   }
 
-  // Acceptance (issue 4): the fitted WLF log10 aT within 0.03 decades of the truth at 2 % noise on
+  // Acceptance (docs/conventions.md §7): the fitted WLF log10 aT within 0.03 decades of the truth at 2 % noise on
   // the shift factors, σ = 0.02/ln10 = 0.0087 decades. Measured over 500 seeds: median 0.0068,
   // worst 0.023 decades; so every data set must pass.
   it('fitWlf() stays within 0.03 decades of the true log10 aT at 2 % noise (every seed 1–100)', () => {

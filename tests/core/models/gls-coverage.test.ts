@@ -50,7 +50,7 @@ function coverage(
   return { gls: gls / n, diagonal: diagonal / n, converged: converged / sets };
 }
 
-// Acceptance (issue 10, item 4): the 95 % band of the GLS fit covers the truth 90–98 % of the
+// Acceptance (docs/conventions.md §7): the 95 % band of the GLS fit covers the truth 90–98 % of the
 // time over ≥ 500 seeded sets. The binomial sd of a 95 % rate over 500 sets × 6–9 temperatures is
 // about 0.3 %, but the temperatures of one set are strongly correlated, so the effective count is
 // nearer the 500 sets (sd ≈ 1 %): 90–98 % is three or more sd either side. Measured (these

@@ -62,7 +62,12 @@ describe('buildMasterCurve()', () => {
     const { dataset, truth } = make();
     const a = buildMasterCurve(dataset, { referenceTemperatureK: tg + 50, glassTransitionK: tg });
     a.curves.forEach((c, i) =>
-      expectAbsClose(c.log10aT!, truth.log10aT[i], 0.02, 'issue 3: 2 % noise, 9 isotherms'),
+      expectAbsClose(
+        c.log10aT!,
+        truth.log10aT[i],
+        0.02,
+        'shift target, docs/conventions.md §7: 2 % noise, 9 isotherms',
+      ),
     );
     const w = a.models.wlf!;
     expectRelClose(w.c1, 8.86, 0.05, 'C1 at Tg + 50 K within 5 % (C1, C2 strongly correlated)');
@@ -80,7 +85,7 @@ describe('buildMasterCurve()', () => {
         w.band.log10aT[i],
         trueLog,
         0.03,
-        'WLF band within 0.03 decades of the truth (issue 4)',
+        'WLF band within 0.03 decades of the truth (docs/conventions.md §7)',
       );
     });
     expect(a.models.hint?.model).toBe('wlf');
@@ -111,7 +116,7 @@ describe('buildMasterCurve()', () => {
       a.models.arrhenius!.activationEnergyKJPerMol,
       ea / 1000,
       0.02,
-      'issue 4: Ea within 2 % at 2 % noise',
+      'model target, docs/conventions.md §7: Ea within 2 % at 2 % noise',
     );
     expect(a.models.wlf).toBeUndefined();
   });
@@ -120,20 +125,20 @@ describe('buildMasterCurve()', () => {
     const { dataset } = make({ relativeNoise: 0.01 });
     const a = buildMasterCurve(dataset, { referenceTemperatureK: 373.15, pronyModesPerDecade: 2 });
     const rms = rmsAgainstTruth(a);
-    expect(rms.joint).toBeLessThan(0.03); // issue 4: Prony reproduces G', G'' within 3 % RMS
+    expect(rms.joint).toBeLessThan(0.03); // model target, docs/conventions.md §7: Prony reproduces G', G'' within 3 % RMS
     expect(a.prony!.rmsRelativeError!).toBeLessThan(0.03);
   });
 
   it('buildMasterCurve() with default options fits a Prony series within 3 % RMS of the true G′ and of the true G″', () => {
-    // Known truth: the generator's own Prony model (core/synthetic), 2 % noise as in issue 4.
+    // Known truth: the generator's own Prony model (core/synthetic), 2 % noise as in docs/conventions.md §7.
     // Measured on this data: 2 modes per decade give G′ 0.8 %, G″ 1.2 % against the truth and
     // 2.1 % against the data; 1 per decade 1.7 %, 2.6 % and 3.0 % (the last one over the target).
     const { dataset } = make();
     const a = buildMasterCurve(dataset, { referenceTemperatureK: 373.15 });
     expect(a.settings.pronyModesPerDecade).toBe(2);
     const rms = rmsAgainstTruth(a);
-    expect(rms.storage).toBeLessThan(0.03); // issue 4 target: G′ within 3 % RMS
-    expect(rms.loss).toBeLessThan(0.03); // issue 4 target: G″ within 3 % RMS
+    expect(rms.storage).toBeLessThan(0.03); // target (docs/conventions.md §7): G′ within 3 % RMS
+    expect(rms.loss).toBeLessThan(0.03); // target (docs/conventions.md §7): G″ within 3 % RMS
     expect(a.prony!.rmsRelativeError!).toBeLessThan(0.03);
   });
 
@@ -189,7 +194,9 @@ describe('buildMasterCurve()', () => {
       verticalShift: 'density',
       density: { referenceDensityKgPerM3: 950, volumetricExpansionPerK: 6e-4 },
     });
-    a.curves.forEach((c, i) => expectAbsClose(c.log10bT!, truth.log10bT[i], 0.005, 'issue 3'));
+    a.curves.forEach((c, i) =>
+      expectAbsClose(c.log10bT!, truth.log10bT[i], 0.005, 'bT target, docs/conventions.md §7'),
+    );
   });
 
   it('buildMasterCurve() warns when the material is thermorheologically complex', () => {

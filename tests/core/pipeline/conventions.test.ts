@@ -8,7 +8,7 @@ describe('conventionCommentLines()', () => {
     expect(lines.join('\n')).toContain(CONVENTIONS.horizontal);
     expect(lines.join('\n')).toContain(CONVENTIONS.vertical);
   });
-  it('CONVENTIONS use the sign of DOMAIN.md: log10 aT < 0 above Tref, reduced = bT × measured', () => {
+  it('CONVENTIONS use the sign of docs/conventions.md §2: log10 aT < 0 above Tref, reduced = bT × measured', () => {
     expect(CONVENTIONS.horizontal).toContain('aT·ω');
     expect(CONVENTIONS.horizontal).toContain('log10 aT < 0 above Tref');
     expect(CONVENTIONS.vertical).toContain('reduced modulus = bT × measured modulus');

@@ -70,7 +70,7 @@ function run(seed: number) {
 }
 
 describe('shift-model bands through the real shift engine', () => {
-  // Acceptance (issue 10, item 4, end to end). Measured on seeds 1–400 (tests/…/model-coverage
+  // Acceptance (docs/conventions.md §7, end to end). Measured on seeds 1–400 (tests/…/model-coverage
   // set-up): GLS 95.1 % of 2800 (set, temperature) pairs, the diagonal weighting 88.6 % (WLF with
   // the reference isotherm measured: 95.9 % against 79.0 %). Here 120 seeds, to keep CI quick;
   // the effective sample is about the 120 sets (sd ≈ 2 %), so 90–98 % is a 2.5-sd window.

@@ -10,11 +10,8 @@ import { syntheticIsotherms } from '../../../core/synthetic';
 import { SEAL_DATA, SEAL_PRONY, sealLog10aT, TEN_YEARS_S } from './seal-fixture';
 import { importFiles } from '../../../core/io';
 import { buildMasterCurve } from '../../../core/pipeline';
-import {
-  arrheniusLog10aT,
-  densityFromExpansion,
-  entropicBT,
-} from '../../../core/models/shift-laws';
+import { arrheniusLog10aT } from '../../../core/models/shift-laws';
+import { densityFromExpansion, entropicBT } from '../../../core/data/reduction';
 import { pronyRelaxation, pronyStorage } from '../../../core/spectrum/prony-model';
 import {
   defaultPredictionModel,
@@ -143,8 +140,8 @@ describe('predictFromAnalysis() on a solid with known truth', () => {
       timeS: TEN_YEARS_S,
     });
     const expected = pronyRelaxation(SEAL_PRONY, TEN_YEARS_S / 10 ** sealLog10aT(T));
-    // 5 %: 1 % noise, the shift error at the coldest isotherm (≤ 0.02 decades, issue 3) and the
-    // Prony fit's own error (≤ 3 %, issue 4)
+    // 5 %: 1 % noise, the shift error at the coldest isotherm (≤ 0.02 decades, docs/conventions.md §7) and the
+    // Prony fit's own error (≤ 3 %, docs/conventions.md §7)
     expectRelClose(p.value, expected, 0.05, 'G(10 years) at 60 °C');
     expect(p.model).toBe('wlf');
     expect(p.unit).toBe('Pa');

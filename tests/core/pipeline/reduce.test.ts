@@ -17,7 +17,7 @@ function isotherm(id: string, T: number, aT: number, bT: number) {
     temperatureK: T,
     temperatureSpreadK: 0,
     x,
-    // measured at T: G(ω) = G_ref(aT·ω)/bT (DOMAIN.md §2)
+    // measured at T: G(ω) = G_ref(aT·ω)/bT (docs/conventions.md §2)
     quantities: {
       storageModulus: x.map((w) => gp(aT * w) / bT),
       lossModulus: x.map((w) => gpp(aT * w) / bT),

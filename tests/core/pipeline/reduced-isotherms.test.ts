@@ -7,7 +7,7 @@ import { expectAbsClose, expectRelClose } from '../../helpers/assert-close';
 const a = fixtureAnalysis();
 
 describe('isothermValues()', () => {
-  it('isothermValues() derives tan δ, δ, |G*| and |η*| from G′ and G″ (DOMAIN.md §1 definitions)', () => {
+  it('isothermValues() derives tan δ, δ, |G*| and |η*| from G′ and G″ (docs/conventions.md §1 definitions)', () => {
     const iso = a.dataset.isotherms[0];
     const [gp, gpp, w] = [
       iso.quantities.storageModulus![2],

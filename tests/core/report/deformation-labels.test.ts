@@ -8,7 +8,7 @@ import { analysisSummary } from '../../../core/pipeline/summary';
 import { fixtureAnalysis } from './analysis-fixture';
 
 // Tensile data must come out with E-symbols and shear data with G-symbols in every output, with
-// the deformation printed next to the Prony terms: E ≈ 3G for a rubber (DOMAIN.md §1), so tensile
+// the deformation printed next to the Prony terms: E ≈ 3G for a rubber (docs/conventions.md §1), so tensile
 // terms typed into a simulation as shear terms are off by about three.
 const MODES = [
   { mode: 'shear', own: ['G(t)', 'Ge', 'G0', 'g_i'], other: ['E(t)', 'Ee', 'E0', 'E_i'] },

@@ -7,7 +7,7 @@ import { masterCurveChart, isothermsChart } from '../../../core/report/charts';
 import { indicatorTable } from '../../../core/report/tables';
 import { reportHtml } from '../../../core/report/report-html';
 import { OUTPUT_FILE_SPECS } from '../../../core/report/output-files';
-import { toOutputFrequency } from '../../../core/report/output-units';
+import { toOutputFrequency } from '../../../core/units/output-units';
 
 // f = ω/2π: 1 Hz is one cycle per second, 2π rad/s (SI Brochure, BIPM 2019, §2.3.4).
 const a = fixtureAnalysis();

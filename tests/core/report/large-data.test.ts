@@ -4,7 +4,7 @@ import { pronyCsv } from '../../../core/report/csv/prony-csv';
 import type { Analysis } from '../../../core/pipeline/types';
 import { millionPointAnalysis } from '../../helpers/million-points';
 
-// Issue 9: no size limit but memory. 10⁶ measured points (and as many on the master curve)
+// Size (docs/conventions.md §7): no size limit but memory. 10⁶ measured points (and as many on the master curve)
 // through the spectrum step, the report's charts and the exports, without a stack overflow.
 describe('reportHtml() on 10⁶ points', () => {
   let a: Analysis;

@@ -1,5 +1,5 @@
 /**
- * Dense sweeps and closely spaced isotherms (issue 9): accuracy, warnings and honest standard
+ * Dense sweeps and closely spaced isotherms (docs/conventions.md §7): accuracy, warnings and honest standard
  * errors from 5 to 1000 points per decade, on invented seeded melts from core/synthetic with an
  * entropic bT (αV = 7e-4 /K, the order of polyolefin melts; common practice).
  */
@@ -39,7 +39,7 @@ const falseAlarms = (r: ShiftResult) => r.warnings.filter((w) => FALSE_ALARMS.in
 
 describe('shiftIsotherms() on dense sweeps', () => {
   it('shiftIsotherms() recovers 200 isotherms × 2000 points 0.4 K apart within 0.005 decades, without false alarms', () => {
-    // Issue 9: max |Δlog10 aT| ≤ 0.005 at 2 % noise; the chain of 199 neighbours is where the
+    // Dense target (docs/conventions.md §7): max |Δlog10 aT| ≤ 0.005 at 2 % noise; the chain of 199 neighbours is where the
     // rounding of a nearest-neighbour start used to add up (0.154 decades).
     const temps = Array.from({ length: 200 }, (_, k) => REFERENCE_K + 0.4 * k);
     const d = melt(temps, 1999 / 3, 21);
@@ -64,7 +64,7 @@ describe('shiftIsotherms() on dense sweeps', () => {
     },
   );
 
-  // RMS of (error / standard error) within 0.7–1.4 (issue 9) over 20 seeded sets of 8 isotherms
+  // RMS of (error / standard error) within 0.7–1.4 (docs/conventions.md §7) over 20 seeded sets of 8 isotherms
   // 10 K apart at each density: binned curves (above 40 points per decade) count their squares
   // and degrees of freedom per bin alike.
   it.each([5, 40, 200, 1000])(

@@ -51,7 +51,7 @@ export const RELAXING: PronySeries = spectrum(1e-4, 1e7, 1e12, 1e3, 0.9);
 export const WLF_UNIVERSAL: ShiftLaw = { kind: 'wlf', c1: 8.86, c2K: 101.6 };
 /**
  * Polybutadiene (96 % cis), T0 = 298 K: C1 = 3.44, C2 = 196.6 K (Physical Properties of Polymers
- * Handbook, J. E. Mark ed., table of WLF parameters; as quoted in DOMAIN.md §3).
+ * Handbook, J. E. Mark ed., table of WLF parameters; as quoted in docs/conventions.md §3).
  */
 export const WLF_POLYBUTADIENE: ShiftLaw = { kind: 'wlf', c1: 3.44, c2K: 196.6 };
 /** Melt flow activation energy 60 kJ/mol, the order quoted for branched polyethylene (from memory). */

@@ -1,5 +1,5 @@
 /**
- * Size (issue 9 and 14): 10⁶ points through the shift engine and the master curve, 10,000
+ * Size (docs/conventions.md §7): 10⁶ points through the shift engine and the master curve, 10,000
  * isotherms of three points each, and 10,000 that overlap nothing. Speed is measured by
  * `npm run bench -- vs`, never here; these tests check that big inputs come through right (a
  * spread of a 10⁶-element array, `Math.max(...x)`, would throw a RangeError here).

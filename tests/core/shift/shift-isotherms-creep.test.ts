@@ -17,7 +17,7 @@ const SEEDS = [1, 2, 3, 4, 5];
 const aTs = (r: ShiftResult): (number | null)[] => r.curves.map((c) => c.log10aT);
 
 describe('shiftIsotherms() on creep data', () => {
-  // The bounds of issue 3 for relaxation data, applied to creep: 0.02 decades at 2 % noise;
+  // The bounds of docs/conventions.md §7 for relaxation data, applied to creep: 0.02 decades at 2 % noise;
   // 0.05 decades at 8 % noise with 30 %-noise early points on two isotherms.
   const row = (c: CreepCase, noise: number, disturbed: boolean, tol: number) =>
     [c.name, noise * 100, disturbed ? ' + disturbed early points' : '', tol, c] as const;

@@ -26,7 +26,7 @@ const aTs = (r: ShiftResult): (number | null)[] => r.curves.map((c) => c.log10aT
 const codes = (r: ShiftResult): string[] => r.warnings.map((w) => w.code);
 
 describe('shiftIsotherms()', () => {
-  // Tolerances are those of issue 3: 0.02 decades at 2 % noise; 0.05 decades at 8 % noise with
+  // Tolerances are the shift targets of docs/conventions.md §7: 0.02 decades at 2 % noise; 0.05 decades at 8 % noise with
   // 30 %-noise low-frequency (low-torque) points on two isotherms.
   const row = (c: Case, noise: number, lowTorque: boolean, tol: number) =>
     [c.name, noise * 100, lowTorque ? ' + low-torque points' : '', tol, c] as const;
@@ -346,7 +346,7 @@ describe('shiftIsotherms()', () => {
     expect(JSON.parse(JSON.stringify(r))).toEqual(r);
     expect(r.convention).toContain('t_r = t/aT');
     expect(r.abscissa).toBe('time');
-    // Above Tref the material is faster: log10 aT < 0 (DOMAIN.md §2).
+    // Above Tref the material is faster: log10 aT < 0 (docs/conventions.md §2).
     r.curves.forEach((c) => {
       if (c.temperatureK > 300) expect(c.log10aT!).toBeLessThan(0);
       if (c.temperatureK < 300) expect(c.log10aT!).toBeGreaterThan(0);

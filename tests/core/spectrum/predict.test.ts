@@ -36,7 +36,7 @@ describe('predictQuantity()', () => {
     expect(p.cautions).toEqual([...STANDING_CAUTIONS]);
   });
 
-  // The design query of DOMAIN.md §5: relaxed modulus after ten years at 60 °C, t_r = t/aT.
+  // The design query of docs/conventions.md §5: relaxed modulus after ten years at 60 °C, t_r = t/aT.
   it('predictQuantity() gives the relaxed modulus after ten years at 60 °C through t_r = t/aT(60 °C)', () => {
     const t = 10 * 365.25 * 86400;
     const T = 333.15;

@@ -44,7 +44,7 @@ describe('fitProny()', () => {
     expectAbsClose(f.fitError.storageRms, 0, 1e-6);
   });
 
-  // Acceptance (issue 4): G' and G'' reproduced within 3 % RMS on synthetic master-curve data
+  // Acceptance (docs/conventions.md §7): G' and G'' reproduced within 3 % RMS on synthetic master-curve data
   // with 2 % noise (8 isotherms, WLF shifts, 2 modes per decade).
   it('fitProny() reproduces G′ and G″ within 3 % RMS on a noisy synthetic master curve', () => {
     const { prony, x, storage, loss } = syntheticMaster(0.02, 11);
@@ -193,7 +193,7 @@ describe('fitProny()', () => {
     expect(() => fitProny({ x: [1], storage: [1] })).toThrow(/two usable/);
   });
 
-  // Issue 9: no size limit but memory. 10⁶ points are log-binned (20 a decade) before the fit;
+  // Size (docs/conventions.md §7): no size limit but memory. 10⁶ points are log-binned (20 a decade) before the fit;
   // one absurd point at 1e-300 rad/s neither stretches the τ grid nor enters the fit.
   it('fitProny() fits 10⁶ points through its bins, and one absurd point does not stretch the τ grid', () => {
     const truth = inventedWlfProny();

@@ -3,7 +3,7 @@ import { mount } from '@vue/test-utils';
 import ModelsView from '../../../app/renderer/src/components/ModelsView.vue';
 import { fixtureAnalysis } from '../../core/report/analysis-fixture';
 
-// Tensile terms shown as shear terms are off by about three (E ≈ 3G for a rubber, DOMAIN.md §1):
+// Tensile terms shown as shear terms are off by about three (E ≈ 3G for a rubber, docs/conventions.md §1):
 // the Models view prints the deformation next to the Prony terms and uses its symbols.
 describe('ModelsView', () => {
   it.each([

@@ -3,7 +3,7 @@
  * spans three decades or fewer, 2 and 5 multiples are added so there are always a few labels;
  * over very wide spans only every k-th decade is labelled.
  */
-import { superscript } from '../../../../core/report/format';
+import { superscript } from '@core/report';
 
 export interface LogTick {
   value: number;

@@ -5,8 +5,8 @@
  * window (zoom) becomes the axis domain. The PNG export rasterises this same figure, so both
  * files carry the title, legend, colour bar, Tref and units.
  */
-import type { ChartSpec, LineStyle, Marker } from '../../../../core/report/svg/chart-types';
-import { renderChart } from '../../../../core/report/svg/render-chart';
+import type { ChartSpec, LineStyle, Marker } from '@core/report';
+import { renderChart } from '@core/report';
 import type { PlotSpec, PlotWindow, SeriesStyle } from './plot-spec';
 
 const MARKS: Record<SeriesStyle, { marker: Marker; line: LineStyle }> = {

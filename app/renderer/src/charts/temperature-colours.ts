@@ -2,8 +2,8 @@
  * One colour per temperature, the same in every plot and in the report: the ramp of
  * core/report/svg/colour.ts (cold blue → hot brick red) over the dataset's temperature range.
  */
-import { rampStops, temperatureColour } from '../../../../core/report/svg/colour';
-import { extent } from '../../../../core/data/extent';
+import { rampStops, temperatureColour } from '@core/report';
+import { extent } from '@core/data';
 
 export interface TemperatureScale {
   colour(temperatureK: number): string;

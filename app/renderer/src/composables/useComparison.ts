@@ -5,12 +5,12 @@
  * place from core/synthetic (the same files as samples/lot-release/).
  */
 import { shallowRef, computed } from 'vue';
-import { importFiles } from '../../../../core/io';
-import { buildMasterCurve } from '../../../../core/pipeline';
-import type { Analysis } from '../../../../core/pipeline/types';
-import { compareAnalyses, parseSpecification, type Specification } from '../../../../core/compare';
-import type { Comparison } from '../../../../core/compare';
-import { lotReleaseFiles } from '../../../../core/synthetic/lot-release';
+import { importFiles } from '@core/io';
+import { buildMasterCurve } from '@core/pipeline';
+import type { Analysis } from '@core/pipeline';
+import { compareAnalyses, parseSpecification, type Specification } from '@core/compare';
+import type { Comparison } from '@core/compare';
+import { lotReleaseFiles } from '@core/synthetic';
 import { parseAnalysis, ANALYSIS_FILE_SUFFIX } from '../document/analysis-file';
 import type { TextFile } from '../platform/file-access';
 

@@ -3,7 +3,7 @@
  * drag a curve (the rest re-fitted around it, live while dragging), mask points, change settings.
  */
 import type { ShallowRef } from 'vue';
-import type { Analysis } from '../../../../core/pipeline/types';
+import type { Analysis } from '@core/pipeline';
 import {
   setLocked,
   toggleExcluded,

@@ -3,7 +3,7 @@
  * message for the user (`notify`), never an exception in the console only.
  */
 import { ref, type Ref, type ShallowRef } from 'vue';
-import type { Analysis } from '../../../../core/pipeline/types';
+import type { Analysis } from '@core/pipeline';
 import type { AnalysisDocument } from '../document/analysis-document';
 import { newDocument } from '../document/analysis-document';
 import {
@@ -15,8 +15,8 @@ import {
 import { exportName, fileStem } from '../exports/export-files';
 import { bytesToBase64, zipFiles, type ZipEntry } from '../exports/zip-exports';
 import { unitsFromImport } from '../format/display-units';
-import { isInventedDemo } from '../../../../core/synthetic/demo-header';
-import { OUTPUT_FILE_SPECS, type OutputFileSpec } from '../../../../core/report/output-files';
+import { isInventedDemo } from '@core/synthetic';
+import { OUTPUT_FILE_SPECS, type OutputFileSpec } from '@core/report';
 import type { FileAccess, RecentEntry, TextFile } from '../platform/file-access';
 import type { UseImportSessionReturn } from './useImportSession';
 import type { UseWorkbenchReturn } from './useWorkbench';

@@ -4,7 +4,7 @@
  * Every edit re-runs the import in the worker; nothing is applied until the user accepts.
  */
 import { ref, shallowRef, type Ref, type ShallowRef } from 'vue';
-import type { ColumnMapping, ImportOptions, ImportResult } from '../../../../core/io/types';
+import type { ColumnMapping, ImportOptions, ImportResult } from '@core/io';
 import type { UseEngineReturn } from '../engine/useEngine';
 import type { TextFile } from '../platform/file-access';
 

@@ -4,7 +4,7 @@
  * a drag previews through `preview()` and commits once on release.
  */
 import { computed, shallowRef, ref, type ComputedRef, type Ref, type ShallowRef } from 'vue';
-import type { Analysis } from '../../../../core/pipeline/types';
+import type { Analysis } from '@core/pipeline';
 import type { AnalysisDocument } from '../document/analysis-document';
 import {
   createHistory,

@@ -3,8 +3,8 @@
  * masks, locked shifts). Everything the pipeline needs to repeat the analysis, and nothing it
  * computes. Stored immutably: every edit makes a new document (history.ts keeps the old ones).
  */
-import type { DataWarning, Dataset } from '../../../../core/data/types';
-import type { AnalysisOptions } from '../../../../core/pipeline/options';
+import type { DataWarning, Dataset } from '@core/data';
+import type { AnalysisOptions } from '@core/pipeline';
 import { SI_DISPLAY, type DisplayUnits } from '../format/display-units';
 
 /** The serialisable options (no progress callback; import warnings are kept beside them). */

@@ -14,8 +14,8 @@
  * Numbers that are NaN (missing values) are written as null and read back as NaN.
  */
 import { z } from 'zod';
-import { analysisOptionsSchema } from '../../../../core/pipeline/options';
-import { THERMOSHIFT_VERSION } from '../../../../core/pipeline/version';
+import { analysisOptionsSchema } from '@core/pipeline';
+import { THERMOSHIFT_VERSION } from '@core/pipeline';
 import type { AnalysisDocument } from './analysis-document';
 import { datasetSchema } from './dataset-schema';
 import { fileStem } from '../exports/export-files';

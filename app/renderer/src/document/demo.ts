@@ -4,7 +4,7 @@
  * invented), imported like any file, with the reference temperature and density of its scenario.
  */
 import demoCsv from '../../../../samples/melt-long/hx310-melt-sweeps.csv?raw';
-import { celsiusToKelvin } from '../../../../core/data/quantities';
+import { celsiusToKelvin } from '@core/data';
 import type { UseEngineReturn } from '../engine/useEngine';
 import { newDocument, type AnalysisDocument } from './analysis-document';
 

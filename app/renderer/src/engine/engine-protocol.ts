@@ -2,9 +2,9 @@
  * Messages between the renderer and the analysis worker. Requests carry plain data only (a
  * Dataset, options, file texts); results are the core's plain JSON results.
  */
-import type { DataWarning, Dataset } from '../../../../core/data/types';
-import type { ImportOptions, ImportResult } from '../../../../core/io/types';
-import type { Analysis } from '../../../../core/pipeline/types';
+import type { DataWarning, Dataset } from '@core/data';
+import type { ImportOptions, ImportResult } from '@core/io';
+import type { Analysis } from '@core/pipeline';
 import type { DocumentOptions } from '../document/analysis-document';
 import type { TextFile } from '../platform/file-access';
 

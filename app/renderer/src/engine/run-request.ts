@@ -2,8 +2,8 @@
  * Runs one engine request with the core: the same code in the worker and (where workers are
  * unavailable, e.g. component tests) on the main thread. Errors become messages, never throws.
  */
-import { importFiles } from '../../../../core/io';
-import { buildMasterCurve } from '../../../../core/pipeline';
+import { importFiles } from '@core/io';
+import { buildMasterCurve } from '@core/pipeline';
 import type { EngineRequest, EngineResult } from './engine-protocol';
 
 export function runRequest(

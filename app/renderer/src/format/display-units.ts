@@ -4,13 +4,9 @@
  * Inside, everything stays SI; conversion happens only here, on the way to the screen or a file.
  * The default follows the units the data came in.
  */
-import type { AbscissaKind } from '../../../../core/data/types';
-import type { ImportResult } from '../../../../core/io/types';
-import {
-  MODULUS_UNITS,
-  modulusFactor,
-  type ModulusUnit,
-} from '../../../../core/report/output-units';
+import type { AbscissaKind } from '@core/data';
+import type { ImportResult } from '@core/io';
+import { MODULUS_UNITS, modulusFactor, type ModulusUnit } from '@core/units';
 
 export type FrequencyUnit = 'rad/s' | 'Hz';
 export const FREQUENCY_UNITS: readonly FrequencyUnit[] = ['rad/s', 'Hz'];

@@ -6,7 +6,7 @@
  * measurement, §7.2.6: "it usually suffices to quote the uncertainty to at most two significant
  * digits"). Plain e-notation (spreadsheet-readable) only in copied and exported text.
  */
-import { superscript } from '../../../../core/report/format';
+import { superscript } from '@core/report';
 
 export const MISSING = '–';
 

@@ -3,7 +3,7 @@
  * the desktop app (IPC to Electron main, which owns the dialogs and paths) and the plain browser
  * (file inputs, Blob downloads, IndexedDB and localStorage). Components only see this interface.
  */
-import { isWorkbookName, workbookToSourceFiles } from '../../../../core/io/workbook';
+import { isWorkbookName, workbookToSourceFiles } from '@core/io';
 import type {
   RecentEntry,
   RecentOpened,

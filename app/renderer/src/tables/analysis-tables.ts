@@ -4,8 +4,8 @@
  * to the digits the error supports (format/numbers.ts), the error itself to two significant
  * digits, other figures to four. Moduli are in the display unit, stated in the header.
  */
-import type { Analysis, ModelFitStats } from '../../../../core/pipeline/types';
-import { toCelsius } from '../../../../core/pipeline/temperature';
+import type { Analysis, ModelFitStats } from '@core/pipeline';
+import { toCelsius } from '@core/pipeline';
 import { SI_DISPLAY, toDisplay, type DisplayUnits } from '../format/display-units';
 import { digitsForError } from '../format/numbers';
 import type { Cell, Rounded } from './tsv';
@@ -26,7 +26,7 @@ const celsius = (k: number): Rounded => {
   const c = toCelsius(k);
   return { value: c, digits: Math.max(1, Math.floor(Math.log10(Math.abs(c) || 1)) + 3) };
 };
-import { pronySymbols } from '../../../../core/spectrum/prony-symbols';
+import { pronySymbols } from '@core/spectrum';
 
 export interface PlainTable {
   header: string[];

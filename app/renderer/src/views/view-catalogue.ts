@@ -3,8 +3,8 @@
  * available, and how its plot is built (the plot specs draw; the maths is core's). The tab bar,
  * the keyboard shortcuts, the help and the browser tests all read this list.
  */
-import type { IsothermState } from '../../../../core/pipeline/isotherm-states';
-import type { Analysis } from '../../../../core/pipeline/types';
+import type { IsothermState } from '@core/pipeline';
+import type { Analysis } from '@core/pipeline';
 import type { PlotSpec } from '../charts/plot-spec';
 import { arrheniusSpec } from '../charts/specs/arrhenius-plot';
 import { coleColePlot, lossTangentPlot, overlapResidualsPlot } from '../charts/specs/check-plots';

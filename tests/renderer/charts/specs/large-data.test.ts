@@ -12,7 +12,7 @@ const drawn = (p: PlotSpec): number =>
     .filter((s) => s.style === 'disc' || s.style === 'ring')
     .reduce((n, s) => n + s.points.length, 0);
 
-// Issue 9: 10⁶ points through the app's plot specs without a stack overflow; what is drawn is
+// Size (docs/conventions.md §7): 10⁶ points through the app's plot specs without a stack overflow; what is drawn is
 // thinned to one point per grid cell, and the title says so.
 describe('plot specs on 10⁶ points', () => {
   let a: Analysis;

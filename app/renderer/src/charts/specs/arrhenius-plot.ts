@@ -3,15 +3,15 @@
  * activation energy of the Arrhenius fit read off in the title (a straight line means Arrhenius
  * behaviour; WLF curves). The coordinates come from core (arrheniusPlot).
  */
-import { arrheniusPlot } from '../../../../../core/pipeline/arrhenius-plot';
-import type { IsothermState } from '../../../../../core/pipeline/isotherm-states';
-import type { Analysis } from '../../../../../core/pipeline/types';
-import { toCelsius } from '../../../../../core/pipeline/temperature';
+import { arrheniusPlot } from '@core/pipeline';
+import type { IsothermState } from '@core/pipeline';
+import type { Analysis } from '@core/pipeline';
+import { toCelsius } from '@core/pipeline';
 import { formatWithError } from '../../format/numbers';
 import type { PlotSeries, PlotSpec } from '../plot-spec';
 import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';
 import { MODEL_COLOURS, MODEL_NAMES, TG_COLOUR, verticalLine } from './shift-plot';
-import { extent } from '../../../../../core/data/extent';
+import { extent } from '@core/data';
 
 export function arrheniusSpec(a: Analysis, states?: readonly IsothermState[]): PlotSpec {
   const p = arrheniusPlot(a);

@@ -5,26 +5,22 @@
  * from core (coleColeSeries, lossTangentSeries, overlapResiduals); this styles them, with
  * left-out isotherms faded.
  */
-import { appliedVertical } from '../../../../../core/pipeline/vertical-at';
-import { quantitySymbol } from '../../../../../core/data/quantities';
-import type { QuantityId } from '../../../../../core/data/types';
-import type { IsothermState } from '../../../../../core/pipeline/isotherm-states';
-import { overlapResiduals } from '../../../../../core/pipeline/overlap-residuals';
-import {
-  coleColeSeries,
-  lossTangentSeries,
-  type CheckSeries,
-} from '../../../../../core/pipeline/superposition-plots';
-import type { Analysis } from '../../../../../core/pipeline/types';
-import { toCelsius } from '../../../../../core/pipeline/temperature';
-import { formatFixed } from '../../../../../core/report/format';
+import { appliedVertical } from '@core/pipeline';
+import { quantitySymbol } from '@core/data';
+import type { QuantityId } from '@core/data';
+import type { IsothermState } from '@core/pipeline';
+import { overlapResiduals } from '@core/pipeline';
+import { coleColeSeries, lossTangentSeries, type CheckSeries } from '@core/pipeline';
+import type { Analysis } from '@core/pipeline';
+import { toCelsius } from '@core/pipeline';
+import { formatFixed } from '@core/report';
 import { abscissaFactor, SI_DISPLAY, type DisplayUnits } from '../../format/display-units';
 import { formatSig } from '../../format/numbers';
 import type { PlotSeries, PlotSpec } from '../plot-spec';
 import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';
 import { celsiusText, inDisplay, unitOf, xAxisLabel, xText } from './plot-labels';
 import { plotQuantities, QUANTITY_STYLE } from './measured-plot';
-import { extent } from '../../../../../core/data/extent';
+import { extent } from '@core/data';
 
 function checkSeries(
   a: Analysis,

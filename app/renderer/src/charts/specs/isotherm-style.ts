@@ -3,9 +3,9 @@
  * shows — used isotherms in full colour, excluded and left-out ones faded (never hidden) with
  * the reason on hover.
  */
-import type { Dataset } from '../../../../../core/data/types';
-import type { IsothermState } from '../../../../../core/pipeline/isotherm-states';
-import { toCelsius } from '../../../../../core/pipeline/temperature';
+import type { Dataset } from '@core/data';
+import type { IsothermState } from '@core/pipeline';
+import { toCelsius } from '@core/pipeline';
 import type { PlotSeries, PlotSpec } from '../plot-spec';
 import { temperatureScale, type TemperatureScale } from '../temperature-colours';
 

@@ -5,14 +5,14 @@
  * that are not in the fit and the engine's outlier points are drawn faded. Curves can be dragged
  * sideways. The points and curves come from core (reducedIsotherms, pronyCurve).
  */
-import { appliedVertical } from '../../../../../core/pipeline/vertical-at';
-import { quantitySymbol } from '../../../../../core/data/quantities';
-import type { QuantityId } from '../../../../../core/data/types';
-import type { IsothermState } from '../../../../../core/pipeline/isotherm-states';
-import { pronyCurve } from '../../../../../core/pipeline/prony-curves';
-import { hasQuantity, reducedIsotherms } from '../../../../../core/pipeline/reduced-isotherms';
-import type { Analysis } from '../../../../../core/pipeline/types';
-import { toCelsius } from '../../../../../core/pipeline/temperature';
+import { appliedVertical } from '@core/pipeline';
+import { quantitySymbol } from '@core/data';
+import type { QuantityId } from '@core/data';
+import type { IsothermState } from '@core/pipeline';
+import { pronyCurve } from '@core/pipeline';
+import { hasQuantity, reducedIsotherms } from '@core/pipeline';
+import type { Analysis } from '@core/pipeline';
+import { toCelsius } from '@core/pipeline';
 import { abscissaFactor, SI_DISPLAY, type DisplayUnits } from '../../format/display-units';
 import type { PlotSeries, PlotSpec } from '../plot-spec';
 import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';

@@ -3,13 +3,13 @@
  * and excluded or left-out isotherms stay visible (faint, with the reason on hover) so they can
  * be brought back.
  */
-import type { Dataset, QuantityId } from '../../../../../core/data/types';
-import type { IsothermState } from '../../../../../core/pipeline/isotherm-states';
+import type { Dataset, QuantityId } from '@core/data';
+import type { IsothermState } from '@core/pipeline';
 import type { DocumentOptions } from '../../document/analysis-document';
 import { abscissaFactor, SI_DISPLAY, type DisplayUnits } from '../../format/display-units';
 import type { PlotSeries, PlotSpec, SeriesStyle } from '../plot-spec';
 import { celsiusText, inDisplay, valueText, xAxisLabel, xText, yAxisLabel } from './plot-labels';
-import { quantitySymbol } from '../../../../../core/data/quantities';
+import { quantitySymbol } from '@core/data';
 import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';
 import { plotThinner } from './thin-series';
 

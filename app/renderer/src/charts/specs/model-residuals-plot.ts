@@ -3,12 +3,12 @@
  * decades, from core's fits), with the isotherm's ±1 s.e.: a pattern with temperature says the
  * model does not suit the data range; scatter within the error bars says it does.
  */
-import type { Analysis } from '../../../../../core/pipeline/types';
-import { toCelsius } from '../../../../../core/pipeline/temperature';
-import { formatFixed } from '../../../../../core/report/format';
+import type { Analysis } from '@core/pipeline';
+import { toCelsius, SHIFT_MODEL_KINDS } from '@core/pipeline';
+import { formatFixed } from '@core/report';
 import type { PlotSeries, PlotSpec } from '../plot-spec';
 import { MODEL_COLOURS, MODEL_NAMES } from './shift-plot';
-import { maxOf, minOf } from '../../../../../core/data/extent';
+import { maxOf, minOf } from '@core/data';
 
 const STYLES = { wlf: 'disc', arrhenius: 'ring', polynomial: 'disc' } as const;
 
@@ -17,7 +17,7 @@ export function modelResidualsPlot(a: Analysis): PlotSpec {
   const series: PlotSeries[] = [];
   const legend: PlotSpec['legend'] = [];
   const ts: number[] = [];
-  for (const kind of ['wlf', 'arrhenius', 'polynomial'] as const) {
+  for (const kind of SHIFT_MODEL_KINDS) {
     const m = a.models[kind];
     if (!m || m.residuals.length === 0) continue;
     const rs = [...m.residuals].sort((p, q) => p.temperatureK - q.temperatureK);

@@ -2,9 +2,9 @@
  * Labels and read-out text shared by the plot specs, in the display units (moduli in Pa … GPa,
  * frequency in rad/s or Hz); numbers in the app's one format (format/numbers.ts).
  */
-import { quantitySymbol, quantityUnit } from '../../../../../core/data/quantities';
-import type { AbscissaKind, DeformationMode, QuantityId } from '../../../../../core/data/types';
-import { toCelsius } from '../../../../../core/pipeline/temperature';
+import { quantitySymbol, quantityUnit } from '@core/data';
+import type { AbscissaKind, DeformationMode, QuantityId } from '@core/data';
+import { toCelsius } from '@core/pipeline';
 import { toDisplay, type DisplayUnits } from '../../format/display-units';
 import { formatSig } from '../../format/numbers';
 

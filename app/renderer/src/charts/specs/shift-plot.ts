@@ -4,13 +4,14 @@
  * fitted above Tg do not hold below it). Isotherms that are not in the fit are drawn as faded
  * rings.
  */
-import type { IsothermState } from '../../../../../core/pipeline/isotherm-states';
-import type { Analysis } from '../../../../../core/pipeline/types';
-import { toCelsius } from '../../../../../core/pipeline/temperature';
+import { SHIFT_MODEL_KINDS } from '@core/pipeline';
+import type { IsothermState } from '@core/pipeline';
+import type { Analysis } from '@core/pipeline';
+import { toCelsius } from '@core/pipeline';
 import { formatWithError } from '../../format/numbers';
 import type { PlotBand, PlotSeries, PlotSpec } from '../plot-spec';
 import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';
-import { maxOf, minOf } from '../../../../../core/data/extent';
+import { maxOf, minOf } from '@core/data';
 
 export const MODEL_COLOURS = {
   wlf: '#23676b',
@@ -52,7 +53,7 @@ export function shiftPlot(a: Analysis, states?: readonly IsothermState[]): PlotS
   const legend: PlotSpec['legend'] = [
     { label: 'log10 aT of an isotherm (±1 s.e.)', colour: '#4a5358', style: 'disc' },
   ];
-  for (const kind of ['wlf', 'arrhenius', 'polynomial'] as const) {
+  for (const kind of SHIFT_MODEL_KINDS) {
     const m = a.models[kind];
     if (!m) continue;
     const x = m.band.temperatureK.map(toCelsius);

@@ -3,9 +3,9 @@
  * drawn as a line, with the Prony terms g_i at their relaxation times τ_i as discs; the
  * equilibrium modulus Ge is stated in the legend. Moduli in the display unit.
  */
-import { relaxationSpectrum } from '../../../../../core/pipeline/relaxation-spectrum';
-import type { Analysis } from '../../../../../core/pipeline/types';
-import { toCelsius } from '../../../../../core/pipeline/temperature';
+import { relaxationSpectrum } from '@core/pipeline';
+import type { Analysis } from '@core/pipeline';
+import { toCelsius } from '@core/pipeline';
 import { SI_DISPLAY, type DisplayUnits } from '../../format/display-units';
 import { formatSig } from '../../format/numbers';
 import type { PlotSpec } from '../plot-spec';

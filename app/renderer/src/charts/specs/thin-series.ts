@@ -5,7 +5,7 @@
  * objects are made for the kept points only. Lines (model curves) are never thinned; the plot's
  * title says how many points are shown.
  */
-import { decimatedIndices } from '../../../../../core/report/decimate';
+import { decimatedIndices } from '@core/report';
 
 /** Marker points a plot draws in full; above this it draws a thinned copy. */
 export const DRAW_LIMIT = 20000;

@@ -3,10 +3,10 @@
  * order (bT·ln 10·s.e. of log10 bT). Large or erratic bT is itself a sign that superposition
  * fails; with bT from density the points lie on Tref·ρref/(T·ρ).
  */
-import { appliedVertical } from '../../../../../core/pipeline/vertical-at';
-import type { IsothermState } from '../../../../../core/pipeline/isotherm-states';
-import type { Analysis } from '../../../../../core/pipeline/types';
-import { toCelsius } from '../../../../../core/pipeline/temperature';
+import { appliedVertical } from '@core/pipeline';
+import type { IsothermState } from '@core/pipeline';
+import type { Analysis } from '@core/pipeline';
+import { toCelsius } from '@core/pipeline';
 import { formatWithError } from '../../format/numbers';
 import type { PlotSeries, PlotSpec } from '../plot-spec';
 import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';

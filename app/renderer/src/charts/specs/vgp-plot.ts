@@ -4,11 +4,11 @@
  * superposition; a fan of lines says it fails. With a vertical shift, |G*| is multiplied by bT.
  * The points come from core (vanGurpPalmenSeries); this only styles them.
  */
-import { appliedVertical } from '../../../../../core/pipeline/vertical-at';
-import { quantitySymbol } from '../../../../../core/data/quantities';
-import type { IsothermState } from '../../../../../core/pipeline/isotherm-states';
-import type { Analysis } from '../../../../../core/pipeline/types';
-import { vanGurpPalmenSeries } from '../../../../../core/pipeline/van-gurp-palmen';
+import { appliedVertical } from '@core/pipeline';
+import { quantitySymbol } from '@core/data';
+import type { IsothermState } from '@core/pipeline';
+import type { Analysis } from '@core/pipeline';
+import { vanGurpPalmenSeries } from '@core/pipeline';
 import { SI_DISPLAY, type DisplayUnits } from '../../format/display-units';
 import { formatSig } from '../../format/numbers';
 import type { PlotSeries, PlotSpec } from '../plot-spec';

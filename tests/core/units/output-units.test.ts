@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { modulusFactor, outputUnitLabel, toOutputUnit } from '../../../core/report/output-units';
+import { modulusFactor, outputUnitLabel, toOutputUnit } from '../../../core/units/output-units';
 import { expectRelClose } from '../../helpers/assert-close';
 
 describe('toOutputUnit()', () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { studentTCdf, studentTQuantile } from '../../../core/models/student-t';
+import { studentTCdf, studentTQuantile } from '../../../core/numeric/student-t';
 import { expectAbsClose } from '../../helpers/assert-close';
 
 // Critical values t(0.975, ν) and t(0.95, ν) as tabulated (3 decimals) in the NIST/SEMATECH
