@@ -6,6 +6,7 @@
  * differences in shift-model constants and indicators, and — with a specification — a verdict per
  * criterion. Pure: no I/O. The method and its limits: docs/compare.md.
  */
+import { celsiusToKelvin, kelvinToCelsius } from '../data/temperature';
 import type { QuantityId } from '../data/types';
 import type { Analysis } from '../pipeline/types';
 import { COMPARED_QUANTITIES, MAPPED_QUANTITIES, smoothOnGrid } from './curve-grid';
@@ -129,9 +130,9 @@ export function compareAnalyses(
   for (const c of o.spec?.criteria ?? [])
     if (
       c.kind === 'shiftFactor' &&
-      !shiftTemps.some((t) => Math.abs(t - (c.temperature + 273.15)) < 1e-6)
+      !shiftTemps.some((t) => Math.abs(t - celsiusToKelvin(c.temperature)) < 1e-6)
     )
-      shiftTemps.push(c.temperature + 273.15);
+      shiftTemps.push(celsiusToKelvin(c.temperature));
   const refQ = quantitiesOf(reference);
   const ref = prepare(reference, T, refQ, o);
   const zDiff = bonferroniZ(2);
@@ -153,7 +154,7 @@ export function compareAnalyses(
     );
     if (differences.every((d) => d.log10x.length === 0))
       warnings.push(
-        `${a.sample.name}: no common reduced window with the reference at ${(T - 273.15).toFixed(1)} °C`,
+        `${a.sample.name}: no common reduced window with the reference at ${kelvinToCelsius(T).toFixed(1)} °C`,
       );
     const pairs = MAPPED_QUANTITIES.filter((q) => qs.includes(q)).map((q) => ({
       quantity: q,

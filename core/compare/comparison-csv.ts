@@ -3,6 +3,7 @@
  * differences (one row per sample, quantity and grid node). Numbers with six significant digits;
  * text quoted when it holds a comma, quote or line break (RFC 4180).
  */
+import { kelvinToCelsius } from '../data/temperature';
 import type { Comparison } from './types';
 
 const cell = (v: string | number | null | boolean): string => {
@@ -59,7 +60,7 @@ export function verdictsCsv(c: Comparison): string {
 export function comparisonCsv(c: Comparison): string {
   const xName = c.abscissa === 'time' ? 'reduced_time_s' : 'reduced_frequency_rad_per_s';
   const lines = [
-    `# Thermoshift comparison at ${(c.referenceTemperatureK - 273.15).toFixed(2)} °C; reference: ${c.reference.name}`,
+    `# Thermoshift comparison at ${kelvinToCelsius(c.referenceTemperatureK).toFixed(2)} °C; reference: ${c.reference.name}`,
     row(['sample', 'quantity', xName, 'log10_difference', 'std_err_decades', 'difference_percent']),
   ];
   for (const s of c.comparisons)

@@ -5,6 +5,7 @@
  * band and the specification band, the verdict table with the reason of every criterion, the
  * figures of the comparison, and the cautions.
  */
+import { kelvinToCelsius } from '../data/temperature';
 import { escapeHtml as esc } from '../report/escape';
 import { htmlTable, type TableSpec } from '../report/html-table';
 import { REPORT_CSS } from '../report/styles';
@@ -52,7 +53,7 @@ export function overlayChart(c: Comparison): ChartSpec {
   });
   return {
     id: 'compare-overlay',
-    title: `${q === 'storageModulus' ? 'Storage modulus' : 'Relaxation modulus'} at ${(c.referenceTemperatureK - 273.15).toFixed(1)} °C`,
+    title: `${q === 'storageModulus' ? 'Storage modulus' : 'Relaxation modulus'} at ${kelvinToCelsius(c.referenceTemperatureK).toFixed(1)} °C`,
     width: 640,
     height: 380,
     x: {
@@ -183,7 +184,7 @@ export function figuresTable(c: Comparison): TableSpec {
 export function comparisonReportHtml(c: Comparison, o: ComparisonReportOptions): string {
   const title = o.title ?? `Comparison report — ${c.reference.name}`;
   const body = [
-    `<header><h1>${esc(title)}</h1><p>Reference: ${esc(c.reference.name)}; samples: ${esc(c.samples.map((s) => s.name).join(', '))}; common reference temperature ${esc((c.referenceTemperatureK - 273.15).toFixed(1))} °C${c.specName ? `; specification: ${esc(c.specName)}` : ''}.</p></header>`,
+    `<header><h1>${esc(title)}</h1><p>Reference: ${esc(c.reference.name)}; samples: ${esc(c.samples.map((s) => s.name).join(', '))}; common reference temperature ${esc(kelvinToCelsius(c.referenceTemperatureK).toFixed(1))} °C${c.specName ? `; specification: ${esc(c.specName)}` : ''}.</p></header>`,
     `<section id="cautions"><h2>Cautions</h2><ul>${[...c.cautions, ...CAUTIONS].map((x) => `<li>${esc(x)}</li>`).join('')}</ul></section>`,
     '<section id="verdict-summary"><h2>Verdicts</h2>',
     ...c.comparisons.map((s) => {

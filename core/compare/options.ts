@@ -1,4 +1,5 @@
 /** Options of `compareAnalyses`, with their defaults applied in one place. */
+import { celsiusToKelvin } from '../data/temperature';
 import type { ShiftModelKind } from '../models/types';
 import type { Specification } from './spec-schema';
 
@@ -42,7 +43,9 @@ export function resolveCompareOptions(
   ownReferenceK: number,
 ): ResolvedCompareOptions {
   const specK =
-    o.spec?.referenceTemperature !== undefined ? o.spec.referenceTemperature + 273.15 : undefined;
+    o.spec?.referenceTemperature !== undefined
+      ? celsiusToKelvin(o.spec.referenceTemperature)
+      : undefined;
   const T = o.referenceTemperatureK ?? specK ?? ownReferenceK;
   if (!(T > 0) || !Number.isFinite(T))
     throw new CompareError(

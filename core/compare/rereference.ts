@@ -7,8 +7,9 @@
  * multiplied by aT(T*)/bT(T*), tan δ is unchanged. The standard error of log10 aT(T*) comes
  * from the model's band (delta method, full covariance; core/models shiftModelBand).
  */
+import { kelvinToCelsius } from '../data/temperature';
 import type { QuantityId } from '../data/types';
-import type { ShiftModelKind } from '../models/types';
+import { SHIFT_MODEL_KINDS, type ShiftModelKind } from '../models/types';
 import { shiftModelBand } from '../models/shift-model-band';
 import { log10bTAt } from '../pipeline/vertical-at';
 import type { Analysis } from '../pipeline/types';
@@ -28,7 +29,7 @@ export interface MovedCurve {
   notes: string[];
 }
 
-const MODEL_ORDER: ShiftModelKind[] = ['wlf', 'arrhenius', 'polynomial'];
+const MODEL_ORDER: readonly ShiftModelKind[] = SHIFT_MODEL_KINDS;
 
 /** The shift model to move an analysis with: the requested one, its hint, or the first fitted. */
 export function pickModel(a: Analysis, requested: ShiftModelKind | null): ShiftModelKind | null {
@@ -61,7 +62,7 @@ export function moveToTemperature(
     const fit = model ? a.models[model] : undefined;
     if (!model || !fit)
       throw new RangeError(
-        `${a.sample.name}: no shift model was fitted, so it cannot be moved from ${(a.referenceTemperatureK - 273.15).toFixed(1)} °C to ${(targetK - 273.15).toFixed(1)} °C`,
+        `${a.sample.name}: no shift model was fitted, so it cannot be moved from ${kelvinToCelsius(a.referenceTemperatureK).toFixed(1)} °C to ${kelvinToCelsius(targetK).toFixed(1)} °C`,
       );
     const [band] = shiftModelBand(fit.spec, [targetK]);
     log10aT = { value: band.log10aT, stdErr: Number.isFinite(band.stdErr) ? band.stdErr : null };
@@ -69,7 +70,7 @@ export function moveToTemperature(
     extrapolated = targetK < lo - 1e-6 || targetK > hi + 1e-6;
     if (extrapolated)
       notes.push(
-        `${a.sample.name}: moved to ${(targetK - 273.15).toFixed(1)} °C by its ${model.toUpperCase()} fit outside the temperatures it was fitted over (${(lo - 273.15).toFixed(1)}–${(hi - 273.15).toFixed(1)} °C): extrapolated`,
+        `${a.sample.name}: moved to ${kelvinToCelsius(targetK).toFixed(1)} °C by its ${model.toUpperCase()} fit outside the temperatures it was fitted over (${kelvinToCelsius(lo).toFixed(1)}–${kelvinToCelsius(hi).toFixed(1)} °C): extrapolated`,
       );
     const v = log10bTAt(a, targetK);
     log10bT = v.log10bT;

@@ -15,6 +15,7 @@
  * - shiftFactor: { kind, temperature, toleranceDecades }   (log10 aT at that temperature)
  * - indicator: { kind, key, tolerancePercent }   (η0, crossover, plateau, tan δ peak …)
  */
+import { ZERO_CELSIUS_K } from '../data/temperature';
 import { z } from 'zod';
 import { QUANTITY_IDS, type QuantityId } from '../data/types';
 
@@ -54,7 +55,7 @@ export const specCriterionSchema = z.union([
   z.strictObject({
     kind: z.literal('shiftFactor'),
     id,
-    temperature: z.number().min(-273.15),
+    temperature: z.number().min(-ZERO_CELSIUS_K),
     toleranceDecades: z.number().positive(),
   }),
   z.strictObject({
@@ -74,7 +75,7 @@ export const specSchema = z.strictObject({
   /** Free text shown in reports. */
   note: z.string().optional(),
   /** Common reference temperature, °C. @default the reference analysis's own */
-  referenceTemperature: z.number().min(-273.15).optional(),
+  referenceTemperature: z.number().min(-ZERO_CELSIUS_K).optional(),
   criteria: z.array(specCriterionSchema).min(1),
 });
 

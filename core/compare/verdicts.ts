@@ -6,6 +6,7 @@
  * failing node fails the band, else any straddling node makes it inconclusive. Without an s.e. the
  * verdict rests on the value alone and the reason says so. See docs/compare.md.
  */
+import { celsiusToKelvin } from '../data/temperature';
 import type { QuantityId } from '../data/types';
 import { Z95, normalCdf } from './normal';
 import { criterionName, type SpecCriterion, type Specification } from './spec-schema';
@@ -237,7 +238,7 @@ export function judge(spec: Specification, input: VerdictInput): SpecVerdict[] {
           'an Arrhenius fit is missing for the reference or the sample',
         );
       case 'shiftFactor': {
-        const T = c.temperature + 273.15;
+        const T = celsiusToKelvin(c.temperature);
         const row = input.models.shiftAt.find((r) => Math.abs(r.temperatureK - T) < 1e-6);
         return scalar(
           name,

@@ -4,6 +4,7 @@
  * ("-40 °C" … "60 °C"), numbers as numeric cells, the "# note: invented demo data …" line
  * first on every sheet. Deterministic: the same bytes on every call.
  */
+import { kelvinToCelsius } from '../data/temperature';
 import { temperatureFromFileName } from '../io/file-name';
 import { buildDemoSample } from './demo-samples';
 import { demoScenario } from './demo-scenarios';
@@ -42,7 +43,7 @@ export function demoWorkbook(): Uint8Array {
       const t = temperatureFromFileName(f.path);
       if (!t) throw new Error(`demoWorkbook(): no temperature in ${f.path}`);
       return {
-        name: `${Math.round(t.temperatureK - 273.15)} °C`,
+        name: `${Math.round(kelvinToCelsius(t.temperatureK))} °C`,
         rows: sheetRowsFromText(f.content, ';', true),
       };
     }),

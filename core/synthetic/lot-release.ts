@@ -7,13 +7,14 @@
  * slowly (a higher molar mass: η0 about 10^0.25 ≈ 1.8 times higher) and fails the specification.
  * Firm, product and numbers are invented; the generator is seeded and pure.
  */
+import { ZERO_CELSIUS_K } from '../data/temperature';
 import type { DemoFile, DemoScenario } from './demo-types';
 import { measureDemoScenario } from './demo-measure';
 import { writeLongLayout } from './demo-layout-long';
 import { meltProny } from './spectrum-shapes';
 import type { PronySeries } from '../spectrum/prony-model';
 
-const C_TO_K = 273.15;
+const C_TO_K = ZERO_CELSIUS_K;
 export const LOT_FIRM = 'Fenwright Resins';
 export const LOT_PRODUCT = 'FR-44 blow-moulding polyolefin';
 

@@ -7,6 +7,7 @@
  * EXIT.specFailed when a sample failed a criterion, EXIT.specInconclusive when none failed but one
  * was inconclusive (docs/compare.md, README "Command line").
  */
+import { kelvinToCelsius } from '@core/data';
 import { Command } from 'commander';
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
@@ -84,7 +85,7 @@ const sgn = (v: number, d: number): string => `${v >= 0 ? '+' : ''}${v.toFixed(d
 /** The summary printed on stdout. */
 export function comparisonText(c: Comparison): string {
   const lines = [
-    `Comparison at ${(c.referenceTemperatureK - 273.15).toFixed(1)} °C, reference: ${c.reference.name}${c.specName ? `, specification: ${c.specName}` : ''}`,
+    `Comparison at ${kelvinToCelsius(c.referenceTemperatureK).toFixed(1)} °C, reference: ${c.reference.name}${c.specName ? `, specification: ${c.specName}` : ''}`,
   ];
   for (const s of c.comparisons) {
     lines.push(

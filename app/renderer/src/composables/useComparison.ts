@@ -4,6 +4,7 @@
  * small, so they are analysed on the page's thread; the invented lot-release demo is generated in
  * place from core/synthetic (the same files as samples/lot-release/).
  */
+import { celsiusToKelvin } from '@core/data';
 import { shallowRef, computed } from 'vue';
 import { importFiles } from '@core/io';
 import { buildMasterCurve } from '@core/pipeline';
@@ -56,7 +57,7 @@ export function useComparison() {
 
   const specK = (): number | undefined =>
     spec.value?.referenceTemperature !== undefined
-      ? spec.value.referenceTemperature + 273.15
+      ? celsiusToKelvin(spec.value.referenceTemperature)
       : undefined;
 
   function add(files: TextFile[], asReference: boolean): void {
