@@ -1,7 +1,9 @@
 #!/usr/bin/env node
-// Command-line entry point. The CLI is written in TypeScript and shares its code with the desktop
-// app; tsx compiles it on the fly so the repository runs without a separate build step.
-import { register } from 'tsx/esm/api';
+// Command-line entry point. Runs the bundle dist/cli/thermoshift.mjs (made by
+// scripts/build-cli.mjs at `npm install` and before `npm test`); only when the bundle is missing
+// does it fall back to compiling the TypeScript sources on the fly with tsx, which is slower.
+import { existsSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
 
 // `thermoshift … | head` closes the pipe early: that is the reader's choice, not an error.
 for (const stream of [process.stdout, process.stderr]) {
@@ -11,6 +13,17 @@ for (const stream of [process.stdout, process.stderr]) {
   });
 }
 
-register();
-const { main } = await import('../app/cli/main.ts');
+const bundle = fileURLToPath(new URL('../dist/cli/thermoshift.mjs', import.meta.url));
+let main;
+if (existsSync(bundle) && !process.env.THERMOSHIFT_FROM_SOURCE) {
+  ({ main } = await import(bundle));
+} else {
+  if (!process.env.THERMOSHIFT_FROM_SOURCE)
+    process.stderr.write(
+      'thermoshift: dist/cli/thermoshift.mjs is missing (run `npm run build:cli`); compiling the sources instead\n',
+    );
+  const { register } = await import('tsx/esm/api');
+  register();
+  ({ main } = await import('../app/cli/main.ts'));
+}
 process.exitCode = await main(process.argv.slice(2));
