@@ -9,6 +9,7 @@ import type { Analysis } from '../../../core/pipeline/types.ts';
 import { formatFixed } from '../../../core/report/format.ts';
 import { addSampleOptions, resolveSettings, type SampleOptionValues } from '../sample-options.ts';
 import { readInputs } from '../io/read-inputs.ts';
+import { skippedLines, type SkippedFile } from '../io/input-files.ts';
 import { analyseSample } from '../run-sample.ts';
 import { today, writeOutputs } from '../outputs.ts';
 import { toCliError } from '../error-map.ts';
@@ -69,7 +70,10 @@ export function registerBuild(program: Command): void {
       const queries = o.predict ?? [];
       queries.forEach(parsePredictQuery); // a typo in a query fails before the analysis runs
       const settings = resolveSettings(o);
-      const analysis = analyseSample(readInputs(files), settings, o.settings ?? 'command line');
+      const skipped: SkippedFile[] = [];
+      const inputs = readInputs(files, skipped);
+      if (!o.quiet) process.stderr.write(skippedLines(skipped));
+      const analysis = analyseSample(inputs, settings, o.settings ?? 'command line');
       if (!o.quiet) printWarnings(analysis);
       const predictions = runPredictions(analysis, queries);
       if (o.out) {

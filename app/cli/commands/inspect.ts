@@ -2,8 +2,8 @@
  * `thermoshift inspect FILE…`: shows what the importer recognised in the files of one sample
  * (layout, delimiter, columns and units, isotherms, warnings) without analysing anything.
  */
-import { readdirSync, readFileSync, statSync } from 'node:fs';
-import { basename, join } from 'node:path';
+import { readFileSync } from 'node:fs';
+import { basename } from 'node:path';
 import { Command, Option } from 'commander';
 import { quantitySymbol } from '../../../core/data/quantities.ts';
 import type {
@@ -16,9 +16,7 @@ import { COLUMN_ROLES, ImportError, importFiles } from '../../../core/io/index.t
 import { parseTemperatureText } from '../../../core/units/index.ts';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
-
-/** File endings taken from a folder argument. */
-const DATA_FILE = /\.(csv|tsv|txt|dat|tab|asc|prn)$/i;
+import { listInputFiles, skippedLines } from '../io/input-files.ts';
 
 interface InspectOptions {
   json?: boolean;
@@ -38,29 +36,14 @@ function decode(bytes: Buffer): string {
   return new TextDecoder('utf-8').decode(bytes);
 }
 
-/** Files named on the command line; a folder stands for the data files directly inside it. */
+/**
+ * Files named on the command line; a folder stands for the data files directly inside it (the
+ * same walk as build and batch: ../io/input-files.ts). Skipped files are told on stderr.
+ */
 export function readSourceFiles(paths: string[]): SourceFile[] {
-  const names: string[] = [];
-  for (const p of paths) {
-    let isDir: boolean;
-    try {
-      isDir = statSync(p).isDirectory();
-    } catch {
-      throw new CliError(`${p}: no such file or folder`);
-    }
-    if (!isDir) {
-      names.push(p);
-      continue;
-    }
-    const inside = readdirSync(p, { withFileTypes: true })
-      .filter((d) => d.isFile() && !d.name.startsWith('.') && DATA_FILE.test(d.name))
-      .map((d) => join(p, d.name))
-      .sort((a, b) => a.localeCompare(b, 'en', { numeric: true }));
-    if (inside.length === 0)
-      throw new CliError(`${p}: the folder holds no data files (.csv, .tsv, .txt, .dat)`);
-    names.push(...inside);
-  }
-  return [...new Set(names)].map((name) => {
+  const { files: names, skipped } = listInputFiles(paths);
+  process.stderr.write(skippedLines(skipped));
+  return names.map((name) => {
     try {
       return { name, text: decode(readFileSync(name)) };
     } catch (e) {

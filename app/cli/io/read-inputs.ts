@@ -1,14 +1,13 @@
 /**
- * Turns the paths given on the command line into the files of one sample: a file stands for
- * itself, a folder for the data files directly inside it (sorted by name). Reads them as UTF-8.
+ * Turns the paths given on the command line into the files of one sample (which files: see
+ * ./input-files.ts, shared with `inspect`). Reads them as UTF-8.
  */
-import { readdirSync, readFileSync, statSync } from 'node:fs';
-import { join } from 'node:path';
+import { readFileSync } from 'node:fs';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
+import { listInputFiles, type SkippedFile } from './input-files.ts';
 
-/** File name endings taken from a folder (other files, e.g. notes or images, are skipped). */
-export const DATA_FILE_PATTERN = /\.(csv|tsv|txt|dat|tab)$/i;
+export { DATA_FILE_PATTERN } from './input-files.ts';
 
 export interface InputFile {
   /** The path as the user would recognise it; used in every message. */
@@ -16,39 +15,16 @@ export interface InputFile {
   text: string;
 }
 
-/** Data files inside a folder, sorted by name. */
-export function dataFilesIn(folder: string): string[] {
-  return readdirSync(folder, { withFileTypes: true })
-    .filter((d) => d.isFile() && DATA_FILE_PATTERN.test(d.name) && !d.name.startsWith('.'))
-    .map((d) => join(folder, d.name))
-    .sort((a, b) => a.localeCompare(b, 'en', { numeric: true }));
-}
-
 /** Expands folders and checks every path; throws a one-line CliError naming the bad path. */
-export function expandInputs(paths: string[]): string[] {
-  const out: string[] = [];
-  for (const p of paths) {
-    let st;
-    try {
-      st = statSync(p);
-    } catch {
-      throw new CliError(`${p}: no such file or folder`, EXIT.dataError);
-    }
-    if (st.isDirectory()) {
-      const files = dataFilesIn(p);
-      if (files.length === 0)
-        throw new CliError(
-          `${p}: folder holds no data files (.csv, .tsv, .txt, .dat)`,
-          EXIT.dataError,
-        );
-      out.push(...files);
-    } else out.push(p);
-  }
-  return [...new Set(out)];
+export function expandInputs(paths: string[], skipped: SkippedFile[] = []): string[] {
+  const list = listInputFiles(paths);
+  skipped.push(...list.skipped);
+  return list.files;
 }
 
-export function readInputs(paths: string[]): InputFile[] {
-  return expandInputs(paths).map((name) => {
+/** Reads the sample's files; files skipped in folders are added to `skipped` with the reason. */
+export function readInputs(paths: string[], skipped: SkippedFile[] = []): InputFile[] {
+  return expandInputs(paths, skipped).map((name) => {
     try {
       return { name, text: readFileSync(name, 'utf8') };
     } catch (e) {
