@@ -19,7 +19,7 @@ import {
   writtenByThermoshift,
   type SkippedFile,
 } from '../io/input-files.ts';
-import { analyseSample } from '../run-sample.ts';
+import { analyseSample, assertSomethingShifted } from '../run-sample.ts';
 import { outputEntries } from '../outputs.ts';
 import {
   assertOutputSetWritable,
@@ -31,6 +31,7 @@ import { oneLine, toCliError } from '../error-map.ts';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
 import { checkDate } from './build.ts';
+import { fileTemperatures } from './inspect.ts';
 
 interface BatchOptions extends SampleOptionValues {
   out: string;
@@ -125,6 +126,8 @@ export interface BatchRunOptions {
   out: string;
   force: boolean;
   date: string;
+  /** --file-temperature specs ("FILE=T"); each applies to the sample holding that file. */
+  fileTemperatures?: string[];
   /** Progress lines (stderr in the CLI). */
   log: (line: string) => void;
 }
@@ -140,7 +143,14 @@ export function runBatch(samples: BatchSample[], o: BatchRunOptions): BatchIndex
   samples.forEach((s, k) => {
     const prefix = `[${k + 1}/${samples.length}] ${s.name}`;
     try {
-      const analysis = analyseSample(readInputs(s.paths), o.settings, o.settingsSource);
+      const inputs = readInputs(s.paths);
+      const analysis = analyseSample(
+        inputs,
+        o.settings,
+        o.settingsSource,
+        fileTemperatures(o.fileTemperatures ?? [], inputs, false),
+      );
+      assertSomethingShifted(analysis);
       entries.push(
         ...outputEntries(
           analysis,
@@ -203,6 +213,7 @@ export function registerBatch(program: Command): void {
     const rows = runBatch(samples, {
       settings,
       settingsSource: o.settings ?? 'command line',
+      fileTemperatures: o.fileTemperature ?? [],
       out: o.out,
       force: !!o.force,
       date,

@@ -10,11 +10,12 @@ import { formatFixed } from '../../../core/report/format.ts';
 import { addSampleOptions, resolveSettings, type SampleOptionValues } from '../sample-options.ts';
 import { readInputs } from '../io/read-inputs.ts';
 import { skippedLines, type SkippedFile } from '../io/input-files.ts';
-import { analyseSample } from '../run-sample.ts';
+import { analyseSample, assertSomethingShifted } from '../run-sample.ts';
 import { today, writeOutputs } from '../outputs.ts';
 import { toCliError } from '../error-map.ts';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
+import { fileTemperatures } from './inspect.ts';
 import { parsePredictQuery } from '../predict-query.ts';
 import { predictionsText, runPredictions } from '../predictions.ts';
 
@@ -40,6 +41,15 @@ export function checkDate(date: string | undefined): string {
   if (date === undefined) return today();
   if (!/^\d{4}-\d{2}-\d{2}$/.test(date))
     throw new CliError(`--date: "${date}" is not YYYY-MM-DD`, EXIT.usage);
+  const [y, m, d] = date.split('-').map(Number);
+  const asDate = new Date(Date.UTC(y, m - 1, d));
+  const real =
+    asDate.getUTCFullYear() === y && asDate.getUTCMonth() === m - 1 && asDate.getUTCDate() === d;
+  if (!real || y < 1900)
+    throw new CliError(
+      `--date: "${date}" is not a calendar date from 1900-01-01 to 9999-12-31 (month 01-12, day within the month)`,
+      EXIT.usage,
+    );
   return date;
 }
 
@@ -73,8 +83,14 @@ export function registerBuild(program: Command): void {
       const skipped: SkippedFile[] = [];
       const inputs = readInputs(files, skipped);
       if (!o.quiet) process.stderr.write(skippedLines(skipped));
-      const analysis = analyseSample(inputs, settings, o.settings ?? 'command line');
+      const analysis = analyseSample(
+        inputs,
+        settings,
+        o.settings ?? 'command line',
+        fileTemperatures(o.fileTemperature ?? [], inputs),
+      );
       if (!o.quiet) printWarnings(analysis);
+      assertSomethingShifted(analysis);
       const predictions = runPredictions(analysis, queries);
       if (o.out) {
         const written = writeOutputs(analysis, o.out, {

@@ -78,7 +78,15 @@ export function parseColumnSpec(text: string): ColumnMapping {
   return mapping;
 }
 
-function fileTemperatures(specs: string[], files: SourceFile[]): Record<string, number> {
+/**
+ * "FILE=T" specs → temperatures in kelvin by input file name (the name or its last part).
+ * `strict`: a spec naming no input file is an error (off in batch, where it names one sample's file).
+ */
+export function fileTemperatures(
+  specs: string[],
+  files: { name: string }[],
+  strict = true,
+): Record<string, number> {
   const out: Record<string, number> = {};
   for (const spec of specs) {
     const eq = spec.lastIndexOf('=');
@@ -90,7 +98,7 @@ function fileTemperatures(specs: string[], files: SourceFile[]): Record<string, 
       );
     const key = spec.slice(0, eq).trim();
     const hits = files.filter((f) => f.name === key || basename(f.name) === key);
-    if (hits.length === 0)
+    if (hits.length === 0 && strict)
       throw new CliError(
         `--file-temperature "${spec}": no input file is called "${key}"`,
         EXIT.usage,
