@@ -12,7 +12,6 @@
  * test-results/fuzz/). Copy a finding into tests/fixtures/fuzz-findings/ to make it a regression
  * test (tests/cli/fuzz-findings.test.ts runs every folder there).
  */
-import { spawnSync } from 'node:child_process';
 import {
   cpSync,
   mkdirSync,
@@ -25,10 +24,10 @@ import {
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { judge, runCli } from './fuzz-judge.ts';
 
 const ROOT = fileURLToPath(new URL('..', import.meta.url));
 const BIN = join(ROOT, 'bin/thermoshift.mjs');
-const HANG_MS = 30_000;
 
 function arg(name: string, fallback: string): string {
   const i = process.argv.indexOf(`--${name}`);
@@ -137,47 +136,6 @@ function samples(): Sample[] {
     .filter((s) => s.files.length > 0);
 }
 
-type Verdict = 'internal' | 'hang' | 'nonsense' | undefined;
-
-function run(args: string[]): {
-  status: number | null;
-  stdout: string;
-  stderr: string;
-  hung: boolean;
-} {
-  const r = spawnSync(process.execPath, [BIN, ...args], {
-    encoding: 'utf8',
-    timeout: HANG_MS,
-    killSignal: 'SIGKILL',
-    maxBuffer: 64 * 1024 * 1024,
-  });
-  const hung = r.error !== undefined && (r.error as NodeJS.ErrnoException).code === 'ETIMEDOUT';
-  return { status: r.status, stdout: r.stdout ?? '', stderr: r.stderr ?? '', hung };
-}
-
-/** A finite number, or a reason it is not one. */
-function badNumber(v: unknown): boolean {
-  return typeof v !== 'number' || !Number.isFinite(v);
-}
-
-function judge(command: string, r: ReturnType<typeof run>): Verdict {
-  if (r.hung) return 'hang';
-  if (r.status === 70) return 'internal';
-  if (r.status !== 0 || command !== 'build') return undefined;
-  try {
-    const j = JSON.parse(r.stdout) as {
-      curves?: { included: boolean; log10aT: unknown; log10aTStdErr: unknown }[];
-    };
-    const curves = j.curves ?? [];
-    const included = curves.filter((c) => c.included);
-    if (included.length === 0) return 'nonsense';
-    if (included.some((c) => badNumber(c.log10aT) || badNumber(c.log10aTStdErr))) return 'nonsense';
-  } catch {
-    return 'nonsense'; // exit 0 without readable JSON
-  }
-  return undefined;
-}
-
 function main(): void {
   const minutes = Number(arg('minutes', '1'));
   const seed0 = Number(arg('seed', String(Date.now() % 1_000_000)));
@@ -228,7 +186,7 @@ function main(): void {
                 '--date',
                 '2026-12-01',
               ];
-        const res = run(args);
+        const res = runCli(BIN, args);
         counts.runs++;
         const code = res.hung ? 'hang' : String(res.status);
         counts.exit[`${command} ${code}`] = (counts.exit[`${command} ${code}`] ?? 0) + 1;
