@@ -23,6 +23,8 @@ export default mergeConfig(
               'tests/scripts/**/*.test.ts',
             ],
             testTimeout: 60_000,
+            // Bundles the CLI (dist/cli) that tests/cli runs.
+            globalSetup: ['tests/cli/global-setup.ts'],
           },
         },
         {

@@ -103,6 +103,11 @@ export function addSampleOptions(cmd: Command): Command {
       'measured temperatures closer than this many kelvin form one isotherm, unless they are separate steady sweeps (default 1)',
     )
     .option(
+      '--file-temperature <FILE=T>',
+      'temperature of a one-isotherm file that names none, e.g. "run7.txt=40C"; repeatable',
+      collectWhole,
+    )
+    .option(
       '--column <COL=ROLE[:UNIT]>',
       'explicit column mapping, e.g. "Freq=frequency:Hz" or "3=storageModulus:MPa"; repeatable',
       collectWhole,
@@ -132,6 +137,7 @@ export interface SampleOptionValues {
   mask?: string[];
   groupTolerance?: string;
   column?: string[];
+  fileTemperature?: string[];
   modulusUnit?: string;
   settings?: string;
 }
@@ -140,12 +146,24 @@ function usage(message: string): CliError {
   return new CliError(message, EXIT.usage);
 }
 
-function positiveNumber(text: string, option: string, allowZero = false): number {
+function positiveNumber(text: string, option: string, allowZero: boolean, max: number): number {
   const v = Number(text);
   if (!Number.isFinite(v) || v < 0 || (!allowZero && v === 0))
     throw usage(`${option}: "${text}" is not a ${allowZero ? 'non-negative' : 'positive'} number`);
+  if (v > max)
+    throw usage(
+      `${option}: "${text}" is outside the valid range (${allowZero ? 0 : 'above 0'} to ${max})`,
+    );
   return v;
 }
+
+/**
+ * Upper bounds of the numeric options: far beyond any real material (densest solids ≈ 22,600
+ * kg/m³; polymers expand by ≈ 1e-4 to 1e-3 per K, common practice), so only typos are refused.
+ */
+const MAX_DENSITY_KG_PER_M3 = 100_000;
+const MAX_EXPANSION_PER_K = 0.1;
+const MAX_GROUP_TOLERANCE_K = 1000;
 
 function quantityList(text: string): 'auto' | QuantityId[] {
   if (text.trim() === 'auto') return 'auto';
@@ -185,8 +203,10 @@ export function optionsToSettings(o: SampleOptionValues): Settings {
   }
   if (o.shiftBy !== undefined) s.shiftBy = quantityList(o.shiftBy);
   if (o.vertical !== undefined) s.verticalShift = o.vertical;
-  if (o.density !== undefined) s.densityKgPerM3 = positiveNumber(o.density, '--density');
-  if (o.expansion !== undefined) s.expansionPerK = positiveNumber(o.expansion, '--expansion', true);
+  if (o.density !== undefined)
+    s.densityKgPerM3 = positiveNumber(o.density, '--density', false, MAX_DENSITY_KG_PER_M3);
+  if (o.expansion !== undefined)
+    s.expansionPerK = positiveNumber(o.expansion, '--expansion', true, MAX_EXPANSION_PER_K);
   if (o.models !== undefined)
     s.models =
       o.models.trim() === 'none' ? [] : o.models.split(',').map((m) => m.trim().toLowerCase());
@@ -199,7 +219,12 @@ export function optionsToSettings(o: SampleOptionValues): Settings {
   if (o.exclude?.length) s.exclude = o.exclude;
   if (o.mask?.length) s.mask = o.mask;
   if (o.groupTolerance !== undefined)
-    s.groupingToleranceK = positiveNumber(o.groupTolerance, '--group-tolerance', true);
+    s.groupingToleranceK = positiveNumber(
+      o.groupTolerance,
+      '--group-tolerance',
+      true,
+      MAX_GROUP_TOLERANCE_K,
+    );
   if (o.column?.length) s.columns = o.column.map(parseColumnOption);
   if (o.modulusUnit !== undefined) s.modulusUnit = o.modulusUnit;
   return parseSettings(s, 'command line');

@@ -97,6 +97,9 @@ export function mergeSettings(...layers: Settings[]): Settings {
   return out as Settings;
 }
 
+/** Highest temperature a setting may name, K (1000 °C). */
+export const MAX_SETTING_TEMPERATURE_K = 1273.15;
+
 /** Reads a temperature setting: a number is °C; text may carry a unit ("463.15K", "190 °C"). */
 export function settingTemperatureK(value: number | string, key: string, source: string): number {
   const reading =
@@ -104,6 +107,14 @@ export function settingTemperatureK(value: number | string, key: string, source:
   if (!reading)
     throw new SettingsError(
       `${source}: ${key}: "${value}" is not a temperature (write °C, e.g. 190, or kelvin with K, e.g. 463.15K)`,
+      key,
+      source,
+    );
+  // No polymer is tested at or below 0 K or above 1000 °C: a value outside is a typo (1e20, or
+  // kelvin written as °C twice) and would only produce numbers without meaning.
+  if (!(reading.temperatureK > 0 && reading.temperatureK <= MAX_SETTING_TEMPERATURE_K))
+    throw new SettingsError(
+      `${source}: ${key}: "${value}" is outside the valid range (above -273.15 °C, at most 1000 °C)`,
       key,
       source,
     );
@@ -157,6 +168,17 @@ export function parseMask(
   if (last < first)
     throw new SettingsError(
       `${source}: mask: "${text}" has its last row before its first`,
+      'mask',
+      source,
+    );
+  // The valid rows are those holding data in that file; refusing others here also keeps a typo
+  // such as 1-4294967296 from building an array of four billion rows.
+  let lastRow = 0;
+  for (const iso of dataset.isotherms)
+    for (const src of iso.source) if (src.file === file && src.row > lastRow) lastRow = src.row;
+  if (first < 1 || last > lastRow)
+    throw new SettingsError(
+      `${source}: mask: "${text}" is outside the rows of ${file} that hold data (1-${lastRow})`,
       'mask',
       source,
     );

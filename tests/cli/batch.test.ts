@@ -75,7 +75,7 @@ describe('thermoshift batch', () => {
     const r = runCli(['batch', '--samples-in', lab, '--out', out]);
     expect(r.status).toBe(EXIT.outputError);
     expect(r.stderr).not.toMatch(/\[1\//);
-    expect(r.stderr).toMatch(/index\.csv already exists; use --force/);
+    expect(r.stderr).toMatch(/already holds Thermoshift results; use --force/);
   });
 
   it('batch without samples is a usage error', () => {

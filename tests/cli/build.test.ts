@@ -176,7 +176,7 @@ describe('thermoshift build (synthetic files with known truth)', () => {
     const again = runCli(['build', data, '--tref', '100', '--out', out]);
     expect(again.status).toBe(EXIT.outputError);
     expect(again.stderr.trim().split('\n')).toHaveLength(1);
-    expect(again.stderr).toMatch(/already exist.*--force/);
+    expect(again.stderr).toMatch(/already holds Thermoshift results; use --force/);
     expect(readFileSync(target, 'utf8')).toBe('kept');
     expect(statSync(join(out, OUTPUT_FILES.report)).mtimeMs).toBe(before);
     const forced = runCli(['build', data, '--tref', '100', '--out', out, '--force', '--quiet']);

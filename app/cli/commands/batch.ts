@@ -5,21 +5,33 @@
  * reported and the batch goes on, exiting with EXIT.batchPartialFailure at the end.
  */
 import { Command } from 'commander';
-import { readdirSync, statSync } from 'node:fs';
+import { readdirSync, realpathSync, statSync } from 'node:fs';
 import { basename, join } from 'node:path';
 import { batchIndexCsv, type BatchIndexRow } from '@core/report';
 import { THERMOSHIFT_VERSION } from '@core/pipeline';
 import { toCelsius } from '@core/pipeline';
 import type { Settings } from '@core/pipeline';
 import { addSampleOptions, resolveSettings, type SampleOptionValues } from '../sample-options.ts';
-import { DATA_FILE_PATTERN, readWorkbookInputs } from '../io/read-inputs.ts';
-import { analyseSample } from '../run-sample.ts';
-import { writeOutputs } from '../outputs.ts';
-import { assertWritable, writeFileAtomic } from '../io/atomic-write.ts';
+import { readWorkbookInputs } from '../io/read-inputs.ts';
+import {
+  DATA_FILE_PATTERN,
+  skippedLines,
+  writtenByThermoshift,
+  type SkippedFile,
+} from '../io/input-files.ts';
+import { analyseSample, assertSomethingShifted } from '../run-sample.ts';
+import { outputEntries } from '../outputs.ts';
+import {
+  assertOutputSetWritable,
+  isOutputSet,
+  writeOutputSet,
+  type OutputEntry,
+} from '../io/output-set.ts';
 import { oneLine, toCliError } from '../error-map.ts';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
 import { checkDate } from './build.ts';
+import { fileTemperatures } from './inspect.ts';
 import { loadAnalysis, readSpecFile } from './compare.ts';
 import { compareAnalyses } from '@core/compare';
 import type { Specification } from '@core/compare';
@@ -76,12 +88,12 @@ export function withVerdictColumn(csv: string, verdicts: string[]): string {
 }
 
 interface BatchOptions extends SampleOptionValues {
+  spec?: string;
+  reference?: string;
   out: string;
   samplesIn?: string[];
   force?: boolean;
   date?: string;
-  spec?: string;
-  reference?: string;
 }
 
 export interface BatchSample {
@@ -90,12 +102,24 @@ export interface BatchSample {
   paths: string[];
 }
 
-/** Each path is one sample; a folder from --samples-in contributes each of its entries. */
-export function listSamples(paths: string[], samplesIn: string[]): BatchSample[] {
+/**
+ * Each path is one sample; a folder from --samples-in contributes each of its entries (data files
+ * and sub-folders; links followed once, each real path once). Entries that cannot be samples
+ * (broken links, link loops, pipes, devices, files Thermoshift wrote) go to `skipped` with the
+ * reason. Sample names are made safe for file names and never collide, also on file systems that
+ * ignore case: "x y" and "x_y" become x_y and x_y-2, and a later "x_y-2" becomes x_y-2-2.
+ */
+export function listSamples(
+  paths: string[],
+  samplesIn: string[],
+  skipped: SkippedFile[] = [],
+): BatchSample[] {
   const entries: string[] = [...paths];
+  const seen = new Set<string>();
   for (const dir of samplesIn) {
     let names: string[];
     try {
+      if (!statSync(dir).isDirectory()) throw new Error('not a folder');
       names = readdirSync(dir).sort((a, b) => a.localeCompare(b, 'en', { numeric: true }));
     } catch {
       throw new CliError(`${dir}: no such folder`, EXIT.usage);
@@ -103,17 +127,52 @@ export function listSamples(paths: string[], samplesIn: string[]): BatchSample[]
     for (const n of names) {
       const p = join(dir, n);
       if (n.startsWith('.')) continue;
-      const st = statSync(p);
-      if (st.isDirectory() || DATA_FILE_PATTERN.test(n)) entries.push(p);
+      let st;
+      try {
+        st = statSync(p);
+      } catch (e) {
+        const code = (e as NodeJS.ErrnoException).code;
+        skipped.push({
+          path: p,
+          reason: code === 'ELOOP' ? 'a symbolic link loop' : 'a broken symbolic link',
+        });
+        continue;
+      }
+      let real = p;
+      try {
+        real = realpathSync(p);
+      } catch {
+        // keep the name
+      }
+      if (seen.has(real)) {
+        skipped.push({ path: p, reason: `the same as an entry already taken (${real})` });
+        continue;
+      }
+      if (st.isDirectory() && isOutputSet(p)) {
+        skipped.push({ path: p, reason: 'a Thermoshift output folder' });
+      } else if (st.isDirectory()) {
+        seen.add(real);
+        entries.push(p);
+      } else if (DATA_FILE_PATTERN.test(n)) {
+        if (!st.isFile()) skipped.push({ path: p, reason: 'not a regular file' });
+        else if (writtenByThermoshift(p))
+          skipped.push({ path: p, reason: 'written by Thermoshift' });
+        else {
+          seen.add(real);
+          entries.push(p);
+        }
+      }
     }
   }
-  const used = new Map<string, number>();
+  const used = new Set<string>();
   return entries.map((p) => {
     const stem = basename(p.replace(/[\\/]+$/, '')).replace(/\.[^.]+$/, '') || 'sample';
     const safe = stem.replace(/[^\p{L}\p{N}._-]+/gu, '_');
-    const n = (used.get(safe) ?? 0) + 1;
-    used.set(safe, n);
-    return { name: n === 1 ? safe : `${safe}-${n}`, paths: [p] };
+    let name = safe;
+    for (let n = 2; used.has(name.toLowerCase()) || name.toLowerCase() === 'index.csv'; n++)
+      name = `${safe}-${n}`;
+    used.add(name.toLowerCase());
+    return { name, paths: [p] };
   });
 }
 
@@ -123,29 +182,43 @@ export interface BatchRunOptions {
   out: string;
   force: boolean;
   date: string;
+  /** --file-temperature specs ("FILE=T"); each applies to the sample holding that file. */
+  fileTemperatures?: string[];
   /** Progress lines (stderr in the CLI). */
   log: (line: string) => void;
+  /** With --spec: one verdict per index row, added to index.csv as its last column. */
+  verdicts?: (rows: BatchIndexRow[]) => string[];
 }
 
-/** Runs the batch; returns the index rows (one per sample). Shared with bench/batch.bench.ts. */
+/**
+ * Runs the batch and writes its whole output set (one folder per sample and index.csv, swapped in
+ * as a whole: ../io/output-set.ts); returns the index rows (one per sample). Shared with
+ * bench/batch.bench.ts.
+ */
 export async function runBatch(
   samples: BatchSample[],
   o: BatchRunOptions,
 ): Promise<BatchIndexRow[]> {
   const rows: BatchIndexRow[] = [];
+  const entries: OutputEntry[] = [];
   for (const [k, s] of samples.entries()) {
     const prefix = `[${k + 1}/${samples.length}] ${s.name}`;
     try {
+      const inputs = await readWorkbookInputs(s.paths);
       const analysis = analyseSample(
-        await readWorkbookInputs(s.paths),
+        inputs,
         o.settings,
         o.settingsSource,
+        fileTemperatures(o.fileTemperatures ?? [], inputs, false),
       );
-      writeOutputs(analysis, join(o.out, s.name), {
-        force: o.force,
-        modulusUnit: o.settings.modulusUnit ?? 'Pa',
-        date: o.date,
-      });
+      assertSomethingShifted(analysis);
+      entries.push(
+        ...outputEntries(
+          analysis,
+          { modulusUnit: o.settings.modulusUnit ?? 'Pa', date: o.date },
+          s.name,
+        ),
+      );
       rows.push({ sample: s.name, folder: s.name, result: { ok: true, analysis } });
       const n = analysis.warnings.length;
       o.log(
@@ -158,6 +231,11 @@ export async function runBatch(
       o.log(`${prefix}: FAILED: ${message}`);
     }
   }
+  let index = batchIndexCsv(rows, THERMOSHIFT_VERSION);
+  const verdicts = o.verdicts?.(rows) ?? [];
+  if (verdicts.length) index = withVerdictColumn(index, verdicts);
+  entries.push({ name: 'index.csv', content: index });
+  writeOutputSet(o.out, entries, { force: o.force });
   return rows;
 }
 
@@ -187,7 +265,9 @@ export function registerBatch(program: Command): void {
     let settings: Settings;
     try {
       settings = resolveSettings(o);
-      samples = listSamples(paths, o.samplesIn ?? []);
+      const skipped: SkippedFile[] = [];
+      samples = listSamples(paths, o.samplesIn ?? [], skipped);
+      process.stderr.write(skippedLines(skipped));
     } catch (e) {
       throw toCliError(e);
     }
@@ -203,20 +283,20 @@ export function registerBatch(program: Command): void {
         'batch: --spec needs --reference REF (the lot to compare with)',
         EXIT.usage,
       );
+    let verdicts: string[] = [];
     const indexPath = join(o.out, 'index.csv');
-    assertWritable([indexPath], !!o.force); // fail before hours of work, not after
+    assertOutputSetWritable(o.out, !!o.force); // fail before hours of work, not after
     const rows = await runBatch(samples, {
       settings,
       settingsSource: o.settings ?? 'command line',
+      fileTemperatures: o.fileTemperature ?? [],
       out: o.out,
       force: !!o.force,
       date,
       log: (line) => process.stderr.write(`${line}\n`),
+      verdicts: (r) =>
+        (verdicts = spec && o.reference ? batchVerdicts(r, o.reference, spec, settings, o) : []),
     });
-    let index = batchIndexCsv(rows, THERMOSHIFT_VERSION);
-    const verdicts = spec && o.reference ? batchVerdicts(rows, o.reference, spec, settings, o) : [];
-    if (verdicts.length) index = withVerdictColumn(index, verdicts);
-    writeFileAtomic(indexPath, index, { force: !!o.force });
     const failed = rows.filter((r) => !r.result.ok).length;
     process.stderr.write(
       `batch: ${rows.length - failed} of ${rows.length} samples done, ${failed} failed; index: ${indexPath}\n`,

@@ -10,11 +10,13 @@ import { formatFixed } from '@core/report';
 import { quantitySymbol } from '@core/data';
 import { addSampleOptions, resolveSettings, type SampleOptionValues } from '../sample-options.ts';
 import { readWorkbookInputs } from '../io/read-inputs.ts';
-import { analyseSample } from '../run-sample.ts';
+import { skippedLines, type SkippedFile } from '../io/input-files.ts';
+import { analyseSample, assertSomethingShifted } from '../run-sample.ts';
 import { today, writeOutputs } from '../outputs.ts';
 import { toCliError } from '../error-map.ts';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
+import { fileTemperatures } from './inspect.ts';
 import { parsePredictQuery } from '../predict-query.ts';
 import { predictionsText, runPredictions } from '../predictions.ts';
 
@@ -40,6 +42,15 @@ export function checkDate(date: string | undefined): string {
   if (date === undefined) return today();
   if (!/^\d{4}-\d{2}-\d{2}$/.test(date))
     throw new CliError(`--date: "${date}" is not YYYY-MM-DD`, EXIT.usage);
+  const [y, m, d] = date.split('-').map(Number);
+  const asDate = new Date(Date.UTC(y, m - 1, d));
+  const real =
+    asDate.getUTCFullYear() === y && asDate.getUTCMonth() === m - 1 && asDate.getUTCDate() === d;
+  if (!real || y < 1900)
+    throw new CliError(
+      `--date: "${date}" is not a calendar date from 1900-01-01 to 9999-12-31 (month 01-12, day within the month)`,
+      EXIT.usage,
+    );
   return date;
 }
 
@@ -70,12 +81,17 @@ export function registerBuild(program: Command): void {
       const queries = o.predict ?? [];
       queries.forEach(parsePredictQuery); // a typo in a query fails before the analysis runs
       const settings = resolveSettings(o);
+      const skipped: SkippedFile[] = [];
+      const inputs = await readWorkbookInputs(files, skipped);
+      if (!o.quiet) process.stderr.write(skippedLines(skipped));
       const analysis = analyseSample(
-        await readWorkbookInputs(files),
+        inputs,
         settings,
         o.settings ?? 'command line',
+        fileTemperatures(o.fileTemperature ?? [], inputs),
       );
       if (!o.quiet) printWarnings(analysis);
+      assertSomethingShifted(analysis);
       const predictions = runPredictions(analysis, queries);
       if (o.out) {
         const written = writeOutputs(analysis, o.out, {

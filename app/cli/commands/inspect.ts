@@ -2,8 +2,8 @@
  * `thermoshift inspect FILE…`: shows what the importer recognised in the files of one sample
  * (layout, delimiter, columns and units, isotherms, warnings) without analysing anything.
  */
-import { readdirSync, readFileSync, statSync } from 'node:fs';
-import { basename, join } from 'node:path';
+import { readFileSync, statSync } from 'node:fs';
+import { basename } from 'node:path';
 import { Command, Option } from 'commander';
 import { kelvinToCelsius, quantitySymbol } from '@core/data';
 import type { ColumnMapping, ColumnRole, ImportResult, SourceFile } from '@core/io';
@@ -12,9 +12,7 @@ import { parseTemperatureText } from '@core/units';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
 import { readDecodedChunks } from '../io/read-text-chunks.ts';
-
-/** File endings taken from a folder argument. */
-const DATA_FILE = /\.(csv|tsv|txt|dat|tab|asc|prn|xlsx)$/i;
+import { listInputFiles, skippedLines } from '../io/input-files.ts';
 
 interface InspectOptions {
   json?: boolean;
@@ -27,29 +25,14 @@ interface InspectOptions {
 
 const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
 
-/** Files named on the command line; a folder stands for the data files directly inside it. */
+/**
+ * Files named on the command line; a folder stands for the data files directly inside it (the
+ * same walk as build and batch: ../io/input-files.ts). Skipped files are told on stderr.
+ */
 export function readSourceFiles(paths: string[]): (SourceFile & { bytes?: Uint8Array })[] {
-  const names: string[] = [];
-  for (const p of paths) {
-    let isDir: boolean;
-    try {
-      isDir = statSync(p).isDirectory();
-    } catch {
-      throw new CliError(`${p}: no such file or folder`);
-    }
-    if (!isDir) {
-      names.push(p);
-      continue;
-    }
-    const inside = readdirSync(p, { withFileTypes: true })
-      .filter((d) => d.isFile() && !d.name.startsWith('.') && DATA_FILE.test(d.name))
-      .map((d) => join(p, d.name))
-      .sort((a, b) => a.localeCompare(b, 'en', { numeric: true }));
-    if (inside.length === 0)
-      throw new CliError(`${p}: the folder holds no data files (.csv, .tsv, .txt, .dat, .xlsx)`);
-    names.push(...inside);
-  }
-  return [...new Set(names)].map((name) => {
+  const { files: names, skipped } = listInputFiles(paths);
+  process.stderr.write(skippedLines(skipped));
+  return names.map((name) => {
     try {
       // A workbook's sheets are read by expandWorkbooks (each sheet one file).
       if (isWorkbookName(name)) return { name, text: '', bytes: readFileSync(name) };
@@ -88,7 +71,15 @@ export function parseColumnSpec(text: string): ColumnMapping {
   return mapping;
 }
 
-function fileTemperatures(specs: string[], files: SourceFile[]): Record<string, number> {
+/**
+ * "FILE=T" specs → temperatures in kelvin by input file name (the name or its last part).
+ * `strict`: a spec naming no input file is an error (off in batch, where it names one sample's file).
+ */
+export function fileTemperatures(
+  specs: string[],
+  files: { name: string }[],
+  strict = true,
+): Record<string, number> {
   const out: Record<string, number> = {};
   for (const spec of specs) {
     const eq = spec.lastIndexOf('=');
@@ -100,7 +91,7 @@ function fileTemperatures(specs: string[], files: SourceFile[]): Record<string, 
       );
     const key = spec.slice(0, eq).trim();
     const hits = files.filter((f) => f.name === key || basename(f.name) === key);
-    if (hits.length === 0)
+    if (hits.length === 0 && strict)
       throw new CliError(
         `--file-temperature "${spec}": no input file is called "${key}"`,
         EXIT.usage,

@@ -1,18 +1,18 @@
 /**
- * Turns the paths given on the command line into the files of one sample: a file stands for
- * itself, a folder for the data files directly inside it (sorted by name). Decodes them by
- * core/io/decode.ts (UTF-8, UTF-16 with BOM, Windows-1252) and hands them over in chunks.
+ * Turns the paths given on the command line into the files of one sample (which files: see
+ * ./input-files.ts, shared with `inspect`). Decodes them by core/io/decode.ts (UTF-8, UTF-16 with
+ * BOM, Windows-1252) and hands them over in chunks; a workbook (.xlsx) is handed over as bytes and
+ * becomes one file per sheet in `readWorkbookInputs`.
  */
-import { readdirSync, readFileSync, statSync } from 'node:fs';
-import { join } from 'node:path';
+import { readFileSync, statSync } from 'node:fs';
 import { expandWorkbooks, isWorkbookName } from '@core/io';
+import type { TextEncodingName } from '@core/io';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
-import type { TextEncodingName } from '@core/io';
+import { listInputFiles, type SkippedFile } from './input-files.ts';
 import { readDecodedChunks } from './read-text-chunks.ts';
 
-/** File name endings taken from a folder (other files, e.g. notes or images, are skipped). */
-export const DATA_FILE_PATTERN = /\.(csv|tsv|txt|dat|tab|xlsx)$/i;
+export { DATA_FILE_PATTERN } from './input-files.ts';
 
 export interface InputFile {
   /** The path as the user would recognise it; used in every message. */
@@ -26,39 +26,16 @@ export interface InputFile {
   byteLength?: number;
 }
 
-/** Data files inside a folder, sorted by name. */
-export function dataFilesIn(folder: string): string[] {
-  return readdirSync(folder, { withFileTypes: true })
-    .filter((d) => d.isFile() && DATA_FILE_PATTERN.test(d.name) && !d.name.startsWith('.'))
-    .map((d) => join(folder, d.name))
-    .sort((a, b) => a.localeCompare(b, 'en', { numeric: true }));
-}
-
 /** Expands folders and checks every path; throws a one-line CliError naming the bad path. */
-export function expandInputs(paths: string[]): string[] {
-  const out: string[] = [];
-  for (const p of paths) {
-    let st;
-    try {
-      st = statSync(p);
-    } catch {
-      throw new CliError(`${p}: no such file or folder`, EXIT.dataError);
-    }
-    if (st.isDirectory()) {
-      const files = dataFilesIn(p);
-      if (files.length === 0)
-        throw new CliError(
-          `${p}: folder holds no data files (.csv, .tsv, .txt, .dat, .xlsx)`,
-          EXIT.dataError,
-        );
-      out.push(...files);
-    } else out.push(p);
-  }
-  return [...new Set(out)];
+export function expandInputs(paths: string[], skipped: SkippedFile[] = []): string[] {
+  const list = listInputFiles(paths);
+  skipped.push(...list.skipped);
+  return list.files;
 }
 
-export function readInputs(paths: string[]): InputFile[] {
-  return expandInputs(paths).map((name) => {
+/** Reads the sample's files; files skipped in folders are added to `skipped` with the reason. */
+export function readInputs(paths: string[], skipped: SkippedFile[] = []): InputFile[] {
+  return expandInputs(paths, skipped).map((name) => {
     try {
       if (isWorkbookName(name)) return { name, text: '', bytes: readFileSync(name) };
       const { chunks, encoding } = readDecodedChunks(name);
@@ -73,6 +50,9 @@ export function readInputs(paths: string[]): InputFile[] {
  * `readInputs`, with every .xlsx workbook replaced by its sheets ("seal.xlsx › 40 °C"), each read
  * as one file by the importer.
  */
-export async function readWorkbookInputs(paths: string[]): Promise<InputFile[]> {
-  return expandWorkbooks(readInputs(paths));
+export async function readWorkbookInputs(
+  paths: string[],
+  skipped: SkippedFile[] = [],
+): Promise<InputFile[]> {
+  return expandWorkbooks(readInputs(paths, skipped));
 }
