@@ -16,7 +16,7 @@ import { EXIT } from '../exit-codes.ts';
 /** File name endings taken from a folder (other files, e.g. notes or images, are skipped). */
 export const DATA_FILE_PATTERN = /\.(csv|tsv|txt|dat|tab|asc|prn|xlsx)$/i;
 /** The endings in words, for messages. */
-export const DATA_FILE_ENDINGS = '.csv, .tsv, .txt, .dat, .tab, .asc, .prn';
+export const DATA_FILE_ENDINGS = '.csv, .tsv, .txt, .dat, .tab, .asc, .prn, .xlsx';
 
 /** The first line of every table Thermoshift writes (core/report/csv). */
 export const THERMOSHIFT_OUTPUT_LINE = /^\uFEFF?# Thermoshift \d+\.\d+/;
