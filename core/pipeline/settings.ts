@@ -12,6 +12,7 @@ import type { ImportOptions } from '../io/types';
 import { describeIssue, type AnalysisOptions } from './options';
 import { MODULUS_UNITS, type ModulusUnit } from '../units/output-units';
 import { toCelsius } from './temperature';
+import { ZERO_CELSIUS_K } from '../data/temperature';
 import { SHIFT_MODEL_KINDS } from '../models/types';
 
 const quantityId = z.enum(QUANTITY_IDS as [QuantityId, ...QuantityId[]]);
@@ -114,7 +115,7 @@ export function settingTemperatureK(value: number | string, key: string, source:
   // kelvin written as °C twice) and would only produce numbers without meaning.
   if (!(reading.temperatureK > 0 && reading.temperatureK <= MAX_SETTING_TEMPERATURE_K))
     throw new SettingsError(
-      `${source}: ${key}: "${value}" is outside the valid range (above -273.15 °C, at most 1000 °C)`,
+      `${source}: ${key}: "${value}" is outside the valid range (above ${-ZERO_CELSIUS_K} °C, at most 1000 °C)`,
       key,
       source,
     );
