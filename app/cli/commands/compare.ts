@@ -10,7 +10,6 @@
 import { kelvinToCelsius } from '@core/data';
 import { Command } from 'commander';
 import { readFileSync } from 'node:fs';
-import { join } from 'node:path';
 import { compareAnalyses } from '@core/compare';
 import { comparisonCsv, verdictsCsv } from '@core/compare';
 import { comparisonReportHtml } from '@core/compare';
@@ -24,7 +23,7 @@ import { parseAnalysis, ANALYSIS_FILE_SUFFIX } from '../../renderer/src/document
 import { addSampleOptions, resolveSettings, type SampleOptionValues } from '../sample-options.ts';
 import { readInputs } from '../io/read-inputs.ts';
 import { analyseSample } from '../run-sample.ts';
-import { assertWritable, writeFileAtomic } from '../io/atomic-write.ts';
+import { writeOutputSet } from '../io/output-set.ts';
 import { toCliError } from '../error-map.ts';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
@@ -164,15 +163,18 @@ export function registerCompare(program: Command): void {
     }
     if (o.out) {
       const date = checkDate(o.date);
-      const targets = COMPARE_OUTPUT_FILES.map((f) => join(o.out as string, f));
-      assertWritable(targets, !!o.force);
       const texts = [
         `${JSON.stringify(comparison, null, 2)}\n`,
         comparisonCsv(comparison),
         verdictsCsv(comparison),
         comparisonReportHtml(comparison, { date }),
       ];
-      targets.forEach((t, k) => writeFileAtomic(t, texts[k], { force: !!o.force }));
+      // One set, swapped in as a whole like build's outputs (../io/output-set.ts).
+      const targets = writeOutputSet(
+        o.out,
+        COMPARE_OUTPUT_FILES.map((name, k) => ({ name, content: texts[k] })),
+        { force: !!o.force },
+      );
       process.stderr.write(`compare: wrote ${targets.length} files to ${o.out}\n`);
     }
     process.stdout.write(o.json ? `${JSON.stringify(comparison)}\n` : comparisonText(comparison));
