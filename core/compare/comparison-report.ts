@@ -37,6 +37,14 @@ export interface ComparisonReportOptions {
 const main = (c: Comparison): 'storageModulus' | 'relaxationModulus' =>
   c.abscissa === 'time' ? 'relaxationModulus' : 'storageModulus';
 
+/** The reduced abscissa shared by the overlay and the difference plots. */
+function reducedAxis(c: Comparison): ChartSpec['x'] {
+  return {
+    kind: 'log',
+    label: c.abscissa === 'time' ? 'reduced time t/aT (s)' : 'reduced frequency aT·ω (rad/s)',
+  };
+}
+
 export function overlayChart(c: Comparison): ChartSpec {
   const q = main(c);
   const curves = [c.reference, ...c.samples];
@@ -56,10 +64,7 @@ export function overlayChart(c: Comparison): ChartSpec {
     title: `${q === 'storageModulus' ? 'Storage modulus' : 'Relaxation modulus'} at ${kelvinToCelsius(c.referenceTemperatureK).toFixed(1)} °C`,
     width: 640,
     height: 380,
-    x: {
-      kind: 'log',
-      label: c.abscissa === 'time' ? 'reduced time t/aT (s)' : 'reduced frequency aT·ω (rad/s)',
-    },
+    x: reducedAxis(c),
     y: { kind: 'log', label: 'modulus (Pa)' },
     series,
     legend: series.map((s) => ({ name: s.name, colour: s.colour, marker: s.marker, line: s.line })),
@@ -111,10 +116,7 @@ export function differenceChart(
     title: 'Difference from the reference (sample − reference), with 95 % band',
     width: 640,
     height: 320,
-    x: {
-      kind: 'log',
-      label: c.abscissa === 'time' ? 'reduced time t/aT (s)' : 'reduced frequency aT·ω (rad/s)',
-    },
+    x: reducedAxis(c),
     y: { kind: 'linear', label: 'difference (%)' },
     series,
     bands,

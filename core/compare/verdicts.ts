@@ -8,7 +8,8 @@
  */
 import { celsiusToKelvin } from '../data/temperature';
 import type { QuantityId } from '../data/types';
-import { Z95, normalCdf } from './normal';
+import { normalCdf } from '../numeric';
+import { Z95 } from './normal';
 import { criterionName, type SpecCriterion, type Specification } from './spec-schema';
 import type { SpecVerdict } from './spec-types';
 import type { Estimate, ModelDifference, IndicatorDifference, QuantityDifference } from './types';
@@ -77,6 +78,21 @@ function sentence(
   return `inconclusive: ${found}; the 95 % interval straddles the ${limit}${conf}.`;
 }
 
+/** A criterion that could not be judged: inconclusive, with the reason. */
+function notJudged(
+  head: Pick<SpecVerdict, 'criterion' | 'kind' | 'limits' | 'unit'>,
+  reason: string,
+): SpecVerdict {
+  return {
+    ...head,
+    verdict: 'inconclusive',
+    value: null,
+    stdErr: null,
+    probabilityOutside: null,
+    reason: `inconclusive: ${reason}`,
+  };
+}
+
 function scalar(
   name: string,
   kind: string,
@@ -87,18 +103,7 @@ function scalar(
   unit: string,
   missing: string,
 ): SpecVerdict {
-  if (!e)
-    return {
-      criterion: name,
-      kind,
-      verdict: 'inconclusive',
-      value: null,
-      stdErr: null,
-      limits: [lo, hi],
-      unit,
-      probabilityOutside: null,
-      reason: `inconclusive: ${missing}.`,
-    };
+  if (!e) return notJudged({ criterion: name, kind, limits: [lo, hi], unit }, `${missing}.`);
   const v = state(e.value, e.stdErr, lo, hi);
   const p =
     e.stdErr !== null && e.stdErr > 0 ? probabilityOutside(e.value, e.stdErr, lo, hi) : null;
@@ -141,14 +146,7 @@ function curveVerdict(
   const base = { criterion: name, kind: 'curve', limits, unit: '%' };
   const range = `${fmt(from, 3)}–${fmt(to, 3)} ${input.xUnit}`;
   if (!diff || diff.log10x.length === 0)
-    return {
-      ...base,
-      verdict: 'inconclusive',
-      value: null,
-      stdErr: null,
-      probabilityOutside: null,
-      reason: `inconclusive: ${label} was not measured on both curves at the common temperature.`,
-    };
+    return notJudged(base, `${label} was not measured on both curves at the common temperature.`);
   const [u0, u1] = [Math.log10(from), Math.log10(to)];
   const half = input.binDecades / 2 + 1e-9;
   const idx = diff.log10x
@@ -162,14 +160,10 @@ function curveVerdict(
     const w = diff.window
       ? `${fmt(diff.window[0], 3)}–${fmt(diff.window[1], 3)} ${input.xUnit}`
       : 'none';
-    return {
-      ...base,
-      verdict: 'inconclusive',
-      value: null,
-      stdErr: null,
-      probabilityOutside: null,
-      reason: `inconclusive: the band ${range} is not covered by the common reduced window of both curves (${w}); extending beyond it would be extrapolation.`,
-    };
+    return notJudged(
+      base,
+      `the band ${range} is not covered by the common reduced window of both curves (${w}); extending beyond it would be extrapolation.`,
+    );
   }
   let worst = idx[0];
   let worstP = -1;

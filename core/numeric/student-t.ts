@@ -4,6 +4,7 @@
  * (Press, Teukolsky, Vetterling & Flannery, Numerical Recipes, 3rd ed., 2007, §6.4);
  * log-gamma by the Lanczos approximation (same book, §6.1, g = 7 coefficients).
  */
+import { normalCdf } from './normal';
 
 const LANCZOS = [
   0.99999999999980993, 676.5203681218851, -1259.1392167224028, 771.32342877765313,
@@ -93,35 +94,4 @@ export function studentTQuantile(p: number, dof: number): number {
     else hi = mid;
   }
   return 0.5 * (lo + hi);
-}
-
-/** Standard normal CDF via the incomplete beta limit is unstable; use erfc (Numerical Recipes §6.2.2). */
-function normalCdf(x: number): number {
-  return 0.5 * erfc(-x / Math.SQRT2);
-}
-
-/** Complementary error function, Chebyshev fit (Numerical Recipes, 3rd ed., §6.2.2), |rel err| < 1.2e-7. */
-function erfc(x: number): number {
-  const z = Math.abs(x);
-  const t = 1 / (1 + 0.5 * z);
-  const r =
-    t *
-    Math.exp(
-      -z * z -
-        1.26551223 +
-        t *
-          (1.00002368 +
-            t *
-              (0.37409196 +
-                t *
-                  (0.09678418 +
-                    t *
-                      (-0.18628806 +
-                        t *
-                          (0.27886807 +
-                            t *
-                              (-1.13520398 +
-                                t * (1.48851587 + t * (-0.82215223 + t * 0.17087277)))))))),
-    );
-  return x >= 0 ? r : 2 - r;
 }

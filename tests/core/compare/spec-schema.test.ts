@@ -7,7 +7,8 @@
 import { describe, expect, it } from 'vitest';
 import { parseSpecification, SpecError } from '../../../core/compare';
 import { judge } from '../../../core/compare/verdicts';
-import { normalCdf, bonferroniZ } from '../../../core/compare/normal';
+import { bonferroniZ } from '../../../core/compare/normal';
+import { normalCdf } from '../../../core/numeric';
 import { expectAbsClose } from '../../helpers/assert-close';
 
 const base = { format: 'thermoshift-spec', formatVersion: 1, name: 't' };
