@@ -18,6 +18,8 @@ import {
   openInImportPreview,
   previewWebBuild,
   sealSampleFiles,
+  canvasPaintedPixels,
+  whenSettled,
 } from '../helpers/browser';
 import { expectAbsClose } from '../helpers/assert-close';
 import { watchCsp, type CspWatch } from '../helpers/csp-watch';
@@ -33,18 +35,7 @@ let csp: CspWatch;
 const shot = (name: string): Promise<Buffer> =>
   page.screenshot({ path: join(ARTIFACT_DIR, `app-${name}.png`) });
 
-/** Non-white pixels on the canvas of the plot on screen (the plot really drew). */
-async function paintedPixels(): Promise<number> {
-  return page.evaluate(() => {
-    const c = document.querySelector<HTMLCanvasElement>('canvas[data-plot]');
-    const ctx2d = c?.getContext('2d');
-    if (!c || !ctx2d) return 0;
-    const d = ctx2d.getImageData(0, 0, c.width, c.height).data;
-    let n = 0;
-    for (let i = 0; i < d.length; i += 4) if (d[i] < 235 || d[i + 1] < 235 || d[i + 2] < 235) n++;
-    return n;
-  });
-}
+const paintedPixels = (): Promise<number> => canvasPaintedPixels(page);
 
 const rowText = (id: string, role: string): Promise<string> =>
   page.locator(`tr[data-isotherm="${id}"] [data-role="${role}"]`).innerText();
@@ -58,9 +49,7 @@ async function rowIdAt(celsius: string): Promise<string> {
   return (await row.first().getAttribute('data-isotherm')) ?? '';
 }
 
-async function settled(): Promise<void> {
-  await page.waitForSelector('[data-role="busy"][aria-busy="false"]');
-}
+const settled = (): Promise<void> => whenSettled(page);
 
 beforeAll(async () => {
   mkdirSync(ARTIFACT_DIR, { recursive: true });

@@ -20,15 +20,14 @@ import {
   openInImportPreview,
   previewWebBuild,
   sealSampleFiles,
+  whenSettled,
 } from '../helpers/browser';
 import { cspOfHtml, parseCsp, watchCsp, type CspWatch } from '../helpers/csp-watch';
 import { APP_ORIGIN, createAppFileHandler } from '../../app/main/app-protocol';
 
 const ROOT = process.cwd();
 
-async function settled(page: Page): Promise<void> {
-  await page.waitForSelector('[data-role="busy"][aria-busy="false"]');
-}
+const settled = whenSettled;
 
 /** Every view, the shortcuts dialog and the import preview: what the page can show. */
 async function walkThrough(page: Page): Promise<void> {

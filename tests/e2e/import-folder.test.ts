@@ -21,7 +21,14 @@ import {
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { strFromU8, unzipSync } from 'fflate';
-import { ARTIFACT_DIR, closePreview, launchBrowser, previewWebBuild } from '../helpers/browser';
+import {
+  ARTIFACT_DIR,
+  closePreview,
+  launchBrowser,
+  previewWebBuild,
+  canvasPaintedPixels,
+  whenSettled,
+} from '../helpers/browser';
 import { expectAbsClose } from '../helpers/assert-close';
 import { watchCsp, type CspWatch } from '../helpers/csp-watch';
 import {
@@ -42,22 +49,11 @@ let folder: string;
 let workbookPath: string;
 let workbookBytes: Uint8Array;
 
-const settled = (): Promise<unknown> =>
-  page.waitForSelector('[data-role="busy"][aria-busy="false"]');
+const settled = (): Promise<void> => whenSettled(page);
 const shot = (name: string): Promise<Buffer> =>
   page.screenshot({ path: join(ARTIFACT_DIR, `${name}.png`) });
 
-async function paintedPixels(): Promise<number> {
-  return page.evaluate(() => {
-    const c = document.querySelector<HTMLCanvasElement>('canvas[data-plot]');
-    const g = c?.getContext('2d');
-    if (!c || !g) return 0;
-    const d = g.getImageData(0, 0, c.width, c.height).data;
-    let n = 0;
-    for (let i = 0; i < d.length; i += 4) if (d[i] < 235 || d[i + 1] < 235 || d[i + 2] < 235) n++;
-    return n;
-  });
-}
+const paintedPixels = (): Promise<number> => canvasPaintedPixels(page);
 
 /** log10 aT of every isotherm in the list, by its temperature as shown. */
 async function shifts(): Promise<Map<string, number>> {

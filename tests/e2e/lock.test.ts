@@ -8,16 +8,20 @@ import type { PreviewServer } from 'vite';
 import type { BrowserContext, Page } from 'playwright-core';
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
-import { ARTIFACT_DIR, closePreview, launchBrowser, previewWebBuild } from '../helpers/browser';
+import {
+  ARTIFACT_DIR,
+  closePreview,
+  launchBrowser,
+  previewWebBuild,
+  whenSettled,
+} from '../helpers/browser';
 import { expectAbsClose } from '../helpers/assert-close';
 
 let server: PreviewServer;
 let ctx: BrowserContext;
 let page: Page;
 
-async function settled(): Promise<void> {
-  await page.waitForSelector('[data-role="busy"][aria-busy="false"]');
-}
+const settled = (): Promise<void> => whenSettled(page);
 
 /** log10 aT shown in every roster row, by isotherm id (NaN where none is shown). */
 async function shifts(): Promise<Record<string, number>> {

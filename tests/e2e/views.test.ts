@@ -21,6 +21,8 @@ import {
   openInImportPreview,
   previewWebBuild,
   sealSampleFiles,
+  canvasPaintedPixels,
+  whenSettled,
 } from '../helpers/browser';
 import { expectAbsClose } from '../helpers/assert-close';
 import { watchCsp, type CspWatch } from '../helpers/csp-watch';
@@ -30,8 +32,7 @@ let ctx: BrowserContext;
 let page: Page;
 let csp: CspWatch;
 
-const settled = (): Promise<unknown> =>
-  page.waitForSelector('[data-role="busy"][aria-busy="false"]');
+const settled = (): Promise<void> => whenSettled(page);
 const shot = (name: string): Promise<Buffer> =>
   page.screenshot({ path: join(ARTIFACT_DIR, `${name}.png`) });
 const downloaded = async (d: Promise<Download>): Promise<{ name: string; bytes: Buffer }> => {
@@ -41,17 +42,7 @@ const downloaded = async (d: Promise<Download>): Promise<{ name: string; bytes: 
 /** Width and height of a PNG from its IHDR chunk (PNG spec, ISO/IEC 15948:2004 §11.2.2). */
 const pngSize = (b: Buffer): [number, number] => [b.readUInt32BE(16), b.readUInt32BE(20)];
 
-async function paintedPixels(): Promise<number> {
-  return page.evaluate(() => {
-    const c = document.querySelector<HTMLCanvasElement>('canvas[data-plot]');
-    const g = c?.getContext('2d');
-    if (!c || !g) return 0;
-    const d = g.getImageData(0, 0, c.width, c.height).data;
-    let n = 0;
-    for (let i = 0; i < d.length; i += 4) if (d[i] < 235 || d[i + 1] < 235 || d[i + 2] < 235) n++;
-    return n;
-  });
-}
+const paintedPixels = (): Promise<number> => canvasPaintedPixels(page);
 
 /** Every tab and every view inside it that the open analysis offers. */
 async function allViews(): Promise<{ tab: string; view: string | null }[]> {

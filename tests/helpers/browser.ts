@@ -62,3 +62,21 @@ export async function openInImportPreview(page: Page, files: string[]): Promise<
   await (await chooser).setFiles(files);
   await page.waitForSelector('[data-role="import-groups"] tr');
 }
+
+/** Waits until the app has no fit running (the busy bar says so). */
+export async function whenSettled(page: Page): Promise<void> {
+  await page.waitForSelector('[data-role="busy"][aria-busy="false"]');
+}
+
+/** Non-white pixels on the canvas of the plot on screen (the plot really drew). */
+export function canvasPaintedPixels(page: Page): Promise<number> {
+  return page.evaluate(() => {
+    const c = document.querySelector<HTMLCanvasElement>('canvas[data-plot]');
+    const ctx2d = c?.getContext('2d');
+    if (!c || !ctx2d) return 0;
+    const d = ctx2d.getImageData(0, 0, c.width, c.height).data;
+    let n = 0;
+    for (let i = 0; i < d.length; i += 4) if (d[i] < 235 || d[i + 1] < 235 || d[i + 2] < 235) n++;
+    return n;
+  });
+}
