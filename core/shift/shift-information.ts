@@ -10,6 +10,7 @@
  */
 import type { Isotherm, QuantityId } from '../data/types';
 import { logOrdinate, quantityValues } from './drivers';
+import { centredQuadraticSums, quadraticSums, S1, S2, S3, S4, T0, T1, T2 } from './local-quadratic';
 
 /** Smallest noise assumed for one point, decades (≈ 1 %): no instrument measures better. */
 export const INFORMATION_NOISE_FLOOR_DECADES = 0.005;
@@ -54,36 +55,21 @@ export function shiftErrorFloor(iso: Isotherm, drivers: QuantityId[]): number {
 /** Least-squares y ≈ c0 + c1 x + c2 x² (x centred for conditioning); null when degenerate. */
 function quadratic(x: number[], y: number[]): [number, number, number] | null {
   const n = x.length;
-  const m = x.reduce((a, b) => a + b, 0) / n;
-  let s1 = 0,
-    s2 = 0,
-    s3 = 0,
-    s4 = 0,
-    t0 = 0,
-    t1 = 0,
-    t2 = 0;
-  for (let i = 0; i < n; i++) {
-    const u = x[i] - m;
-    const u2 = u * u;
-    s1 += u;
-    s2 += u2;
-    s3 += u2 * u;
-    s4 += u2 * u2;
-    t0 += y[i];
-    t1 += u * y[i];
-    t2 += u2 * y[i];
-  }
+  // Centred on the middle entry (the sums of local-quadratic.ts): u = x − m.
+  const m = x[n >> 1];
+  const sums = quadraticSums();
+  const d = centredQuadraticSums(x, y, 0, n - 1, n >> 1, sums); // det of A below
+  const [s1, s2, s3, s4] = [sums[S1], sums[S2], sums[S3], sums[S4]];
   const A = [
     [n, s1, s2],
     [s1, s2, s3],
     [s2, s3, s4],
   ];
-  const b = [t0, t1, t2];
+  const b = [sums[T0], sums[T1], sums[T2]];
   const det3 = (M: number[][]): number =>
     M[0][0] * (M[1][1] * M[2][2] - M[1][2] * M[2][1]) -
     M[0][1] * (M[1][0] * M[2][2] - M[1][2] * M[2][0]) +
     M[0][2] * (M[1][0] * M[2][1] - M[1][1] * M[2][0]);
-  const d = det3(A);
   if (!(Math.abs(d) > 1e-12 * Math.max(1, s4 * s2 * n))) return null;
   const col = (j: number): number[][] => A.map((row, r) => row.map((v, c) => (c === j ? b[r] : v)));
   const [a0, a1, a2] = [0, 1, 2].map((j) => det3(col(j)) / d);
