@@ -2,17 +2,16 @@
  * `thermoshift inspect FILE…`: shows what the importer recognised in the files of one sample
  * (layout, delimiter, columns and units, isotherms, warnings) without analysing anything.
  */
-import { readFileSync, statSync } from 'node:fs';
 import { basename } from 'node:path';
 import { Command, Option } from 'commander';
 import { kelvinToCelsius, quantitySymbol } from '@core/data';
-import type { ColumnMapping, ColumnRole, ImportResult, SourceFile } from '@core/io';
-import { COLUMN_ROLES, expandWorkbooks, ImportError, importFiles, isWorkbookName } from '@core/io';
+import type { ColumnMapping, ColumnRole, ImportResult } from '@core/io';
+import { COLUMN_ROLES, expandWorkbooks, ImportError, importFiles } from '@core/io';
 import { parseTemperatureText } from '@core/units';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
-import { readDecodedChunks } from '../io/read-text-chunks.ts';
-import { listInputFiles, skippedLines } from '../io/input-files.ts';
+import { skippedLines, type SkippedFile } from '../io/input-files.ts';
+import { readInputs, type InputFile } from '../io/read-inputs.ts';
 
 interface InspectOptions {
   json?: boolean;
@@ -26,23 +25,14 @@ interface InspectOptions {
 const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
 
 /**
- * Files named on the command line; a folder stands for the data files directly inside it (the
- * same walk as build and batch: ../io/input-files.ts). Skipped files are told on stderr.
+ * Files named on the command line, read as build and batch read them (../io/read-inputs.ts: the
+ * same folder walk, decoding and chunked reading). Skipped files are told on stderr.
  */
-export function readSourceFiles(paths: string[]): (SourceFile & { bytes?: Uint8Array })[] {
-  const { files: names, skipped } = listInputFiles(paths);
+export function readSourceFiles(paths: string[]): InputFile[] {
+  const skipped: SkippedFile[] = [];
+  const files = readInputs(paths, skipped);
   process.stderr.write(skippedLines(skipped));
-  return names.map((name) => {
-    try {
-      // A workbook's sheets are read by expandWorkbooks (each sheet one file).
-      if (isWorkbookName(name)) return { name, text: '', bytes: readFileSync(name) };
-      // The same decoding and chunked reading as build and batch (io/read-text-chunks.ts).
-      const { chunks, encoding } = readDecodedChunks(name);
-      return { name, text: '', chunks, encoding, byteLength: statSync(name).size };
-    } catch (e) {
-      throw new CliError(`${name}: cannot read it (${(e as Error).message})`);
-    }
-  });
+  return files;
 }
 
 /** "COL=ROLE[:UNIT][@TEMPERATURE]" → a column mapping; COL is a 1-based index or header text. */
