@@ -7,28 +7,24 @@
  * session ran under the page's CSP without a violation.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { PreviewServer } from 'vite';
-import type { BrowserContext, Page } from 'playwright-core';
-import { mkdirSync, readFileSync } from 'node:fs';
+import type { Page } from 'playwright-core';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
+import { openApp, undoUntilUnlocked, type AppSession } from '../helpers/app-session';
 import {
   ARTIFACT_DIR,
-  closePreview,
-  launchBrowser,
   openInImportPreview,
-  previewWebBuild,
   sealSampleFiles,
   canvasPaintedPixels,
   whenSettled,
 } from '../helpers/browser';
 import { expectAbsClose } from '../helpers/assert-close';
-import { watchCsp, type CspWatch } from '../helpers/csp-watch';
+import type { CspWatch } from '../helpers/csp-watch';
 
 const ROOT = process.cwd();
 const SEAL = join(ROOT, 'samples', 'seal-dma');
 
-let server: PreviewServer;
-let ctx: BrowserContext;
+let app: AppSession;
 let page: Page;
 let csp: CspWatch;
 
@@ -52,18 +48,12 @@ async function rowIdAt(celsius: string): Promise<string> {
 const settled = (): Promise<void> => whenSettled(page);
 
 beforeAll(async () => {
-  mkdirSync(ARTIFACT_DIR, { recursive: true });
-  server = await previewWebBuild();
-  ctx = await launchBrowser();
-  page = await ctx.newPage();
-  csp = await watchCsp(page);
-  page.on('pageerror', (e) => console.error('page error:', e.message));
-  await page.goto(server.resolvedUrls!.local[0]);
+  app = await openApp();
+  ({ page, csp } = app);
 });
 
 afterAll(async () => {
-  await ctx?.close();
-  await closePreview(server);
+  await app?.close();
 });
 
 describe('the Thermoshift app in Chromium', () => {
@@ -194,12 +184,7 @@ describe('the Thermoshift app in Chromium', () => {
     expectAbsClose(after - before, want, Math.max(0.02 * want, 0.0015), 'shift of a 15 px drag');
     await shot('after-drag');
 
-    await page.keyboard.press('Control+z');
-    await page.waitForFunction(
-      (sel) => document.querySelector(sel)?.getAttribute('aria-pressed') === 'false',
-      `tr[data-isotherm="${id}"] [data-role="lock"]`,
-    );
-    await settled();
+    await undoUntilUnlocked(page, id);
     expectAbsClose(Number(await rowText(id, 'log-aT')), before, 0.0005, 'log10 aT after undo');
   });
 

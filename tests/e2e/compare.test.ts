@@ -6,33 +6,25 @@
  * lots from the built-in invented demo. Waits on what the page shows; no CSP violation allowed.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { PreviewServer } from 'vite';
-import type { BrowserContext, Page } from 'playwright-core';
-import { mkdirSync } from 'node:fs';
+import type { Page } from 'playwright-core';
 import { join } from 'node:path';
-import { ARTIFACT_DIR, closePreview, launchBrowser, previewWebBuild } from '../helpers/browser';
-import { watchCsp, type CspWatch } from '../helpers/csp-watch';
+import { openApp, type AppSession } from '../helpers/app-session';
+import { ARTIFACT_DIR } from '../helpers/browser';
+import type { CspWatch } from '../helpers/csp-watch';
 
 const LOTS = join(process.cwd(), 'samples', 'lot-release');
 
-let server: PreviewServer;
-let ctx: BrowserContext;
+let app: AppSession;
 let page: Page;
 let csp: CspWatch;
 
 beforeAll(async () => {
-  mkdirSync(ARTIFACT_DIR, { recursive: true });
-  server = await previewWebBuild();
-  ctx = await launchBrowser();
-  page = await ctx.newPage();
-  csp = await watchCsp(page);
-  page.on('pageerror', (e) => console.error('page error:', e.message));
-  await page.goto(server.resolvedUrls!.local[0]);
+  app = await openApp();
+  ({ page, csp } = app);
 });
 
 afterAll(async () => {
-  await ctx?.close();
-  await closePreview(server);
+  await app?.close();
 });
 
 const verdictOf = (sample: RegExp, criterion: string): Promise<string> =>

@@ -8,8 +8,7 @@
  * and workbook-*.png. The last test checks the session ran under the CSP without a violation.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { PreviewServer } from 'vite';
-import type { BrowserContext, Download, Page } from 'playwright-core';
+import type { Download, Page } from 'playwright-core';
 import {
   copyFileSync,
   mkdirSync,
@@ -21,16 +20,10 @@ import {
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { strFromU8, unzipSync } from 'fflate';
-import {
-  ARTIFACT_DIR,
-  closePreview,
-  launchBrowser,
-  previewWebBuild,
-  canvasPaintedPixels,
-  whenSettled,
-} from '../helpers/browser';
+import { openApp, undoUntilUnlocked, type AppSession } from '../helpers/app-session';
+import { ARTIFACT_DIR, canvasPaintedPixels, whenSettled } from '../helpers/browser';
 import { expectAbsClose } from '../helpers/assert-close';
-import { watchCsp, type CspWatch } from '../helpers/csp-watch';
+import type { CspWatch } from '../helpers/csp-watch';
 import {
   buildDemoSample,
   demoScenario,
@@ -41,8 +34,7 @@ import { temperatureFromFileName } from '../../core/io/file-name';
 
 const SEAL = join(process.cwd(), 'samples', 'seal-dma');
 
-let server: PreviewServer;
-let ctx: BrowserContext;
+let app: AppSession;
 let page: Page;
 let csp: CspWatch;
 let folder: string;
@@ -77,7 +69,6 @@ async function accept(sample: RegExp): Promise<void> {
 }
 
 beforeAll(async () => {
-  mkdirSync(ARTIFACT_DIR, { recursive: true });
   // The folder as a lab keeps it: the data files and notes beside them (skipped by the import).
   folder = join(mkdtempSync(join(tmpdir(), 'thermoshift-folder-')), 'seal-dma');
   mkdirSync(folder);
@@ -93,19 +84,12 @@ beforeAll(async () => {
   workbookPath = join(mkdtempSync(join(tmpdir(), 'thermoshift-book-')), 'seal.xlsx');
   writeFileSync(workbookPath, workbookBytes);
 
-  server = await previewWebBuild();
-  ctx = await launchBrowser();
-  page = await ctx.newPage();
-  csp = await watchCsp(page);
-  page.on('pageerror', (e) => console.error('page error:', e.message));
-  await page.goto(server.resolvedUrls!.local[0]);
-  await page.waitForSelector('[data-view="master"] canvas');
-  await settled();
+  app = await openApp({ untilShown: true });
+  ({ page, csp } = app);
 });
 
 afterAll(async () => {
-  await ctx?.close();
-  await closePreview(server);
+  await app?.close();
 });
 
 describe('importing a folder and a workbook', () => {
@@ -219,12 +203,7 @@ describe('importing a folder and a workbook', () => {
     // 2 % of the shift, as the drag accuracy asked of the app (views.test.ts checks 120 px).
     expectAbsClose(Number(await page.innerText(cell)) - before, want, 0.02 * want, '40 px drag');
     await shot('workbook-after-drag');
-    await page.keyboard.press('Control+z');
-    await page.waitForFunction(
-      (sel) => document.querySelector(sel)?.getAttribute('aria-pressed') === 'false',
-      `tr[data-isotherm="${id}"] [data-role="lock"]`,
-    );
-    await settled();
+    await undoUntilUnlocked(page, id);
     expectAbsClose(Number(await page.innerText(cell)), before, 0.0005, 'log10 aT after undo');
   });
 

@@ -4,21 +4,13 @@
  * isotherm within 0.01 decades of its unlocked shift and keeps the reference isotherm in the fit.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { PreviewServer } from 'vite';
-import type { BrowserContext, Page } from 'playwright-core';
-import { mkdirSync } from 'node:fs';
+import type { Page } from 'playwright-core';
 import { join } from 'node:path';
-import {
-  ARTIFACT_DIR,
-  closePreview,
-  launchBrowser,
-  previewWebBuild,
-  whenSettled,
-} from '../helpers/browser';
+import { openApp, type AppSession } from '../helpers/app-session';
+import { ARTIFACT_DIR, whenSettled } from '../helpers/browser';
 import { expectAbsClose } from '../helpers/assert-close';
 
-let server: PreviewServer;
-let ctx: BrowserContext;
+let app: AppSession;
 let page: Page;
 
 const settled = (): Promise<void> => whenSettled(page);
@@ -36,17 +28,12 @@ async function shifts(): Promise<Record<string, number>> {
 }
 
 beforeAll(async () => {
-  mkdirSync(ARTIFACT_DIR, { recursive: true });
-  server = await previewWebBuild();
-  ctx = await launchBrowser();
-  page = await ctx.newPage();
-  page.on('pageerror', (e) => console.error('page error:', e.message));
-  await page.goto(server.resolvedUrls!.local[0]);
+  app = await openApp();
+  page = app.page;
 });
 
 afterAll(async () => {
-  await ctx?.close();
-  await closePreview(server);
+  await app?.close();
 });
 
 describe('a locked shift in the app', () => {

@@ -8,27 +8,23 @@
  * Screenshots go to test-results/artifacts/ (view-demo-*.png, view-seal-*.png, drag-*.png).
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { PreviewServer } from 'vite';
-import type { BrowserContext, Download, Page } from 'playwright-core';
-import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import type { Download, Page } from 'playwright-core';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { unzipSync } from 'fflate';
+import { openApp, undoUntilUnlocked, type AppSession } from '../helpers/app-session';
 import {
   ARTIFACT_DIR,
-  closePreview,
-  launchBrowser,
   openInImportPreview,
-  previewWebBuild,
   sealSampleFiles,
   canvasPaintedPixels,
   whenSettled,
 } from '../helpers/browser';
 import { expectAbsClose } from '../helpers/assert-close';
-import { watchCsp, type CspWatch } from '../helpers/csp-watch';
+import type { CspWatch } from '../helpers/csp-watch';
 
-let server: PreviewServer;
-let ctx: BrowserContext;
+let app: AppSession;
 let page: Page;
 let csp: CspWatch;
 
@@ -106,22 +102,12 @@ async function everyView(prefix: string): Promise<string[]> {
 }
 
 beforeAll(async () => {
-  mkdirSync(ARTIFACT_DIR, { recursive: true });
-  server = await previewWebBuild();
-  ctx = await launchBrowser();
-  await ctx.grantPermissions(['clipboard-read', 'clipboard-write'], {
-    origin: new URL(server.resolvedUrls!.local[0]).origin,
-  });
-  page = await ctx.newPage();
-  csp = await watchCsp(page);
-  await page.goto(server.resolvedUrls!.local[0]);
-  await page.waitForSelector('[data-view="master"] canvas');
-  await settled();
+  app = await openApp({ clipboard: true, untilShown: true });
+  ({ page, csp } = app);
 });
 
 afterAll(async () => {
-  await ctx?.close();
-  await closePreview(server);
+  await app?.close();
 });
 
 describe('dragging and nudging a curve', () => {
@@ -186,12 +172,7 @@ describe('dragging and nudging a curve', () => {
     expect(Math.abs(error), 'shift = 120 px in decades within 2 %').toBeLessThanOrEqual(0.02);
     await shot('drag-after');
 
-    await page.keyboard.press('Control+z');
-    await page.waitForFunction(
-      (sel) => document.querySelector(sel)?.getAttribute('aria-pressed') === 'false',
-      `tr[data-isotherm="${id}"] [data-role="lock"]`,
-    );
-    await settled();
+    await undoUntilUnlocked(page, id);
     expectAbsClose(Number(await rowText(id, 'log-aT')), before, 0.0005, 'log10 aT after undo');
   });
 
