@@ -89,8 +89,8 @@ export interface ShiftModelDescriptor<
   parameters: readonly ShiftModelParameter[];
   /**
    * A physical law (true) is used for derived answers (the tan δ peak temperature) and is listed
-   * in the Prony file's header, the batch index and the CLI's short result; an empirical curve
-   * (false) is read only inside its fitted range.
+   * in the Prony file's header and the CLI's short result; an empirical curve (false) is read only
+   * inside its fitted range.
    */
   physical: boolean;
   /** The fit: generalised least squares on log10 aT with the shift engine's covariance. */
