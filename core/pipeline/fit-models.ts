@@ -7,7 +7,7 @@
  * not an error; a fit that stops without converging gives a `not-converged` warning naming it.
  * Each model is fitted, named and given its derived quantities by its registry descriptor.
  */
-import { shiftModelBand, shiftModels, suggestShiftModel } from '../models';
+import { findShiftModel, shiftModelBand, shiftModels, suggestShiftModel } from '../models';
 import type { ShiftFitCommon, ShiftPoint } from '../models/types';
 import { setModelResult, type ShiftModelResult } from './model-results';
 import type { ResolvedAnalysisOptions } from './options';
@@ -132,6 +132,14 @@ export function fitShiftModels(
       return undefined;
     }
   };
+  // a kind that is no longer registered (options made while it was) is said, not dropped
+  for (const kind of s.models)
+    if (!findShiftModel(kind))
+      warnings.push({
+        code: 'model-failed',
+        message: `The ${kind} model could not be fitted: no shift model of that kind is registered`,
+        model: kind,
+      });
   // in the registry's order, whatever the order of the settings
   for (const d of shiftModels().filter((m) => s.models.includes(m.kind))) {
     const f = attempt(d.kind, d.name, () => d.fit(points, opts));

@@ -13,6 +13,7 @@ import {
 import { buildMasterCurve } from '../../../../core/pipeline/build-master-curve';
 import { analysisSummary } from '../../../../core/pipeline/summary';
 import { modelResult } from '../../../../core/pipeline/model-results';
+import { fitShiftModels } from '../../../../core/pipeline/fit-models';
 import { parseSettings } from '../../../../core/pipeline/settings';
 import { predictFromAnalysis } from '../../../../core/pipeline/predict-from-analysis';
 import { outputFiles } from '../../../../core/report/output-files';
@@ -161,6 +162,19 @@ describe('a toy model through the registry alone', () => {
     });
     expect(p.model).toBe('linear');
     expectAbsClose(p.log10aT, r.bPerK * -5, 1e-12, 'log10 aT at 175 °C');
+  });
+
+  it('fitShiftModels() says so when a kind in the options is no longer registered', () => {
+    const a = build();
+    const options = { ...a.settings, models: ['arrhenius', 'gone'] };
+    const warnings: { code: string; message: string; model?: string }[] = [];
+    const models = fitShiftModels(a.curves, options, warnings);
+    expect(modelResult(models, 'arrhenius')).toBeDefined();
+    expect(warnings).toContainEqual({
+      code: 'model-failed',
+      message: 'The gone model could not be fitted: no shift model of that kind is registered',
+      model: 'gone',
+    });
   });
 
   it('the summary, the models CSV, the report and the shift-factor chart carry the toy model', () => {
