@@ -5,7 +5,7 @@
  * y; frequencies in Hz, kHz, mHz or rad/s. Parsed into core's AnalysisQuery (SI units).
  */
 import type { AnalysisQuery } from '@core/pipeline';
-import { settingTemperatureK } from '@core/pipeline';
+import { findShiftModel, settingTemperatureK, shiftModelKindList } from '@core/pipeline';
 import type { ShiftModelKind } from '@core/pipeline';
 import type { PredictedQuantity } from '@core/spectrum';
 import { CliError } from './cli-error.ts';
@@ -94,8 +94,8 @@ export function parsePredictQuery(query: string): AnalysisQuery & { text: string
   let model: ShiftModelKind | undefined;
   if (modelText !== undefined) {
     const k = modelText.toLowerCase();
-    if (k !== 'wlf' && k !== 'arrhenius' && k !== 'polynomial')
-      throw usage(query, `unknown shift model "${modelText}" (use wlf, arrhenius or polynomial)`);
+    if (!findShiftModel(k))
+      throw usage(query, `unknown shift model "${modelText}" (use ${shiftModelKindList('or')})`);
     model = k;
   }
   return {

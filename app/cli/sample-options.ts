@@ -5,7 +5,13 @@
  */
 import { Command, Option } from 'commander';
 import { QUANTITY_IDS, type QuantityId } from '@core/data';
-import { mergeSettings, parseSettings, settingTemperatureK, type Settings } from '@core/pipeline';
+import {
+  mergeSettings,
+  parseSettings,
+  settingTemperatureK,
+  shiftModelKinds,
+  type Settings,
+} from '@core/pipeline';
 import { MODULUS_UNITS } from '@core/units';
 import { CliError } from './cli-error.ts';
 import { EXIT } from './exit-codes.ts';
@@ -70,7 +76,7 @@ export function addSampleOptions(cmd: Command): Command {
     )
     .option(
       '--models <list>',
-      'shift-factor models to fit: wlf, arrhenius, polynomial (comma-separated) or none',
+      `shift-factor models to fit: ${shiftModelKinds().join(', ')} (comma-separated) or none`,
     )
     .addOption(
       new Option(

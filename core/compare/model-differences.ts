@@ -6,6 +6,7 @@
  * reference the covariance between T and T* is left out (docs/compare.md), so it is approximate.
  */
 import { shiftModelBand } from '../models/shift-model-band';
+import { modelResult } from '../pipeline/model-results';
 import type { ShiftModelKind } from '../models/types';
 import type { Analysis } from '../pipeline/types';
 import { pickModel } from './rereference';
@@ -24,7 +25,7 @@ function shiftAt(
   requested: ShiftModelKind | null,
 ): { e: Estimate; extrapolated: boolean } | null {
   const kind = pickModel(a, requested);
-  const fit = kind ? a.models[kind] : undefined;
+  const fit = kind ? modelResult(a.models, kind) : undefined;
   if (!fit) return null;
   const [atT, atRef] = shiftModelBand(fit.spec, [T, commonK]);
   const [lo, hi] = fit.fittedRangeK;

@@ -9,7 +9,8 @@
  */
 import { kelvinToCelsius } from '../data/temperature';
 import type { QuantityId } from '../data/types';
-import { SHIFT_MODEL_KINDS, type ShiftModelKind } from '../models/types';
+import type { ShiftModelKind } from '../models/types';
+import { fittedShiftModels, modelResult } from '../pipeline/model-results';
 import { shiftModelBand } from '../models/shift-model-band';
 import { log10bTAt } from '../pipeline/vertical-at';
 import type { Analysis } from '../pipeline/types';
@@ -29,13 +30,11 @@ export interface MovedCurve {
   notes: string[];
 }
 
-const MODEL_ORDER: readonly ShiftModelKind[] = SHIFT_MODEL_KINDS;
-
 /** The shift model to move an analysis with: the requested one, its hint, or the first fitted. */
 export function pickModel(a: Analysis, requested: ShiftModelKind | null): ShiftModelKind | null {
-  if (requested && a.models[requested]) return requested;
-  if (a.models.hint && a.models[a.models.hint.model]) return a.models.hint.model;
-  return MODEL_ORDER.find((m) => a.models[m]) ?? null;
+  if (requested && modelResult(a.models, requested)) return requested;
+  if (a.models.hint && modelResult(a.models, a.models.hint.model)) return a.models.hint.model;
+  return fittedShiftModels(a.models)[0]?.descriptor.kind ?? null;
 }
 
 /** Quantities whose log changes with the vertical shift. */
@@ -59,7 +58,7 @@ export function moveToTemperature(
   let log10bT = 0;
   if (Math.abs(targetK - a.referenceTemperatureK) > 1e-6) {
     model = pickModel(a, requested);
-    const fit = model ? a.models[model] : undefined;
+    const fit = model ? modelResult(a.models, model) : undefined;
     if (!model || !fit)
       throw new RangeError(
         `${a.sample.name}: no shift model was fitted, so it cannot be moved from ${kelvinToCelsius(a.referenceTemperatureK).toFixed(1)} °C to ${kelvinToCelsius(targetK).toFixed(1)} °C`,

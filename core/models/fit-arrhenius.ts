@@ -2,7 +2,7 @@ import { shiftFitStatistics } from './fit-statistics';
 import { glsLinearFit } from './gls-linear-fit';
 import { resolveShiftFitOptions } from './shift-fit-options';
 import { preparePoints } from './prepare-points';
-import { arrheniusSlope } from './shift-model-eval';
+import { ARRHENIUS_LAW, arrheniusSlope } from './shift-laws';
 import { weightingOfPoints } from './shift-weighting';
 import type { ArrheniusFit, ShiftFitOptions, ShiftPoint } from './types';
 
@@ -26,7 +26,7 @@ export function fitArrhenius(
   const x = pts.temperatureK.map((T) => [arrheniusSlope(T, o.referenceK)]);
   const [ea] = glsLinearFit(x, pts.log10aT, weighting);
   const stats = shiftFitStatistics(
-    'arrhenius',
+    ARRHENIUS_LAW,
     [ea],
     o.referenceK,
     pts,

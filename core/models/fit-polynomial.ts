@@ -1,4 +1,5 @@
 import { shiftFitStatistics } from './fit-statistics';
+import { POLYNOMIAL_LAW } from './shift-laws';
 import { glsLinearFit } from './gls-linear-fit';
 import { resolveShiftFitOptions } from './shift-fit-options';
 import { preparePoints } from './prepare-points';
@@ -29,7 +30,7 @@ export function fitPolynomial(
   const coefficients = glsLinearFit(design, pts.log10aT, weighting);
   const ok = coefficients.every(Number.isFinite);
   const stats = shiftFitStatistics(
-    'polynomial',
+    POLYNOMIAL_LAW,
     coefficients,
     o.referenceK,
     pts,

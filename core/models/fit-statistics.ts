@@ -1,42 +1,29 @@
-import { modelGradient, modelLog10aT } from './shift-model-eval';
 import { invert } from './linear-algebra';
 import type { PreparedPoints } from './prepare-points';
 import type { ShiftWeighting } from './shift-weighting';
 import { studentTQuantile } from '../numeric/student-t';
-import type { ErrorScaling, FitStatus, ShiftFitCommon, ShiftModelKind } from './types';
-
-const NAMES: Record<ShiftModelKind, [string, string][]> = {
-  wlf: [
-    ['C1', '1'],
-    ['C2', 'K'],
-  ],
-  arrhenius: [['Ea', 'kJ/mol']],
-  polynomial: [
-    ['a1', '1/K'],
-    ['a2', '1/K²'],
-  ],
-};
+import type { ErrorScaling, FitStatus, ShiftFitCommon, ShiftLaw } from './types';
 
 /** The model's log10 aT at the points, in the weighting's convention (see ShiftWeighting.adjust). */
 export function adjustedModel(
-  kind: ShiftModelKind,
+  law: ShiftLaw,
   values: readonly number[],
   referenceK: number,
   temperaturesK: readonly number[],
   weighting: ShiftWeighting,
 ): Float64Array {
-  return weighting.adjust(temperaturesK.map((T) => modelLog10aT(kind, values, referenceK, T)));
+  return weighting.adjust(temperaturesK.map((T) => law.log10aT(values, referenceK, T)));
 }
 
 /** Whitened Jacobian columns L⁻¹·P·∂g/∂θ_k of the adjusted model, one Float64Array per parameter. */
 export function whitenedJacobian(
-  kind: ShiftModelKind,
+  law: ShiftLaw,
   values: readonly number[],
   referenceK: number,
   temperaturesK: readonly number[],
   weighting: ShiftWeighting,
 ): Float64Array[] {
-  const rows = temperaturesK.map((T) => modelGradient(kind, values, referenceK, T));
+  const rows = temperaturesK.map((T) => law.gradient(values, referenceK, T));
   return values.map((_, k) => weighting.whiten(weighting.adjust(rows.map((r) => r[k]))));
 }
 
@@ -57,7 +44,7 @@ const dot = (a: ArrayLike<number>, b: ArrayLike<number>): number => {
  * in place of −2 ln L up to a constant).
  */
 export function shiftFitStatistics(
-  kind: ShiftModelKind,
+  law: ShiftLaw,
   values: number[],
   referenceK: number,
   pts: PreparedPoints,
@@ -69,11 +56,11 @@ export function shiftFitStatistics(
   const n = pts.temperatureK.length;
   const nInd = weighting.independent;
   const p = values.length;
-  const model = adjustedModel(kind, values, referenceK, pts.temperatureK, weighting);
+  const model = adjustedModel(law, values, referenceK, pts.temperatureK, weighting);
   const res = pts.log10aT.map((y, i) => y - model[i]);
   const wr = weighting.whiten(res);
   const chiSquare = dot(wr, wr);
-  const jac = whitenedJacobian(kind, values, referenceK, pts.temperatureK, weighting);
+  const jac = whitenedJacobian(law, values, referenceK, pts.temperatureK, weighting);
   const dof = nInd - p;
   const reducedChiSquare = dof > 0 ? chiSquare / dof : NaN;
   const base = invert(jac.map((a) => jac.map((b) => dot(a, b))));
@@ -97,7 +84,7 @@ export function shiftFitStatistics(
   }
   return {
     ...status,
-    kind,
+    kind: law.kind,
     referenceK,
     values,
     covariance,
@@ -107,8 +94,8 @@ export function shiftFitStatistics(
     parameters: values.map((v, k) => {
       const se = Math.sqrt(covariance[k][k]);
       return {
-        name: NAMES[kind][k][0],
-        unit: NAMES[kind][k][1],
+        name: law.parameters[k].name,
+        unit: law.parameters[k].unit,
         value: v,
         stdErr: se,
         ci95: [v - tQuantile95 * se, v + tQuantile95 * se],

@@ -1,4 +1,5 @@
 import { adjustedModel, shiftFitStatistics } from './fit-statistics';
+import { WLF_LAW } from './shift-laws';
 import { resolveShiftFitOptions } from './shift-fit-options';
 import { levenbergMarquardtFit } from './levenberg-marquardt-fit';
 import type { PreparedPoints } from './prepare-points';
@@ -80,7 +81,7 @@ export function fitWlf(points: readonly ShiftPoint[], options: WlfFitOptions): W
     if (key !== cacheKey) {
       const values = [u[0] * scale[0], u[1] * scale[1]];
       cache = weighting.whiten(
-        adjustedModel('wlf', values, referenceK, pts.temperatureK, weighting),
+        adjustedModel(WLF_LAW, values, referenceK, pts.temperatureK, weighting),
       );
       cacheKey = key;
     }
@@ -112,7 +113,7 @@ export function fitWlf(points: readonly ShiftPoint[], options: WlfFitOptions): W
       'C2 sits at its lower bound (the WLF pole touches the coldest isotherm): WLF does not describe these data.';
   }
   const stats = shiftFitStatistics(
-    'wlf',
+    WLF_LAW,
     [c1, c2K],
     referenceK,
     pts,

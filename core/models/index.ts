@@ -1,4 +1,4 @@
-/** Shift-factor models (docs/conventions.md §3): fits, bands, re-referencing, derived quantities, hints. */
+/** Shift-factor models (docs/conventions.md §3): the registry of models, fits, bands, re-referencing, derived quantities, hints. */
 export * from './shift-laws';
 export type * from './types';
 export { resolveShiftFitOptions } from './shift-fit-options';
@@ -26,4 +26,21 @@ export { checkShiftModelRange } from './range-check';
 export type { ShiftRangeFlags } from './range-check';
 export { suggestShiftModel, WLF_WINDOW_ABOVE_TG_K } from './model-hint';
 export type { ModelHint } from './model-hint';
-export { SHIFT_MODEL_KINDS } from './types';
+export {
+  findShiftModel,
+  registerShiftModel,
+  shiftModel,
+  shiftModelKindList,
+  shiftModelKinds,
+  shiftModels,
+} from './registry';
+export type {
+  AnyShiftModelDescriptor,
+  ShiftModelDerived,
+  ShiftModelDerivedRow,
+  ShiftModelDescriptor,
+  ShiftModelParameter,
+  ShiftModelValidity,
+  WlfDerived,
+} from './registry';
+export { fitLinearShiftLaw } from './fit-linear-law';

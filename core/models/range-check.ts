@@ -1,4 +1,5 @@
 import { formatCelsius } from '../data/temperature';
+import { shiftModel } from './registry';
 import type { ShiftModelSpec } from './types';
 
 /** Why a shift-model answer at some temperature must be read with care. */
@@ -17,7 +18,8 @@ const c = (k: number): string => formatCelsius(k);
 
 /**
  * Flags for using a shift model at `temperatureK` (docs/conventions.md §3, §6): outside the fitted range is
- * extrapolation; WLF constants fitted above Tg must not be used below Tg; WLF diverges at Tr − C2.
+ * extrapolation; the model's descriptor adds its own (WLF constants fitted above Tg must not be used
+ * below Tg; WLF diverges at Tr − C2).
  */
 export function checkShiftModelRange(model: ShiftModelSpec, temperatureK: number): ShiftRangeFlags {
   const messages: string[] = [];
@@ -29,19 +31,9 @@ export function checkShiftModelRange(model: ShiftModelSpec, temperatureK: number
       `${c(temperatureK)} is outside the fitted range ${c(range[0])} to ${c(range[1])}: the shift factor is extrapolated.`,
     );
   }
-  const isWlf = model.kind === 'wlf';
-  const belowGlassTransition =
-    isWlf && model.glassTransitionK !== undefined && temperatureK < model.glassTransitionK;
-  if (belowGlassTransition) {
-    messages.push(
-      `${c(temperatureK)} is below Tg (${c(model.glassTransitionK!)}): WLF does not hold below the glass transition.`,
-    );
-  }
-  const beyondPole = isWlf && temperatureK <= model.referenceK - model.values[1];
-  if (beyondPole) {
-    messages.push(
-      `${c(temperatureK)} is at or below the WLF pole (${c(model.referenceK - model.values[1])}): no shift factor exists there.`,
-    );
-  }
+  const law = shiftModel(model.kind).validity?.(model, temperatureK);
+  for (const m of law?.messages ?? []) messages.push(m);
+  const belowGlassTransition = law?.belowGlassTransition ?? false;
+  const beyondPole = law?.beyondPole ?? false;
   return { outsideFittedRange, belowGlassTransition, beyondPole, messages };
 }

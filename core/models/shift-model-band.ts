@@ -1,5 +1,5 @@
 import { quadraticForm } from './linear-algebra';
-import { modelGradient, modelLog10aT } from './shift-model-eval';
+import { shiftModel } from './registry';
 import type { ShiftModelSpec } from './types';
 
 /** The predicted log10 aT with its pointwise 95 % confidence band, decades. */
@@ -23,16 +23,14 @@ export function shiftModelBand(
   temperaturesK: ArrayLike<number>,
 ): BandPoint[] {
   const t = model.tQuantile95 ?? 1.959963984540054;
+  const { law } = shiftModel(model.kind);
   return Array.from(temperaturesK, (T) => {
-    const y = modelLog10aT(model.kind, model.values, model.referenceK, T);
+    const y = law.log10aT(model.values, model.referenceK, T);
     const se = model.covariance
       ? Math.sqrt(
           Math.max(
             0,
-            quadraticForm(
-              model.covariance,
-              modelGradient(model.kind, model.values, model.referenceK, T),
-            ),
+            quadraticForm(model.covariance, law.gradient(model.values, model.referenceK, T)),
           ),
         )
       : NaN;

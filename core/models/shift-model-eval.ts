@@ -1,52 +1,19 @@
 /**
- * Evaluates a shift model and its gradient with respect to its parameters (for the delta-method
- * band). Formulas: docs/conventions.md §3 — WLF (Williams, Landel & Ferry, JACS 77, 3701, 1955),
- * Arrhenius, and the quadratic polynomial.
+ * Evaluates a registered shift model by kind (the band, shift-model-band.ts, takes the gradient
+ * from the same law). The laws themselves (WLF, Williams, Landel & Ferry, JACS 77, 3701, 1955;
+ * Arrhenius; the quadratic polynomial) are in shift-laws.ts, each model's descriptor in registry/.
  */
-import { GAS_CONSTANT_J_PER_MOL_K } from './shift-laws';
+import { shiftModel } from './registry';
 import type { ShiftModelKind, ShiftModelSpec } from './types';
 
-/** log10 aT per kJ/mol of activation energy: 1000/(R ln 10)·(1/T − 1/Tr). */
-export function arrheniusSlope(temperatureK: number, referenceK: number): number {
-  return (1000 / (GAS_CONSTANT_J_PER_MOL_K * Math.LN10)) * (1 / temperatureK - 1 / referenceK);
-}
-
-/** log10 aT of a model with parameter vector `values` (order: see ShiftModelSpec). */
+/** log10 aT of a model with parameter vector `values` (order: its law's parameters). */
 export function modelLog10aT(
   kind: ShiftModelKind,
   values: readonly number[],
   referenceK: number,
   temperatureK: number,
 ): number {
-  const dT = temperatureK - referenceK;
-  switch (kind) {
-    case 'wlf':
-      return (-values[0] * dT) / (values[1] + dT);
-    case 'arrhenius':
-      return values[0] * arrheniusSlope(temperatureK, referenceK);
-    case 'polynomial':
-      return values[0] * dT + values[1] * dT * dT;
-  }
-}
-
-/** ∂ log10 aT / ∂ values at one temperature. */
-export function modelGradient(
-  kind: ShiftModelKind,
-  values: readonly number[],
-  referenceK: number,
-  temperatureK: number,
-): number[] {
-  const dT = temperatureK - referenceK;
-  switch (kind) {
-    case 'wlf': {
-      const d = values[1] + dT;
-      return [-dT / d, (values[0] * dT) / (d * d)];
-    }
-    case 'arrhenius':
-      return [arrheniusSlope(temperatureK, referenceK)];
-    case 'polynomial':
-      return [dT, dT * dT];
-  }
+  return shiftModel(kind).law.log10aT(values, referenceK, temperatureK);
 }
 
 /** log10 aT of a model spec at one temperature, K. */

@@ -53,14 +53,36 @@ export interface ShiftFitWeighting {
   leftOut: { temperatureK: number; reason: string }[];
 }
 
-/** The kinds of shift model, in the order the app, the summary and the exports list them. */
-export const SHIFT_MODEL_KINDS = ['wlf', 'arrhenius', 'polynomial'] as const;
+/**
+ * The kind of a shift model: the key it is registered under in the shift-model registry
+ * (core/models/registry: `shiftModelKinds()` lists them in the order the app, the summary and the
+ * exports show them). Built in: 'wlf', 'arrhenius', 'polynomial'; a new model adds its own.
+ */
+export type ShiftModelKind = string;
 
-/** Which law, and its parameter vector in a fixed order (the order of the covariance matrix). */
-export type ShiftModelKind = (typeof SHIFT_MODEL_KINDS)[number];
+/** One constant of a shift law, in the order of the parameter vector. */
+export interface ShiftLawParameter {
+  /** Symbol as printed (C1, Ea, a1). */
+  name: string;
+  /** Unit of the value as fitted ('1' when dimensionless). */
+  unit: string;
+}
 
 /**
- * A shift model that can be evaluated: `values` are
+ * A shift law: log10 aT(T) and its gradient with respect to the parameter vector (for the fits
+ * and the delta-method band). Pure functions; temperatures in kelvin, aT(Tr) = 1.
+ */
+export interface ShiftLaw {
+  kind: ShiftModelKind;
+  parameters: readonly ShiftLawParameter[];
+  /** log10 aT at `temperatureK` of the law with parameter vector `values`. */
+  log10aT(values: readonly number[], referenceK: number, temperatureK: number): number;
+  /** ∂ log10 aT / ∂ values at `temperatureK`, one entry per parameter. */
+  gradient(values: readonly number[], referenceK: number, temperatureK: number): number[];
+}
+
+/**
+ * A shift model that can be evaluated: `values` in the order of its law's parameters, e.g.
  * - wlf: [C1, C2 (K)]
  * - arrhenius: [Ea (kJ/mol)]
  * - polynomial: [a1 (1/K), a2 (1/K²)]   (log10 aT = a1 (T−Tr) + a2 (T−Tr)²)
@@ -138,7 +160,7 @@ export type ShiftModelFit = WlfFit | ArrheniusFit | PolynomialFit;
 /** How parameter uncertainties are scaled. */
 export type ErrorScaling = 'residual' | 'reported';
 
-/** Options shared by the three shift-model fits. */
+/** Options shared by the shift-model fits. */
 export interface ShiftFitOptions {
   /** Reference temperature, K. Required. */
   referenceK: number;

@@ -6,7 +6,7 @@
  */
 import { isothermStates, type IsothermUse } from './isotherm-states';
 import type { Analysis, ShiftModelKind } from './types';
-import { SHIFT_MODEL_KINDS } from '../models/types';
+import { fittedShiftModels } from './model-results';
 
 export interface ArrheniusPoint {
   isothermId: string;
@@ -53,19 +53,15 @@ export function arrheniusPlot(a: Analysis): ArrheniusPlot {
       },
     ];
   });
-  const models = SHIFT_MODEL_KINDS.flatMap((kind) => {
-    const m = a.models[kind];
-    if (!m) return [];
-    const b = m.band;
-    return [
-      {
-        kind,
-        inverseTemperature: b.temperatureK.map((t) => 1000 / t),
-        lnAT: b.log10aT.map((v) => Math.LN10 * v),
-        lower95: b.lower95.map((v) => Math.LN10 * v),
-        upper95: b.upper95.map((v) => Math.LN10 * v),
-      },
-    ];
+  const models = fittedShiftModels(a.models).map(({ descriptor, result }) => {
+    const b = result.band;
+    return {
+      kind: descriptor.kind,
+      inverseTemperature: b.temperatureK.map((t) => 1000 / t),
+      lnAT: b.log10aT.map((v) => Math.LN10 * v),
+      lower95: b.lower95.map((v) => Math.LN10 * v),
+      upper95: b.upper95.map((v) => Math.LN10 * v),
+    };
   });
   const ar = a.models.arrhenius;
   return {

@@ -5,18 +5,11 @@
  * its 95 % band over the fitted range. Locked shifts are not measurements and are left out; the
  * reference isotherm is exact. A model that cannot be fitted (too few shifts) becomes a warning,
  * not an error; a fit that stops without converging gives a `not-converged` warning naming it.
+ * Each model is fitted, named and given its derived quantities by its registry descriptor.
  */
-import {
-  fitArrhenius,
-  fitPolynomial,
-  fitWlf,
-  rereferenceWlf,
-  shiftModelBand,
-  suggestShiftModel,
-  wlfApparentActivationEnergyKJPerMol,
-  wlfFreeVolume,
-} from '../models';
+import { findShiftModel, shiftModelBand, shiftModels, suggestShiftModel } from '../models';
 import type { ShiftFitCommon, ShiftPoint } from '../models/types';
+import { setModelResult, type ShiftModelResult } from './model-results';
 import type { ResolvedAnalysisOptions } from './options';
 import type { ShiftCovarianceFor } from './shift-covariance';
 import type { AnalysisCurve, AnalysisModels, AnalysisWarning, ModelFitStats } from './types';
@@ -81,8 +74,6 @@ const param = (fit: ShiftFitCommon, i: number) => {
   };
 };
 
-const MODEL_NAME = { wlf: 'WLF', arrhenius: 'Arrhenius', polynomial: 'polynomial' } as const;
-
 /**
  * @param covariance the shifts' covariance for the included curves with a shift, in their order
  *   (from shiftCovarianceFor); without it the fits weight each shift by its own standard error
@@ -115,12 +106,12 @@ export function fitShiftModels(
     diagonalReason: `${cov.reason}: each shift is weighted by its own standard error (weighted least squares)`,
   };
   const models: AnalysisModels = {};
-  const fits: Parameters<typeof suggestShiftModel>[0] = {};
-  const attempt = <T extends ShiftFitCommon>(
-    kind: keyof typeof MODEL_NAME,
-    f: () => T,
-  ): T | undefined => {
-    const name = MODEL_NAME[kind];
+  const fits: Record<string, ShiftFitCommon> = {};
+  const attempt = (
+    kind: string,
+    name: string,
+    f: () => ShiftFitCommon,
+  ): ShiftFitCommon | undefined => {
     try {
       const fit = f();
       for (const w of fit.warnings)
@@ -141,72 +132,40 @@ export function fitShiftModels(
       return undefined;
     }
   };
-  if (s.models.includes('wlf')) {
-    const f = attempt('wlf', () => fitWlf(points, opts));
-    if (f) {
-      fits.wlf = f;
-      let atTg: { c1: number; c2K: number; referenceK: number } | undefined;
-      if (s.glassTransitionK !== null)
-        try {
-          atTg = rereferenceWlf(f.c1, f.c2K, f.referenceK, s.glassTransitionK);
-        } catch (e) {
-          warnings.push({ code: 'model-wlf', message: e instanceof Error ? e.message : String(e) });
-        }
-      let freeVolume: { fractionalFreeVolume: number; expansionPerK: number } | null = null;
-      try {
-        freeVolume = wlfFreeVolume(f.c1, f.c2K);
-      } catch {
-        freeVolume = null; // negative constants: no free-volume reading, the fit itself is reported
-      }
-      models.wlf = {
-        c1: f.c1,
-        c1StdErr: param(f, 0).se,
-        c1Ci95: param(f, 0).ci,
-        c2K: f.c2K,
-        c2KStdErr: param(f, 1).se,
-        c2KCi95: param(f, 1).ci,
-        referenceK: f.referenceK,
-        ...(atTg && { atGlassTransition: atTg }),
-        apparentActivationEnergyKJPerMol: wlfApparentActivationEnergyKJPerMol(
-          f.referenceK,
-          f.c1,
-          f.c2K,
-          f.referenceK,
-        ),
-        freeVolume,
-        ...stats(f, ids),
-      };
-    }
+  // a kind that is no longer registered (options made while it was) is said, not dropped
+  for (const kind of s.models)
+    if (!findShiftModel(kind))
+      warnings.push({
+        code: 'model-failed',
+        message: `The ${kind} model could not be fitted: no shift model of that kind is registered`,
+        model: kind,
+      });
+  // in the registry's order, whatever the order of the settings
+  for (const d of shiftModels().filter((m) => s.models.includes(m.kind))) {
+    const f = attempt(d.kind, d.name, () => d.fit(points, opts));
+    if (!f) continue;
+    fits[d.kind] = f;
+    const constants: Record<string, unknown> = {};
+    d.parameters.forEach((p, i) => {
+      constants[p.analysisKey] = f.values[i];
+      constants[`${p.analysisKey}StdErr`] = param(f, i).se;
+      if (p.interval) constants[`${p.analysisKey}Ci95`] = param(f, i).ci;
+    });
+    const derived = d.derived?.analysis(f, { glassTransitionK: s.glassTransitionK }, (message) =>
+      warnings.push({ code: `model-${d.kind}`, message }),
+    );
+    setModelResult(models, d.kind, {
+      ...constants,
+      referenceK: f.referenceK,
+      ...derived,
+      ...stats(f, ids),
+    } as ShiftModelResult);
   }
-  if (s.models.includes('arrhenius')) {
-    const f = attempt('arrhenius', () => fitArrhenius(points, opts));
-    if (f) {
-      fits.arrhenius = f;
-      models.arrhenius = {
-        activationEnergyKJPerMol: f.activationEnergyKJPerMol,
-        activationEnergyKJPerMolStdErr: param(f, 0).se,
-        activationEnergyKJPerMolCi95: param(f, 0).ci,
-        referenceK: f.referenceK,
-        ...stats(f, ids),
-      };
-    }
-  }
-  if (s.models.includes('polynomial')) {
-    const f = attempt('polynomial', () => fitPolynomial(points, opts));
-    if (f) {
-      fits.polynomial = f;
-      models.polynomial = {
-        a1PerK: f.a1PerK,
-        a1PerKStdErr: param(f, 0).se,
-        a2PerK2: f.a2PerK2,
-        a2PerK2StdErr: param(f, 1).se,
-        referenceK: f.referenceK,
-        ...stats(f, ids),
-      };
-    }
-  }
-  if (fits.wlf || fits.arrhenius || fits.polynomial) {
-    const hint = suggestShiftModel(fits, s.glassTransitionK ?? undefined);
+  // the suggestion weighs the built-in laws by its own rule (core/models/model-hint.ts); a model
+  // added through the registry is fitted and reported but not ranked
+  const known = fits as Parameters<typeof suggestShiftModel>[0];
+  if (known.wlf || known.arrhenius || known.polynomial) {
+    const hint = suggestShiftModel(known, s.glassTransitionK ?? undefined);
     models.hint = { model: hint.recommended, reason: hint.reasons.join(' ') };
   }
   return models;

@@ -58,4 +58,19 @@ export { arrheniusPlot, type ArrheniusPlot, type ArrheniusPoint } from './arrhen
 export { overlapResiduals, type IsothermResiduals } from './overlap-residuals';
 export { pronyCurve, type PronyCurve } from './prony-curves';
 export { relaxationSpectrum, type RelaxationSpectrum } from './relaxation-spectrum';
-export { SHIFT_MODEL_KINDS } from '../models/types';
+export {
+  findShiftModel,
+  registerShiftModel,
+  shiftModel,
+  shiftModelKindList,
+  shiftModelKinds,
+  shiftModels,
+} from '../models';
+export type { AnyShiftModelDescriptor, ShiftModelDescriptor } from '../models';
+export {
+  fittedShiftModels,
+  modelConstant,
+  modelResult,
+  type FittedShiftModel,
+  type ShiftModelResult,
+} from './model-results';

@@ -18,6 +18,7 @@ import { modulusPlateaus, plateauModulus } from '../spectrum/plateaus';
 import { tanDeltaPeak, tanDeltaPeakTemperature } from '../spectrum/tan-delta-peak';
 import type { ShiftModelSpec } from '../models/types';
 import { toCelsius } from './temperature';
+import { fittedShiftModels, modelConstant } from './model-results';
 import { binnedMaster } from './binned-master';
 import { zeroShearIndicators } from './zero-shear';
 import type {
@@ -27,23 +28,19 @@ import type {
   AnalysisWarning,
 } from './types';
 
-/** The shift model the tan δ peak temperature is computed with: WLF if fitted, else Arrhenius. */
+/**
+ * The shift model the tan δ peak temperature is computed with: the first fitted physical law of
+ * the registry (WLF if fitted, else Arrhenius); an empirical curve is not used for it.
+ */
 function shiftModelSpec(models: AnalysisModels): ShiftModelSpec | null {
-  if (models.wlf)
-    return {
-      kind: 'wlf',
-      referenceK: models.wlf.referenceK,
-      values: [models.wlf.c1, models.wlf.c2K],
-      fittedRangeK: models.wlf.fittedRangeK,
-    };
-  if (models.arrhenius)
-    return {
-      kind: 'arrhenius',
-      referenceK: models.arrhenius.referenceK,
-      values: [models.arrhenius.activationEnergyKJPerMol],
-      fittedRangeK: models.arrhenius.fittedRangeK,
-    };
-  return null;
+  const m = fittedShiftModels(models).find((f) => f.descriptor.physical);
+  if (!m) return null;
+  return {
+    kind: m.descriptor.kind,
+    referenceK: m.result.referenceK,
+    values: m.descriptor.parameters.map((_, i) => modelConstant(m, i).value),
+    fittedRangeK: m.result.fittedRangeK,
+  };
 }
 
 export function computeIndicators(

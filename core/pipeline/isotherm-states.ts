@@ -9,7 +9,8 @@
 import { shiftModelLog10aT } from '../models/shift-model-eval';
 import { log10bTAt } from './vertical-at';
 import type { Analysis, ShiftModelKind } from './types';
-import { SHIFT_MODEL_KINDS } from '../models/types';
+import { findShiftModel } from '../models';
+import { fittedShiftModels, modelResult } from './model-results';
 
 export type IsothermUse = 'used' | 'excluded' | 'left-out';
 
@@ -30,18 +31,13 @@ export interface IsothermState {
   placedBy: 'fit' | 'lock' | 'reference' | ShiftModelKind | null;
 }
 
-const MODEL_NAME: Record<ShiftModelKind, string> = {
-  wlf: 'WLF',
-  arrhenius: 'Arrhenius',
-  polynomial: 'polynomial',
-};
-
 export function isothermStates(a: Analysis): IsothermState[] {
   const excluded = new Set(a.settings.excludedIsothermIds);
   const locks = a.settings.lockedLog10aT;
   const hint = a.models.hint?.model;
   const model =
-    (hint && a.models[hint] ? hint : undefined) ?? SHIFT_MODEL_KINDS.find((k) => a.models[k]);
+    (hint && modelResult(a.models, hint) ? hint : undefined) ??
+    fittedShiftModels(a.models)[0]?.descriptor.kind;
   return a.curves.map((c): IsothermState => {
     const locked = c.isothermId in locks;
     const use: IsothermUse = c.included
@@ -61,15 +57,15 @@ export function isothermStates(a: Analysis): IsothermState[] {
       drawLog10aT = 0;
       placedBy = 'reference';
     } else if (drawLog10aT === null && model) {
-      drawLog10aT = shiftModelLog10aT(a.models[model]!.spec, c.temperatureK);
+      drawLog10aT = shiftModelLog10aT(modelResult(a.models, model)!.spec, c.temperatureK);
       placedBy = Number.isFinite(drawLog10aT) ? model : null;
       if (placedBy === null) drawLog10aT = null;
     }
     const where =
       placedBy === 'reference'
         ? ' Drawn faded at Tref (log10 aT = 0).'
-        : placedBy && placedBy in MODEL_NAME
-          ? ` Drawn faded at the ${MODEL_NAME[placedBy as ShiftModelKind]} shift for its temperature.`
+        : placedBy && findShiftModel(placedBy)
+          ? ` Drawn faded at the ${findShiftModel(placedBy)!.name} shift for its temperature.`
           : use !== 'used' && drawLog10aT === null
             ? ' It has no shift, so the shifted plots cannot show it.'
             : use !== 'used'

@@ -5,9 +5,21 @@
 import { z } from 'zod';
 import { QUANTITY_IDS, type DataWarning, type QuantityId } from '../data/types';
 import { extent } from '../data/extent';
-import { SHIFT_MODEL_KINDS, type ShiftModelKind } from '../models/types';
+import { shiftModelKinds } from '../models';
+import type { ShiftModelKind } from '../models/types';
 
 const quantityId = z.enum(QUANTITY_IDS as [QuantityId, ...QuantityId[]]);
+
+/**
+ * A registered shift-model kind (core/models registry), checked when parsed so a model
+ * registered later is accepted; the issue is zod's own for an enum ("Invalid option: expected one
+ * of …").
+ */
+export const shiftModelKindSchema = z.unknown().superRefine((value, ctx) => {
+  const kinds = shiftModelKinds();
+  if (typeof value !== 'string' || !kinds.includes(value))
+    ctx.addIssue({ code: 'invalid_value', values: kinds, input: value });
+}) as unknown as z.ZodType<ShiftModelKind>;
 
 /** Options of one analysis. Every field is optional; defaults are applied by `resolveAnalysisOptions`. */
 export const analysisOptionsSchema = z.strictObject({
@@ -38,10 +50,10 @@ export const analysisOptionsSchema = z.strictObject({
     })
     .optional(),
   /**
-   * Shift-factor models to fit.
-   * @default ['wlf', 'arrhenius', 'polynomial']
+   * Shift-factor models to fit, by registry kind (fitted in the registry's order).
+   * @default every registered model: wlf, arrhenius, polynomial and any added
    */
-  models: z.array(z.enum(SHIFT_MODEL_KINDS)).optional(),
+  models: z.array(shiftModelKindSchema).optional(),
   /**
    * Relaxation times per decade of the Prony series (1 or 2); 0 skips the Prony fit. 2 is the
    * default: 1 per decade can leave ripples in G″ above the 3 % RMS target (4.5–4.9 % on some
@@ -98,7 +110,8 @@ export interface ResolvedAnalysisOptions {
   lockedLog10aT: Record<string, number>;
 }
 
-export const DEFAULT_MODELS: ResolvedAnalysisOptions['models'] = [...SHIFT_MODEL_KINDS];
+/** The built-in models; the default at run time is every registered model (`shiftModelKinds()`). */
+export const DEFAULT_MODELS: ResolvedAnalysisOptions['models'] = shiftModelKinds();
 
 /** Prony relaxation times per decade when none is given (see `pronyModesPerDecade`). */
 export const DEFAULT_PRONY_MODES_PER_DECADE = 2;
@@ -160,7 +173,7 @@ export function resolveAnalysisOptions(
     shiftQuantities: o.shiftQuantities ?? 'auto',
     verticalShift,
     density: o.density ?? null,
-    models: o.models ? [...new Set(o.models)] : [...DEFAULT_MODELS],
+    models: o.models ? [...new Set(o.models)] : shiftModelKinds(),
     pronyModesPerDecade: o.pronyModesPerDecade ?? DEFAULT_PRONY_MODES_PER_DECADE,
     pronyEquilibrium: o.pronyEquilibrium ?? 'auto',
     glassTransitionK: o.glassTransitionK ?? null,

@@ -14,7 +14,7 @@ import {
 } from '../spectrum/predict';
 import type { Analysis, ShiftModelKind } from './types';
 import { log10bTAt } from './vertical-at';
-import { SHIFT_MODEL_KINDS } from '../models/types';
+import { fittedShiftModels, modelResult } from './model-results';
 
 export interface AnalysisQuery {
   quantity: PredictedQuantity;
@@ -56,13 +56,11 @@ export class PredictionError extends Error {
   }
 }
 
-const MODEL_ORDER: readonly ShiftModelKind[] = SHIFT_MODEL_KINDS;
-
 /** The model a query without `model` uses: the suggested one, else the first fitted. */
 export function defaultPredictionModel(a: Analysis): ShiftModelKind | null {
   const hint = a.models.hint?.model;
-  if (hint && a.models[hint]) return hint;
-  return MODEL_ORDER.find((k) => a.models[k]) ?? null;
+  if (hint && modelResult(a.models, hint)) return hint;
+  return fittedShiftModels(a.models)[0]?.descriptor.kind ?? null;
 }
 
 const NO_RANGE_OUTSIDE =
@@ -76,7 +74,7 @@ const NO_RANGE_OUTSIDE =
 export function predictFromAnalysis(a: Analysis, q: AnalysisQuery): AnalysisPrediction {
   const kind = q.model ?? defaultPredictionModel(a);
   if (!kind) throw new PredictionError('No shift-factor model was fitted for this analysis.');
-  const model = a.models[kind];
+  const model = modelResult(a.models, kind);
   if (!model) throw new PredictionError(`The ${kind} model was not fitted for this analysis.`);
   const prony = a.prony;
   if (!prony)

@@ -9,11 +9,10 @@ import { z } from 'zod';
 import { QUANTITY_IDS, type Dataset, type QuantityId } from '../data/types';
 import { parseTemperatureText } from '../units/temperature';
 import type { ImportOptions } from '../io/types';
-import { describeIssue, type AnalysisOptions } from './options';
+import { describeIssue, shiftModelKindSchema, type AnalysisOptions } from './options';
 import { MODULUS_UNITS, type ModulusUnit } from '../units/output-units';
 import { toCelsius } from './temperature';
 import { ZERO_CELSIUS_K } from '../data/temperature';
-import { SHIFT_MODEL_KINDS } from '../models/types';
 
 const quantityId = z.enum(QUANTITY_IDS as [QuantityId, ...QuantityId[]]);
 /** °C as a number, or text such as "190", "190 °C", "463.15K". */
@@ -46,8 +45,8 @@ export const settingsSchema = z.strictObject({
   densityKgPerM3: z.number().positive().optional(),
   /** Volumetric thermal expansion coefficient αV, 1/K (for verticalShift 'density'). */
   expansionPerK: z.number().min(0).max(0.01).optional(),
-  /** @default ['wlf', 'arrhenius', 'polynomial'] */
-  models: z.array(z.enum(SHIFT_MODEL_KINDS)).optional(),
+  /** Registry kinds of the shift models to fit. @default every registered model */
+  models: z.array(shiftModelKindSchema).optional(),
   /** 0 skips the Prony fit. @default 2 */
   pronyModesPerDecade: z.union([z.literal(0), z.literal(1), z.literal(2)]).optional(),
   /** Equilibrium modulus of the Prony series: 'auto' (0 for a liquid in its terminal zone), 'fit' or 'zero'. @default 'auto' */

@@ -14,6 +14,7 @@ import type {
 import { pronySymbols } from '../spectrum/prony-symbols';
 import type { ResolvedAnalysisOptions } from './options';
 import { CONVENTIONS } from './conventions';
+import { fittedShiftModels, modelConstant } from './model-results';
 import { roundKelvin, toCelsius } from './temperature';
 
 export const SUMMARY_SCHEMA = 'thermoshift-summary/1';
@@ -68,6 +69,11 @@ export interface AnalysisSummary {
   };
   curves: SummaryCurve[];
   overallQualityRmsDecades: number | null;
+  /**
+   * One entry per fitted model under its registry kind, each written from its descriptor: the
+   * constants (`summaryKey`, `…StdErr`, `…Ci95`), `referenceTemperature`, derived fields, then the
+   * fit figures. The built-in ones are typed here.
+   */
   models: {
     wlf?: SummaryFit & {
       C1: number;
@@ -154,52 +160,26 @@ function fitStats(m: ModelFitStats): SummaryFit {
   };
 }
 
-/** A model's reference temperature (°C) followed by its fit statistics, in that key order. */
-function referencedFitStats(
-  m: ModelFitStats & { referenceK: number },
-): SummaryFit & { referenceTemperature: number } {
-  return { referenceTemperature: toCelsius(m.referenceK), ...fitStats(m) };
-}
-
 /** The stable summary of an analysis; plain JSON (no NaN, no functions). */
 export function analysisSummary(analysis: Analysis): AnalysisSummary {
   const { models: m, prony: p } = analysis;
   const models: AnalysisSummary['models'] = {};
-  if (m.wlf)
-    models.wlf = {
-      C1: m.wlf.c1,
-      C1StdErr: m.wlf.c1StdErr,
-      C1Ci95: m.wlf.c1Ci95,
-      C2: m.wlf.c2K,
-      C2StdErr: m.wlf.c2KStdErr,
-      C2Ci95: m.wlf.c2KCi95,
-      referenceTemperature: toCelsius(m.wlf.referenceK),
-      ...(m.wlf.atGlassTransition && {
-        atGlassTransition: {
-          C1: m.wlf.atGlassTransition.c1,
-          C2: m.wlf.atGlassTransition.c2K,
-          referenceTemperature: toCelsius(m.wlf.atGlassTransition.referenceK),
-        },
-      }),
-      apparentActivationEnergy: m.wlf.apparentActivationEnergyKJPerMol ?? null,
-      freeVolume: m.wlf.freeVolume ?? null,
-      ...fitStats(m.wlf),
+  for (const f of fittedShiftModels(m)) {
+    const { descriptor: d, result } = f;
+    const fields: Record<string, unknown> = {};
+    d.parameters.forEach((p, i) => {
+      const c = modelConstant(f, i);
+      fields[p.summaryKey] = c.value;
+      fields[`${p.summaryKey}StdErr`] = c.stdErr;
+      if (p.interval) fields[`${p.summaryKey}Ci95`] = c.ci95;
+    });
+    (models as Record<string, unknown>)[d.kind] = {
+      ...fields,
+      referenceTemperature: toCelsius(result.referenceK),
+      ...d.derived?.summary(result),
+      ...fitStats(result),
     };
-  if (m.arrhenius)
-    models.arrhenius = {
-      activationEnergy: m.arrhenius.activationEnergyKJPerMol,
-      activationEnergyStdErr: m.arrhenius.activationEnergyKJPerMolStdErr,
-      activationEnergyCi95: m.arrhenius.activationEnergyKJPerMolCi95,
-      ...referencedFitStats(m.arrhenius),
-    };
-  if (m.polynomial)
-    models.polynomial = {
-      a1: m.polynomial.a1PerK,
-      a1StdErr: m.polynomial.a1PerKStdErr,
-      a2: m.polynomial.a2PerK2,
-      a2StdErr: m.polynomial.a2PerK2StdErr,
-      ...referencedFitStats(m.polynomial),
-    };
+  }
   if (m.hint) models.hint = { ...m.hint };
   return {
     schema: SUMMARY_SCHEMA,

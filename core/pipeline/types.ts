@@ -9,6 +9,7 @@
  */
 import type { AbscissaKind, Dataset, DeformationMode, QuantityId, TestKind } from '../data/types';
 import type { ShiftModelKind, ShiftModelSpec } from '../models/types';
+import type { WlfDerived } from '../models';
 import type { CurveShift, LeftOut, VerticalChoice } from '../shift/types';
 import type { ResolvedAnalysisOptions } from './options';
 
@@ -104,8 +105,11 @@ export interface ModelFitStats {
   spec: ShiftModelSpec;
 }
 
-/** WLF: log10 aT = −C1 (T − Tr)/(C2 + T − Tr) (Williams, Landel & Ferry 1955). */
-export interface WlfModel extends ModelFitStats {
+/**
+ * WLF: log10 aT = −C1 (T − Tr)/(C2 + T − Tr) (Williams, Landel & Ferry 1955), with the quantities
+ * its descriptor derives (`WlfDerived`: constants at Tg, apparent Ea at Tr, free volume).
+ */
+export interface WlfModel extends ModelFitStats, WlfDerived {
   c1: number;
   c1StdErr: number | null;
   c1Ci95: [number, number] | null;
@@ -114,12 +118,6 @@ export interface WlfModel extends ModelFitStats {
   c2KCi95: [number, number] | null;
   /** Tr of the constants, K. */
   referenceK: number;
-  /** Constants re-referenced to Tg when one was given. */
-  atGlassTransition?: { c1: number; c2K: number; referenceK: number };
-  /** Apparent activation energy at Tref from WLF, kJ/mol. */
-  apparentActivationEnergyKJPerMol?: number | null;
-  /** Free-volume fraction f_r = B/(2.303·C1) with B = 1, and expansion α_f = f_r/C2 (Ferry 1980). */
-  freeVolume?: { fractionalFreeVolume: number; expansionPerK: number } | null;
 }
 
 /** Arrhenius: ln aT = (Ea/R)(1/T − 1/Tr). */
@@ -142,6 +140,11 @@ export interface PolynomialModel extends ModelFitStats {
 // The kinds of shift model are defined once, in core/models/types.ts.
 export type { ShiftModelKind } from '../models/types';
 
+/**
+ * The fitted shift models under their registry kinds (core/models/registry), the built-in ones
+ * typed here; a model added through the registry sits under its own kind (read it with
+ * `modelResult()` / `fittedShiftModels()`, core/pipeline/model-results.ts).
+ */
 export interface AnalysisModels {
   wlf?: WlfModel;
   arrhenius?: ArrheniusModel;

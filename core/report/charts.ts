@@ -20,7 +20,7 @@ import {
   type FrequencyUnit,
   type ModulusUnit,
 } from '../units/output-units';
-import { SHIFT_MODEL_KINDS } from '../models/types';
+import { fittedShiftModels } from '../pipeline/model-results';
 
 /** The abscissa of a chart in the output frequency unit (time stays in s). */
 function xOut(a: Analysis, x: number, f: FrequencyUnit): number {
@@ -212,12 +212,6 @@ export function masterCurveChart(
   };
 }
 
-const MODEL_STYLE = {
-  wlf: { colour: '#1d1d1d', line: 'solid', name: 'WLF' },
-  arrhenius: { colour: '#8a4f00', line: 'dashed', name: 'Arrhenius' },
-  polynomial: { colour: '#5a3d8a', line: 'dashed', name: 'polynomial' },
-} as const;
-
 export function shiftFactorChart(a: Analysis): ChartSpec {
   const [lo, hi] = temperatureRange(a);
   const series: ChartSeries[] = [];
@@ -225,10 +219,8 @@ export function shiftFactorChart(a: Analysis): ChartSpec {
   const legend: LegendEntry[] = [
     { name: 'fitted log10 aT ± s.e.', colour: '#444', marker: 'disc', line: 'none' },
   ];
-  for (const kind of SHIFT_MODEL_KINDS) {
-    const m = a.models[kind];
-    if (!m) continue;
-    const st = MODEL_STYLE[kind];
+  for (const { descriptor, result: m } of fittedShiftModels(a.models)) {
+    const st = { ...descriptor.chart, name: descriptor.name };
     const xC = m.band.temperatureK.map(toCelsius);
     bands.push({
       name: `${st.name} 95 %`,

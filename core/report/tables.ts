@@ -3,6 +3,8 @@
  * Every table that holds shift factors states the sign and bT conventions under it.
  */
 import type { Analysis } from '../pipeline/types';
+import { fittedShiftModels, modelConstant } from '../pipeline/model-results';
+import { shiftModels } from '../models';
 import { CONVENTIONS } from '../pipeline/conventions';
 import { toCelsius, toKelvinText } from '../pipeline/temperature';
 import { formatFixed, formatNumber } from './format';
@@ -50,11 +52,28 @@ export function shiftTable(a: Analysis): TableSpec {
   };
 }
 
+/** Each registered law in words, then how to read the constants (the model table's note). */
+function modelNotes(): string {
+  const models = shiftModels();
+  return [
+    ...models.map(
+      (d) => `${d.title}: ${d.formula.text}${d.formula.source ? ` (${d.formula.source})` : ''}.`,
+    ),
+    ...models.flatMap((d) => (d.readingNote ? [d.readingNote] : [])),
+  ].join(' ');
+}
+
+/** "; WLF constants fitted above Tg do not hold below Tg" for each law that has such a clause. */
+export function validityClauses(): string {
+  return shiftModels()
+    .flatMap((d) => (d.validityNote ? [`; ${d.validityNote}`] : []))
+    .join('');
+}
+
 const ci = (v: [number, number] | null | undefined, d = 4): string =>
   v ? `${formatNumber(v[0], d)} … ${formatNumber(v[1], d)}` : '–';
 
 export function modelTable(a: Analysis): TableSpec | null {
-  const { wlf, arrhenius, polynomial } = a.models;
   const rows: string[][] = [];
   const fit = (m: {
     r2: number | null;
@@ -65,91 +84,38 @@ export function modelTable(a: Analysis): TableSpec | null {
     formatFixed(m.rmsResidualDecades, 3),
     `${formatFixed(toCelsius(m.fittedRangeK[0]), 1)} … ${formatFixed(toCelsius(m.fittedRangeK[1]), 1)}`,
   ];
-  if (wlf) {
-    const tr = formatFixed(toCelsius(wlf.referenceK), 2);
-    rows.push([
-      'WLF',
-      'C1',
-      formatNumber(wlf.c1),
-      formatNumber(wlf.c1StdErr, 2),
-      ci(wlf.c1Ci95),
-      '',
-      `Tr = ${tr} °C`,
-      ...fit(wlf),
-    ]);
-    rows.push([
-      'WLF',
-      'C2',
-      formatNumber(wlf.c2K),
-      formatNumber(wlf.c2KStdErr, 2),
-      ci(wlf.c2KCi95),
-      'K',
-      '',
-      '',
-      '',
-      '',
-    ]);
-    if (wlf.atGlassTransition)
+  for (const f of fittedShiftModels(a.models)) {
+    const { descriptor: d, result: m } = f;
+    // the first constant's row carries the reference and the fit figures
+    d.parameters.forEach((p, i) => {
+      const c = modelConstant(f, i);
       rows.push([
-        'WLF at Tg',
-        'C1g / C2g',
-        `${formatNumber(wlf.atGlassTransition.c1)} / ${formatNumber(wlf.atGlassTransition.c2K)}`,
+        d.name,
+        d.law.parameters[i].name,
+        formatNumber(c.value),
+        formatNumber(c.stdErr, 2),
+        p.interval ? ci(c.ci95) : '',
+        p.unit,
+        ...(i === 0
+          ? [`Tr = ${formatFixed(toCelsius(m.referenceK), 2)} °C`, ...fit(m)]
+          : ['', '', '', '']),
+      ]);
+    });
+    for (const r of d.derived?.rows(m) ?? [])
+      rows.push([
+        r.model,
+        r.constant,
+        r.values.map((v) => formatNumber(v)).join(' / '),
         '',
         '',
-        '– / K',
-        `Tg = ${formatFixed(toCelsius(wlf.atGlassTransition.referenceK), 2)} °C`,
+        r.unit,
+        r.reference
+          ? `${r.reference.symbol} = ${formatFixed(toCelsius(r.reference.temperatureK), 2)} °C`
+          : '',
         '',
         '',
         '',
       ]);
-    if (wlf.apparentActivationEnergyKJPerMol != null)
-      rows.push([
-        'WLF',
-        'apparent Ea at Tr',
-        formatNumber(wlf.apparentActivationEnergyKJPerMol),
-        '',
-        '',
-        'kJ/mol',
-        '',
-        '',
-        '',
-        '',
-      ]);
-  }
-  if (arrhenius)
-    rows.push([
-      'Arrhenius',
-      'Ea',
-      formatNumber(arrhenius.activationEnergyKJPerMol),
-      formatNumber(arrhenius.activationEnergyKJPerMolStdErr, 2),
-      ci(arrhenius.activationEnergyKJPerMolCi95),
-      'kJ/mol',
-      `Tr = ${formatFixed(toCelsius(arrhenius.referenceK), 2)} °C`,
-      ...fit(arrhenius),
-    ]);
-  if (polynomial) {
-    rows.push([
-      'polynomial',
-      'a1',
-      formatNumber(polynomial.a1PerK),
-      formatNumber(polynomial.a1PerKStdErr, 2),
-      '',
-      '1/K',
-      `Tr = ${formatFixed(toCelsius(polynomial.referenceK), 2)} °C`,
-      ...fit(polynomial),
-    ]);
-    rows.push([
-      'polynomial',
-      'a2',
-      formatNumber(polynomial.a2PerK2),
-      formatNumber(polynomial.a2PerK2StdErr, 2),
-      '',
-      '1/K²',
-      '',
-      '',
-      '',
-      '',
-    ]);
   }
   if (rows.length === 0) return null;
   const hint = a.models.hint
@@ -172,10 +138,7 @@ export function modelTable(a: Analysis): TableSpec | null {
     ],
     numeric: [2, 3, 7, 8],
     rows,
-    note:
-      'WLF: log10 aT = −C1 (T − Tr)/(C2 + T − Tr) (Williams, Landel & Ferry 1955). Arrhenius: ln aT = (Ea/R)(1/T − 1/Tr), T in K. ' +
-      'Polynomial: log10 aT = a1 (T − Tr) + a2 (T − Tr)². C1 and C2 are strongly correlated: read the predicted band in the chart rather than the constants alone. ' +
-      `Do not use a model outside its fitted range; WLF constants fitted above Tg do not hold below Tg.${hint} ${CONVENTION_NOTE}`,
+    note: `${modelNotes()} Do not use a model outside its fitted range${validityClauses()}.${hint} ${CONVENTION_NOTE}`,
   };
 }
 

@@ -7,6 +7,7 @@ import { quantitySymbol } from '../data/quantities';
 import { toCelsius } from '../pipeline/temperature';
 import { appliedVertical } from '../pipeline/vertical-at';
 import { pronySymbols } from '../spectrum/prony-symbols';
+import { fittedShiftModels } from '../pipeline/model-results';
 
 export const CAUTIONS: readonly string[] = [
   'Extrapolation: values outside the measured window of reduced frequency or time, or outside the temperature range the shift model was fitted to, are extrapolations and only estimates. WLF constants fitted above Tg do not hold below Tg.',
@@ -17,7 +18,7 @@ export const CAUTIONS: readonly string[] = [
 
 /** How the model fits weighted the shifts, in words, from the first fitted model. */
 function weightingWords(a: Analysis): string {
-  const m = a.models.wlf ?? a.models.arrhenius ?? a.models.polynomial;
+  const m = fittedShiftModels(a.models)[0]?.result;
   if (!m) return 'least squares';
   return m.weighting.kind === 'full-covariance'
     ? 'generalised least squares with the full covariance of the shifts from the shift engine (all shifts share the noise of the reference condition)'

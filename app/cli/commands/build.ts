@@ -3,7 +3,7 @@
  * whole job and prints the JSON summary (--json) and/or writes the output files (--out DIR).
  */
 import { Command } from 'commander';
-import { analysisSummary } from '@core/pipeline';
+import { analysisSummary, fittedShiftModels, modelConstant } from '@core/pipeline';
 import { toCelsius } from '@core/pipeline';
 import type { Analysis } from '@core/pipeline';
 import { formatFixed } from '@core/report';
@@ -125,10 +125,15 @@ export function textSummary(a: Analysis): string {
         `  ${c.isothermId} ${formatFixed(toCelsius(c.temperatureK), 2).padStart(8)} °C  log10 aT = ${formatFixed(c.log10aT, 3)} ± ${formatFixed(c.log10aTStdErr, 3)}${c.included ? '' : `  (not included${c.leftOut ? `: ${c.leftOut.message}` : c.note ? `: ${c.note}` : ''})`}`,
     ),
   ];
-  const { wlf, arrhenius } = a.models;
-  if (wlf) lines.push(`WLF: C1 = ${wlf.c1.toPrecision(4)}, C2 = ${wlf.c2K.toPrecision(4)} K`);
-  if (arrhenius)
-    lines.push(`Arrhenius: Ea = ${arrhenius.activationEnergyKJPerMol.toPrecision(4)} kJ/mol`);
+  // the physical laws' constants (an empirical curve is in the summary and the files)
+  for (const f of fittedShiftModels(a.models).filter((m) => m.descriptor.physical)) {
+    const d = f.descriptor;
+    const constants = d.parameters.map(
+      (p, i) =>
+        `${d.law.parameters[i].name} = ${modelConstant(f, i).value.toPrecision(4)}${p.unit ? ` ${p.unit}` : ''}`,
+    );
+    lines.push(`${d.name}: ${constants.join(', ')}`);
+  }
   lines.push('(use --json for the full summary, --out DIR for tables and the report)');
   return `${lines.join('\n')}\n`;
 }

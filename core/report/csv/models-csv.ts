@@ -1,8 +1,14 @@
-/** Model constants as CSV: one row per constant with standard error, 95 % interval and fit figures. */
+/**
+ * Model constants as CSV: one row per constant with standard error, 95 % interval and fit figures,
+ * named by each model's registry descriptor.
+ */
 import type { Analysis, ModelFitStats } from '../../pipeline/types';
 import { conventionCommentLines } from '../../pipeline/conventions';
 import { toCelsius } from '../../pipeline/temperature';
 import { csvDocument, csvNumber } from './csv-format';
+import { fittedShiftModels, modelConstant } from '../../pipeline/model-results';
+import { shiftModels } from '../../models';
+import { validityClauses } from '../tables';
 
 export const MODEL_COLUMNS = [
   'model',
@@ -46,56 +52,32 @@ function row(
 }
 
 export function modelsCsv(a: Analysis): string {
-  const { wlf, arrhenius, polynomial } = a.models;
   const rows: string[][] = [];
-  if (wlf) {
-    rows.push(row('wlf', 'C1', wlf.c1, wlf.c1StdErr, wlf.c1Ci95, '', wlf.referenceK, wlf));
-    rows.push(row('wlf', 'C2', wlf.c2K, wlf.c2KStdErr, wlf.c2KCi95, 'K', wlf.referenceK, wlf));
-  }
-  if (arrhenius)
-    rows.push(
-      row(
-        'arrhenius',
-        'Ea',
-        arrhenius.activationEnergyKJPerMol,
-        arrhenius.activationEnergyKJPerMolStdErr,
-        arrhenius.activationEnergyKJPerMolCi95,
-        'kJ/mol',
-        arrhenius.referenceK,
-        arrhenius,
-      ),
-    );
-  if (polynomial) {
-    rows.push(
-      row(
-        'polynomial',
-        'a1',
-        polynomial.a1PerK,
-        polynomial.a1PerKStdErr,
-        null,
-        '1/K',
-        polynomial.referenceK,
-        polynomial,
-      ),
-    );
-    rows.push(
-      row(
-        'polynomial',
-        'a2',
-        polynomial.a2PerK2,
-        polynomial.a2PerK2StdErr,
-        null,
-        '1/K^2',
-        polynomial.referenceK,
-        polynomial,
-      ),
-    );
+  for (const f of fittedShiftModels(a.models)) {
+    const { descriptor: d, result: m } = f;
+    d.parameters.forEach((p, i) => {
+      const c = modelConstant(f, i);
+      rows.push(
+        row(
+          d.kind,
+          d.law.parameters[i].name,
+          c.value,
+          c.stdErr,
+          p.interval ? c.ci95 : null,
+          p.csvUnit ?? p.unit,
+          m.referenceK,
+          m,
+        ),
+      );
+    });
   }
   return csvDocument(
     [
       `Thermoshift ${a.version} shift-factor models — sample: ${a.sample.name}`,
-      'wlf: log10 aT = -C1 (T - Tr)/(C2 + T - Tr); arrhenius: ln aT = (Ea/R)(1/T - 1/Tr), T in K; polynomial: log10 aT = a1 (T - Tr) + a2 (T - Tr)^2',
-      'do not use a model outside fitted_from_C .. fitted_to_C; WLF constants fitted above Tg do not hold below Tg',
+      shiftModels()
+        .map((d) => `${d.kind}: ${d.formula.ascii}`)
+        .join('; '),
+      `do not use a model outside fitted_from_C .. fitted_to_C${validityClauses()}`,
       ...conventionCommentLines(),
     ],
     [...MODEL_COLUMNS],

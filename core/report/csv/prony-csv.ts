@@ -8,6 +8,7 @@ import type { Analysis } from '../../pipeline/types';
 import { conventionCommentLines } from '../../pipeline/conventions';
 import { toCelsius } from '../../pipeline/temperature';
 import { csvDocument, csvNumber } from './csv-format';
+import { fittedShiftModels, modelConstant } from '../../pipeline/model-results';
 import { modulusFactor, type ModulusUnit } from '../../units/output-units';
 import { pronySymbols } from '../../spectrum/prony-symbols';
 
@@ -17,16 +18,17 @@ export function pronyCsv(a: Analysis, unit: ModulusUnit = 'Pa'): string | null {
   if (!p) return null;
   const f = modulusFactor(unit);
   const y = pronySymbols(p.deformation);
-  const { wlf, arrhenius } = a.models;
-  const shiftModel: string[] = [];
-  if (wlf)
-    shiftModel.push(
-      `shift model wlf: C1 = ${csvNumber(wlf.c1)}, C2 = ${csvNumber(wlf.c2K)} K, Tr = ${toCelsius(wlf.referenceK)} °C (fitted ${toCelsius(wlf.fittedRangeK[0])}..${toCelsius(wlf.fittedRangeK[1])} °C)`,
-    );
-  if (arrhenius)
-    shiftModel.push(
-      `shift model arrhenius: Ea = ${csvNumber(arrhenius.activationEnergyKJPerMol)} kJ/mol, Tr = ${toCelsius(arrhenius.referenceK)} °C (fitted ${toCelsius(arrhenius.fittedRangeK[0])}..${toCelsius(arrhenius.fittedRangeK[1])} °C)`,
-    );
+  // the physical laws' constants, needed to use the series off Tref (an empirical curve is not listed)
+  const shiftModel = fittedShiftModels(a.models)
+    .filter((f) => f.descriptor.physical)
+    .map((f) => {
+      const { descriptor: d, result: m } = f;
+      const constants = d.parameters.map((p, i) => {
+        const unit = p.csvUnit ?? p.unit;
+        return `${d.law.parameters[i].name} = ${csvNumber(modelConstant(f, i).value)}${unit ? ` ${unit}` : ''}`;
+      });
+      return `shift model ${d.kind}: ${constants.join(', ')}, Tr = ${toCelsius(m.referenceK)} °C (fitted ${toCelsius(m.fittedRangeK[0])}..${toCelsius(m.fittedRangeK[1])} °C)`;
+    });
   return csvDocument(
     [
       `Thermoshift ${a.version} Prony series (generalised Maxwell model) — sample: ${a.sample.name}`,

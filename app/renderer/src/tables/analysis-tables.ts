@@ -5,7 +5,7 @@
  * digits, other figures to four. Moduli are in the display unit, stated in the header.
  */
 import type { Analysis, ModelFitStats } from '@core/pipeline';
-import { toCelsius } from '@core/pipeline';
+import { fittedShiftModels, modelConstant, toCelsius } from '@core/pipeline';
 import { SI_DISPLAY, toDisplay, type DisplayUnits } from '../format/display-units';
 import { digitsForError } from '../format/numbers';
 import type { Cell, Rounded } from './tsv';
@@ -64,40 +64,22 @@ export function shiftTable(a: Analysis): PlainTable {
 type Constant = [string, number, number | null, [number, number] | null, string];
 
 export function modelTable(a: Analysis): PlainTable {
-  const { wlf, arrhenius, polynomial } = a.models;
-  const models: [string, ModelFitStats & { referenceK: number }, Constant[]][] = [];
-  if (wlf)
-    models.push([
-      'WLF',
-      wlf,
-      [
-        ['C1', wlf.c1, wlf.c1StdErr, wlf.c1Ci95, ''],
-        ['C2', wlf.c2K, wlf.c2KStdErr, wlf.c2KCi95, 'K'],
-      ],
-    ]);
-  if (arrhenius)
-    models.push([
-      'Arrhenius',
-      arrhenius,
-      [
-        [
-          'Ea',
-          arrhenius.activationEnergyKJPerMol,
-          arrhenius.activationEnergyKJPerMolStdErr,
-          arrhenius.activationEnergyKJPerMolCi95,
-          'kJ/mol',
-        ],
-      ],
-    ]);
-  if (polynomial)
-    models.push([
-      'polynomial',
-      polynomial,
-      [
-        ['a1', polynomial.a1PerK, polynomial.a1PerKStdErr, null, '1/K'],
-        ['a2', polynomial.a2PerK2, polynomial.a2PerK2StdErr, null, '1/K²'],
-      ],
-    ]);
+  const models: [string, ModelFitStats & { referenceK: number }, Constant[]][] = fittedShiftModels(
+    a.models,
+  ).map((f) => [
+    f.descriptor.name,
+    f.result,
+    f.descriptor.parameters.map((p, i): Constant => {
+      const c = modelConstant(f, i);
+      return [
+        f.descriptor.law.parameters[i].name,
+        c.value,
+        c.stdErr,
+        p.interval ? c.ci95 : null,
+        p.unit,
+      ];
+    }),
+  ]);
   const rows: Cell[][] = models.flatMap(([name, m, constants]) =>
     constants.map(([constant, value, se, ci, unit]): Cell[] => [
       name,

@@ -5,6 +5,7 @@
  */
 import type { IsothermState } from '@core/pipeline';
 import type { Analysis } from '@core/pipeline';
+import { fittedShiftModels } from '@core/pipeline';
 import type { PlotSpec } from '../charts/plot-spec';
 import { arrheniusSpec } from '../charts/specs/arrhenius-plot';
 import { coleColePlot, lossTangentPlot, overlapResidualsPlot } from '../charts/specs/check-plots';
@@ -123,7 +124,7 @@ export const VIEW_GROUPS: readonly ViewGroup[] = [
         label: 'Model residuals',
         kind: 'plot',
         plot: withAnalysis((a) => modelResidualsPlot(a)),
-        available: has((a) => !!(a.models.wlf || a.models.arrhenius || a.models.polynomial)),
+        available: has((a) => fittedShiftModels(a.models).length > 0),
       },
     ],
   },

@@ -10,7 +10,7 @@ import { toCelsius } from '@core/pipeline';
 import { formatWithError } from '../../format/numbers';
 import type { PlotSeries, PlotSpec } from '../plot-spec';
 import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';
-import { MODEL_COLOURS, MODEL_NAMES, TG_COLOUR, verticalLine } from './shift-plot';
+import { modelColour, modelName, TG_COLOUR, verticalLine } from './shift-plot';
 import { extent } from '@core/data';
 
 export function arrheniusSpec(a: Analysis, states?: readonly IsothermState[]): PlotSpec {
@@ -22,23 +22,24 @@ export function arrheniusSpec(a: Analysis, states?: readonly IsothermState[]): P
     { label: 'ln aT of an isotherm (±1 s.e.)', colour: '#4a5358', style: 'disc' },
   ];
   const bands = p.models.map((m) => ({
-    label: `${MODEL_NAMES[m.kind]} 95 % band`,
-    colour: MODEL_COLOURS[m.kind],
+    label: `${modelName(m.kind)} 95 % band`,
+    colour: modelColour(m.kind),
     x: m.inverseTemperature,
     lower: m.lower95,
     upper: m.upper95,
   }));
+  // the Arrhenius law is the straight line of this plot: drawn solid, the other models dashed
   for (const m of p.models) {
     series.push({
       id: `model:${m.kind}`,
-      label: MODEL_NAMES[m.kind],
-      colour: MODEL_COLOURS[m.kind],
+      label: modelName(m.kind),
+      colour: modelColour(m.kind),
       style: m.kind === 'arrhenius' ? 'line' : 'dashed',
       points: m.inverseTemperature.map((x, i) => ({ x, y: m.lnAT[i] })),
     });
     legend.push({
-      label: `${MODEL_NAMES[m.kind]} with 95 % band`,
-      colour: MODEL_COLOURS[m.kind],
+      label: `${modelName(m.kind)} with 95 % band`,
+      colour: modelColour(m.kind),
       style: m.kind === 'arrhenius' ? 'line' : 'dashed',
     });
   }

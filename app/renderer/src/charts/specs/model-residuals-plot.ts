@@ -4,36 +4,33 @@
  * model does not suit the data range; scatter within the error bars says it does.
  */
 import type { Analysis } from '@core/pipeline';
-import { toCelsius, SHIFT_MODEL_KINDS } from '@core/pipeline';
+import { fittedShiftModels, toCelsius } from '@core/pipeline';
 import { formatFixed } from '@core/report';
 import type { PlotSeries, PlotSpec } from '../plot-spec';
-import { MODEL_COLOURS, MODEL_NAMES } from './shift-plot';
 import { maxOf, minOf } from '@core/data';
-
-const STYLES = { wlf: 'disc', arrhenius: 'ring', polynomial: 'disc' } as const;
 
 export function modelResidualsPlot(a: Analysis): PlotSpec {
   const err = new Map(a.curves.map((c) => [c.isothermId, c.log10aTStdErr]));
   const series: PlotSeries[] = [];
   const legend: PlotSpec['legend'] = [];
   const ts: number[] = [];
-  for (const kind of SHIFT_MODEL_KINDS) {
-    const m = a.models[kind];
-    if (!m || m.residuals.length === 0) continue;
+  for (const { descriptor: d, result: m } of fittedShiftModels(a.models)) {
+    const kind = d.kind;
+    if (m.residuals.length === 0) continue;
     const rs = [...m.residuals].sort((p, q) => p.temperatureK - q.temperatureK);
     for (const r of rs) ts.push(toCelsius(r.temperatureK));
     series.push({
       id: `residuals:${kind}`,
-      label: `${MODEL_NAMES[kind]} (RMS ${formatFixed(m.rmsResidualDecades, 3)} decades)`,
-      colour: MODEL_COLOURS[kind],
-      style: STYLES[kind],
+      label: `${d.name} (RMS ${formatFixed(m.rmsResidualDecades, 3)} decades)`,
+      colour: d.chart.appColour,
+      style: d.chart.residualMarker,
       points: rs.map((r) => ({ x: toCelsius(r.temperatureK), y: r.residualDecades })),
       yError: rs.map((r) => err.get(r.isothermId) ?? null),
     });
     legend.push({
-      label: `${MODEL_NAMES[kind]}: RMS ${formatFixed(m.rmsResidualDecades, 3)} decades`,
-      colour: MODEL_COLOURS[kind],
-      style: STYLES[kind],
+      label: `${d.name}: RMS ${formatFixed(m.rmsResidualDecades, 3)} decades`,
+      colour: d.chart.appColour,
+      style: d.chart.residualMarker,
     });
   }
   if (ts.length)

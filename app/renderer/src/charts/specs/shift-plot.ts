@@ -4,7 +4,7 @@
  * fitted above Tg do not hold below it). Isotherms that are not in the fit are drawn as faded
  * rings.
  */
-import { SHIFT_MODEL_KINDS } from '@core/pipeline';
+import { fittedShiftModels, shiftModel } from '@core/pipeline';
 import type { IsothermState } from '@core/pipeline';
 import type { Analysis } from '@core/pipeline';
 import { toCelsius } from '@core/pipeline';
@@ -13,16 +13,10 @@ import type { PlotBand, PlotSeries, PlotSpec } from '../plot-spec';
 import { colourBar, datasetScale, stateMarks, statesById } from './isotherm-style';
 import { maxOf, minOf } from '@core/data';
 
-export const MODEL_COLOURS = {
-  wlf: '#23676b',
-  arrhenius: '#9a5b12',
-  polynomial: '#5d4f8f',
-} as const;
-export const MODEL_NAMES = {
-  wlf: 'WLF',
-  arrhenius: 'Arrhenius',
-  polynomial: 'polynomial',
-} as const;
+/** The app's colour of a shift model (its registry descriptor's `chart.appColour`). */
+export const modelColour = (kind: string): string => shiftModel(kind).chart.appColour;
+/** The name of a shift model as the plots show it. */
+export const modelName = (kind: string): string => shiftModel(kind).name;
 export const TG_COLOUR = '#8a2f1d';
 
 /** A vertical line at x from y0 to y1 (Tg), as a plot series. */
@@ -53,28 +47,27 @@ export function shiftPlot(a: Analysis, states?: readonly IsothermState[]): PlotS
   const legend: PlotSpec['legend'] = [
     { label: 'log10 aT of an isotherm (±1 s.e.)', colour: '#4a5358', style: 'disc' },
   ];
-  for (const kind of SHIFT_MODEL_KINDS) {
-    const m = a.models[kind];
-    if (!m) continue;
+  for (const { descriptor: d, result: m } of fittedShiftModels(a.models)) {
+    const kind = d.kind;
     const x = m.band.temperatureK.map(toCelsius);
     bands.push({
-      label: `${MODEL_NAMES[kind]} 95 % band`,
-      colour: MODEL_COLOURS[kind],
+      label: `${d.name} 95 % band`,
+      colour: d.chart.appColour,
       x,
       lower: m.band.lower95,
       upper: m.band.upper95,
     });
     series.push({
       id: `model:${kind}`,
-      label: MODEL_NAMES[kind],
-      colour: MODEL_COLOURS[kind],
-      style: kind === 'wlf' ? 'line' : 'dashed',
+      label: d.name,
+      colour: d.chart.appColour,
+      style: d.chart.appLine,
       points: x.map((t, i) => ({ x: t, y: m.band.log10aT[i] })),
     });
     legend.push({
-      label: `${MODEL_NAMES[kind]} with 95 % band`,
-      colour: MODEL_COLOURS[kind],
-      style: kind === 'wlf' ? 'line' : 'dashed',
+      label: `${d.name} with 95 % band`,
+      colour: d.chart.appColour,
+      style: d.chart.appLine,
     });
   }
   const ys: number[] = [];
