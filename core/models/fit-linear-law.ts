@@ -5,6 +5,12 @@ import { resolveShiftFitOptions } from './shift-fit-options';
 import { weightingOfPoints } from './shift-weighting';
 import type { ShiftFitCommon, ShiftFitOptions, ShiftLaw, ShiftPoint } from './types';
 
+/** A law's own wording for the two ways its fit can fail (defaults are generic). */
+export interface LinearLawMessages {
+  tooFewPoints?: string;
+  undetermined?: string;
+}
+
 /**
  * The fit of any law linear in its constants (log10 aT = Σ_k b_k·x_k(T), x_k(Tr) = 0), for a new
  * model's descriptor: the law's gradient is its design row, and the constants come from the same
@@ -15,13 +21,15 @@ export function fitLinearShiftLaw(
   law: ShiftLaw,
   points: readonly ShiftPoint[],
   options: ShiftFitOptions,
+  messages: LinearLawMessages = {},
 ): ShiftFitCommon {
   const o = resolveShiftFitOptions(options);
   const pts = preparePoints(points, o.referenceK);
   const p = law.parameters.length;
   if (pts.temperatureK.length < p) {
     throw new RangeError(
-      `the ${law.kind} fit needs at least ${p} measured shift factor(s) away from the reference temperature`,
+      messages.tooFewPoints ??
+        `the ${law.kind} fit needs at least ${p} measured shift factor(s) away from the reference temperature`,
     );
   }
   const weighting = weightingOfPoints(pts, o.covariance, o.diagonalReason);
@@ -41,7 +49,7 @@ export function fitLinearShiftLaw(
       iterations: 1,
       reason: ok
         ? 'Closed-form least squares.'
-        : 'The temperatures do not determine the constants.',
+        : (messages.undetermined ?? 'The temperatures do not determine the constants.'),
     },
     o.glassTransitionK,
   );
