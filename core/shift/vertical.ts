@@ -43,6 +43,11 @@ export interface VerticalOutcome {
   /** True when the data carry a bT by the 'auto' rule (also when it was not applied). */
   carriesBT: boolean;
   /**
+   * A sentence when the moduli call, beyond their noise, for a bT that needs an αV no polymer
+   * has (a symptom of thermorheological complexity, for the superposition grade); else null.
+   */
+  implausible: string | null;
+  /**
    * With bT from one fitted αV: per dataset index ∂log10 aT/∂αV (decades·K) and αV's variance,
    * to carry αV's uncertainty into the shifts' covariance; null otherwise.
    */
@@ -162,6 +167,7 @@ export function verticalShift(
     extrapolatedK: [],
     free: false,
     carriesBT: false,
+    implausible: null,
     expansionSensitivity: null,
     startLog10aT: null,
     choice: {
@@ -186,6 +192,7 @@ export function verticalShift(
       extrapolatedK: d.extrapolatedK,
       free: false,
       carriesBT: false,
+      implausible: null,
       expansionSensitivity: null,
       startLog10aT: null,
       choice: {
@@ -212,6 +219,7 @@ export function verticalShift(
     return {
       ...none('requested: no vertical shift', profileStats(p, j)),
       carriesBT: j.carriesBT,
+      implausible: implausibleSentence(p, j),
     };
   }
   if (!canVgp) {
@@ -237,10 +245,13 @@ export function verticalShift(
       );
     const evidence = `αV = ${fmtAlpha(p.expansionPerK)} ± ${fmtAlpha(p.expansionStdErr)} fitted to the moduli lies ${(-p.z).toFixed(1)} standard errors below 1/Tref, where bT ≡ 1 (${AUTO_Z} needed), and the mismatch of the shifted curves drops by ${p.chi2Drop.toFixed(1)} residual variances; bT would reach ${j.effectDecades.toFixed(3)} decades`;
     if (!j.plausible && p.z < -AUTO_Z)
-      return none(
-        `bT = 1: a vertical shift would lower the mismatch (${evidence}) but needs αV outside what polymers show (0–20·10⁻⁴ /K): the isotherms may not superpose (check the van Gurp–Palmen plot)`,
-        profileStats(p, j),
-      );
+      return {
+        ...none(
+          `bT = 1: a vertical shift would lower the mismatch (${evidence}) but needs αV outside what polymers show (0–20·10⁻⁴ /K): the isotherms may not superpose (check the van Gurp–Palmen plot)`,
+          profileStats(p, j),
+        ),
+        implausible: implausibleSentence(p, j),
+      };
     if (!j.carriesBT)
       return none(`bT = 1: no vertical shift beyond the noise (${evidence})`, profileStats(p, j));
   }
@@ -263,6 +274,7 @@ export function verticalShift(
       extrapolatedK: [],
       free: false,
       carriesBT: j.carriesBT,
+      implausible: null,
       expansionSensitivity: {
         perIsotherm: p.sensitivity,
         variance: p.expansionStdErr * p.expansionStdErr,
@@ -297,6 +309,7 @@ export function verticalShift(
     extrapolatedK: [],
     free: true,
     carriesBT: j?.carriesBT ?? false,
+    implausible: p && j ? implausibleSentence(p, j) : null,
     expansionSensitivity: null,
     startLog10aT: null,
     choice: {
@@ -309,6 +322,18 @@ export function verticalShift(
       z: null,
     },
   };
+}
+
+/**
+ * The superposition grade's sentence when the moduli ask, beyond their noise, for a vertical
+ * shift no thermal expansion gives; null otherwise. Two components with different shift laws (a
+ * blend) leave a mismatch that a vertical offset growing with ΔT partly absorbs, in the direction
+ * of an αV below zero: measured on seeded blends (tests/core/shift/verdict.test.ts) αV ran to the
+ * end of the search range (−1/Tref) at 8–15 standard errors from bT ≡ 1.
+ */
+function implausibleSentence(p: ProfileFit, j: ExpansionJudgement): string | null {
+  if (j.plausible || !(p.z < -AUTO_Z)) return null;
+  return `the moduli call for a vertical shift that no thermal expansion gives (αV = ${fmtAlpha(p.expansionPerK)} ± ${fmtAlpha(p.expansionStdErr)}, ${(-p.z).toFixed(1)} standard errors from bT ≡ 1; polymers: 0–20·10⁻⁴ /K)`;
 }
 
 function profileStats(
