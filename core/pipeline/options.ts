@@ -79,6 +79,11 @@ export type AnalysisOptions = z.input<typeof analysisOptionsSchema> & {
    * skipped. Changes the speed, not the optimum it converges to. Not part of the settings.
    */
   warmStartLog10aT?: Readonly<Record<string, number>>;
+  /**
+   * Live re-fit: with verticalShift 'auto' or 'data', keep bT from this αV (the last full fit's,
+   * 1/K, with its standard error) instead of fitting αV again. Not part of the settings.
+   */
+  heldExpansion?: { expansionPerK: number; expansionStdErr: number | null };
 };
 
 /** The options with every default applied: what the analysis really used. */
@@ -139,6 +144,7 @@ export function resolveAnalysisOptions(
     onProgress: _progress,
     importWarnings: _warnings,
     warmStartLog10aT: _warmStart,
+    heldExpansion: _held,
     ...rest
   } = options;
   const parsed = analysisOptionsSchema.safeParse(rest);

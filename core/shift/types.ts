@@ -100,6 +100,13 @@ export interface ShiftOptions {
    * (all active isotherms must be given for the scan to be skipped). @default undefined
    */
   initialLog10aT?: Record<string, number>;
+  /**
+   * With vertical 'auto' or 'data': take bT from the entropic law with this αV (1/K, and its
+   * standard error) instead of fitting αV again — for live re-fits while a curve is dragged, which
+   * keep the αV of the last full fit. Ignored with 'none', 'density' or a given density.
+   * @default undefined
+   */
+  heldExpansion?: { expansionPerK: number; expansionStdErr: number | null };
   /** Robust loss on pair residuals. @default 'huber' */
   robustLoss?: RobustLoss;
   /**
@@ -137,11 +144,15 @@ export interface ShiftOptions {
 }
 
 export type ResolvedShiftOptions = Required<
-  Omit<ShiftOptions, 'density' | 'initialLog10aT' | 'robustScaleDecades' | 'drivers'>
+  Omit<
+    ShiftOptions,
+    'density' | 'initialLog10aT' | 'heldExpansion' | 'robustScaleDecades' | 'drivers'
+  >
 > & {
   drivers: QuantityId[];
   density: DensityInput | null;
   initialLog10aT: Record<string, number> | null;
+  heldExpansion: { expansionPerK: number; expansionStdErr: number | null } | null;
   robustScaleDecades: number | null;
 };
 

@@ -236,6 +236,34 @@ export function verticalShift(
       "vertical 'data' needs oscillatory data with G' and G'' (or δ and |G*|) in every isotherm, so that bT can be found from δ against |G*|; for relaxation or creep data give a density (vertical 'density') or use 'none'.",
     );
   }
+  if (s.heldExpansion) {
+    // A live re-fit keeps the αV of the last full fit: bT changes only when the curve is released.
+    const { expansionPerK: alpha, expansionStdErr: se } = s.heldExpansion;
+    const log10bT = temps.map((T) => entropicLog10bT(T, s.referenceK, alpha));
+    return {
+      log10bT,
+      stdErr: temps.map((T) =>
+        se === null ? NaN : Math.abs(entropicLog10bTSlope(T, s.referenceK, alpha)) * se,
+      ),
+      joint: false,
+      vgpFit: null,
+      extrapolatedK: [],
+      free: false,
+      carriesBT: true,
+      implausible: null,
+      expansionSensitivity: null,
+      startLog10aT: null,
+      choice: {
+        requested: s.vertical,
+        chosen: 'data',
+        reason: `bT from the entropic law bT = Tref(1 + αV(T − Tref))/T with αV = ${fmtAlpha(alpha)} held from the last full fit (live re-fit; αV is fitted again when the change is complete)`,
+        expansionPerK: alpha,
+        expansionStdErr: se,
+        effectDecades: largestAbs(active.map((k) => log10bT[k])),
+        z: null,
+      },
+    };
+  }
   const p = profileExpansion(dataset, active, s);
   const j = p ? judgeExpansion(p, activeTemps, s.referenceK) : null;
   if (s.vertical === 'auto') {

@@ -58,6 +58,27 @@ export function warmStartFrom(
   return Object.keys(out).length ? out : undefined;
 }
 
+/**
+ * The αV of the shown analysis when its bT came from the data, to keep during a live re-fit: the
+ * αV fit takes several horizontal fits, and one drag step changes it by far less than its
+ * standard error. Only for the same data, reference temperature and vertical setting (released
+ * curves are fitted in full again, αV included).
+ */
+export function heldExpansionFrom(
+  shown: Analysis | null,
+  doc: AnalysisDocument,
+): { expansionPerK: number; expansionStdErr: number | null } | undefined {
+  if (!shown || shown.dataset.name !== doc.dataset.name) return undefined;
+  const tref = doc.options.referenceTemperatureK;
+  if (tref !== undefined && tref !== shown.referenceTemperatureK) return undefined;
+  const mode = doc.options.verticalShift ?? 'auto';
+  const v = shown.vertical;
+  if ((mode !== 'auto' && mode !== 'data') || mode !== (shown.settings.verticalShift ?? 'auto'))
+    return undefined;
+  if (!v || v.chosen !== 'data' || v.expansionPerK === null) return undefined;
+  return { expansionPerK: v.expansionPerK, expansionStdErr: v.expansionStdErr };
+}
+
 export function useWorkbench(engine: UseEngineReturn): UseWorkbenchReturn {
   const history = shallowRef<History<AnalysisDocument | null>>(createHistory(null));
   const analysis = shallowRef<Analysis | null>(null);
@@ -68,12 +89,14 @@ export function useWorkbench(engine: UseEngineReturn): UseWorkbenchReturn {
   const runner = useLatestRunner<{ doc: AnalysisDocument; light: boolean }>(
     async ({ doc, light }) => {
       const warm = light ? warmStartFrom(analysis.value, doc) : undefined;
+      const held = light ? heldExpansionFrom(analysis.value, doc) : undefined;
       const r = await engine.run({
         kind: 'analyse',
         dataset: doc.dataset,
         options: light ? { ...doc.options, models: [], pronyModesPerDecade: 0 } : doc.options,
         importWarnings: doc.importWarnings,
         ...(warm && { warmStartLog10aT: warm }),
+        ...(held && { heldExpansion: held }),
       });
       if (history.value.present !== doc) {
         // A newer document is waiting; still show this result if nothing better exists yet.

@@ -16,6 +16,8 @@ export type EngineRequest =
       importWarnings: DataWarning[];
       /** Shifts to start from (live re-fit while dragging): log10 aT by isotherm id. */
       warmStartLog10aT?: Record<string, number>;
+      /** αV to keep (live re-fit while dragging): the last full fit's bT is not fitted again. */
+      heldExpansion?: { expansionPerK: number; expansionStdErr: number | null };
     }
   | { kind: 'import'; files: TextFile[]; options: ImportOptions };
 
