@@ -62,8 +62,15 @@ export interface ProfileFit {
 
 /** Trial fits converge to this, decades (or to the user's tolerance when tighter). */
 export const PROFILE_TOLERANCE_DECADES = 1e-3;
-/** The profile bins curves denser than this (fewer entries, much the same information on αV). */
-export const PROFILE_POINTS_PER_DECADE = 40;
+/**
+ * Curves the horizontal fit bins (denser than its maxPointsPerDecade) are binned coarser for the
+ * profile, to this many entries per decade: each trial fit then walks half the entries. Measured:
+ * noise-free sets at 200 points per decade give αV within 0.02 % of the truth (as with 40 bins a
+ * decade); on the 200 × 2000 sets of bench/vs-generator.ts the standard error of αV grew by 1 %
+ * and the estimate moved by half a standard error (which the largest error of log10 aT, 0.0007
+ * decades, does not show). Sparser curves are not binned, as in the horizontal fit.
+ */
+export const PROFILE_POINTS_PER_DECADE = 20;
 /** The second trial αV: a value typical of polymer melts, 1/K (common practice). */
 const TYPICAL_EXPANSION_PER_K = 6e-4;
 /** The secant stops when a step is below this share of αV's standard error … */
@@ -219,6 +226,23 @@ export function profileExpansion(
     ...robustFitSettings(s),
     toleranceDecades: Math.min(s.toleranceDecades, PROFILE_TOLERANCE_DECADES),
   };
+  let densest = 0;
+  for (const k of active) {
+    const x = dataset.isotherms[k].x;
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (const v of x)
+      if (v > 0) {
+        lo = Math.min(lo, v);
+        hi = Math.max(hi, v);
+      }
+    const span = Math.log10(hi / lo);
+    if (span > 0) densest = Math.max(densest, x.length / span);
+  }
+  const perDecade =
+    densest > s.maxPointsPerDecade
+      ? Math.min(s.maxPointsPerDecade, PROFILE_POINTS_PER_DECADE)
+      : s.maxPointsPerDecade;
   let last: FitProblem | null = null;
   const build = (d: Set<number>[] | undefined): FitProblem =>
     (last = buildProblem(dataset, {
@@ -227,7 +251,7 @@ export function profileExpansion(
       fixedLog10bT: null,
       joint: false,
       minOverlapPoints: s.minOverlapPoints,
-      maxPointsPerDecade: Math.min(s.maxPointsPerDecade, PROFILE_POINTS_PER_DECADE),
+      maxPointsPerDecade: perDecade,
       dropped: d,
     }));
   const common = {
