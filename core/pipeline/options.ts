@@ -6,6 +6,7 @@ import { z } from 'zod';
 import { QUANTITY_IDS, type DataWarning, type QuantityId } from '../data/types';
 import { extent } from '../data/extent';
 import { SHIFT_MODEL_KINDS, type ShiftModelKind } from '../models/types';
+import type { HeldExpansion } from '../shift/types';
 
 const quantityId = z.enum(QUANTITY_IDS as [QuantityId, ...QuantityId[]]);
 
@@ -80,10 +81,10 @@ export type AnalysisOptions = z.input<typeof analysisOptionsSchema> & {
    */
   warmStartLog10aT?: Readonly<Record<string, number>>;
   /**
-   * Live re-fit: with verticalShift 'auto' or 'data', keep bT from this αV (the last full fit's,
-   * 1/K, with its standard error) instead of fitting αV again. Not part of the settings.
+   * Live re-fit: with verticalShift 'auto' or 'data', keep the last full fit's bT (its αV,
+   * 1/K, with its standard error, or null for bT = 1) instead of fitting αV again. Not part of the settings.
    */
-  heldExpansion?: { expansionPerK: number; expansionStdErr: number | null };
+  heldExpansion?: HeldExpansion;
 };
 
 /** The options with every default applied: what the analysis really used. */

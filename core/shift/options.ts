@@ -73,12 +73,12 @@ export function resolveShiftOptions(dataset: Dataset, o: ShiftOptions): Resolved
   if (
     o.heldExpansion !== undefined &&
     !(
-      Number.isFinite(o.heldExpansion.expansionPerK) &&
+      (o.heldExpansion.expansionPerK === null || Number.isFinite(o.heldExpansion.expansionPerK)) &&
       (o.heldExpansion.expansionStdErr === null || Number.isFinite(o.heldExpansion.expansionStdErr))
     )
   )
     throw new ShiftOptionsError(
-      'The heldExpansion option must be { expansionPerK: number, expansionStdErr: number | null } (1/K).',
+      'The heldExpansion option must be { expansionPerK: number | null, expansionStdErr: number | null } (1/K).',
     );
   const minOverlapPoints = o.minOverlapPoints ?? 4;
   if (!(Number.isInteger(minOverlapPoints) && minOverlapPoints >= 2))

@@ -102,11 +102,11 @@ export interface ShiftOptions {
   initialLog10aT?: Record<string, number>;
   /**
    * With vertical 'auto' or 'data': take bT from the entropic law with this αV (1/K, and its
-   * standard error) instead of fitting αV again — for live re-fits while a curve is dragged, which
-   * keep the αV of the last full fit. Ignored with 'none', 'density' or a given density.
-   * @default undefined
+   * standard error) instead of fitting αV again, or keep bT = 1 when expansionPerK is null — for
+   * live re-fits while a curve is dragged, which keep the last full fit's choice. Ignored with
+   * 'none', 'density' or a given density. @default undefined
    */
-  heldExpansion?: { expansionPerK: number; expansionStdErr: number | null };
+  heldExpansion?: HeldExpansion;
   /** Robust loss on pair residuals. @default 'huber' */
   robustLoss?: RobustLoss;
   /**
@@ -152,9 +152,16 @@ export type ResolvedShiftOptions = Required<
   drivers: QuantityId[];
   density: DensityInput | null;
   initialLog10aT: Record<string, number> | null;
-  heldExpansion: { expansionPerK: number; expansionStdErr: number | null } | null;
+  heldExpansion: HeldExpansion | null;
   robustScaleDecades: number | null;
 };
+
+/** The vertical shift of the last full fit, kept during a live re-fit (ShiftOptions.heldExpansion). */
+export interface HeldExpansion {
+  /** αV of the entropic bT, 1/K; null: the last full fit applied no bT (bT = 1). */
+  expansionPerK: number | null;
+  expansionStdErr: number | null;
+}
 
 /** Stable warning codes; see docs/shifting.md. */
 export type ShiftWarningCode =

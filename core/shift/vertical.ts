@@ -236,7 +236,11 @@ export function verticalShift(
       "vertical 'data' needs oscillatory data with G' and G'' (or δ and |G*|) in every isotherm, so that bT can be found from δ against |G*|; for relaxation or creep data give a density (vertical 'density') or use 'none'.",
     );
   }
-  if (s.heldExpansion) {
+  if (s.heldExpansion?.expansionPerK === null)
+    return none(
+      'bT = 1 held from the last full fit (live re-fit; whether the data need a bT is judged again when the change is complete)',
+    );
+  if (s.heldExpansion && s.heldExpansion.expansionPerK !== null) {
     // A live re-fit keeps the αV of the last full fit: bT changes only when the curve is released.
     const { expansionPerK: alpha, expansionStdErr: se } = s.heldExpansion;
     const log10bT = temps.map((T) => entropicLog10bT(T, s.referenceK, alpha));

@@ -90,6 +90,14 @@ describe('profileExpansion() through shiftIsotherms()', () => {
       density: { kind: 'expansion', volumetricExpansionPerK: ALPHA_V },
     });
     expect(given.vertical.chosen).toBe('density');
+    // A last full fit that found no bT is held as bT = 1.
+    const off = shiftIsotherms(dataset, {
+      referenceK,
+      heldExpansion: { expansionPerK: null, expansionStdErr: null },
+    });
+    expect(off.vertical.chosen).toBe('none');
+    expect(off.vertical.reason).toMatch(/held from the last full fit/);
+    off.curves.forEach((cv) => expect(cv.log10bT).toBe(0));
   });
 
   it("shiftIsotherms() carries αV's uncertainty into the shifts' standard errors and covariance", () => {

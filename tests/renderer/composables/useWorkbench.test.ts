@@ -132,5 +132,11 @@ describe('heldExpansionFrom()', () => {
     const otherTref = { ...start, options: { ...start.options, referenceTemperatureK: 300 } };
     expect(heldExpansionFrom(wb.analysis.value, otherTref)).toBeUndefined();
     expect(heldExpansionFrom(null, start)).toBeUndefined();
+    // 'auto' that found no bT keeps bT = 1 during the drag (no αV fit at every step either).
+    const none = {
+      ...wb.analysis.value!,
+      vertical: { ...wb.analysis.value!.vertical!, chosen: 'none' as const, expansionPerK: null },
+    };
+    expect(heldExpansionFrom(none, start)).toEqual({ expansionPerK: null, expansionStdErr: null });
   });
 });

@@ -16,6 +16,9 @@ import {
 } from '../document/history';
 import type { UseEngineReturn } from '../engine/useEngine';
 import { useLatestRunner } from './useLatestRunner';
+import { heldExpansionFrom } from '../document/live-refit';
+
+export { heldExpansionFrom } from '../document/live-refit';
 
 export interface UseWorkbenchReturn {
   doc: ComputedRef<AnalysisDocument | null>;
@@ -56,27 +59,6 @@ export function warmStartFrom(
   for (const c of shown.curves)
     if (c.log10aT !== null && ids.has(c.isothermId)) out[c.isothermId] = c.log10aT;
   return Object.keys(out).length ? out : undefined;
-}
-
-/**
- * The αV of the shown analysis when its bT came from the data, to keep during a live re-fit: the
- * αV fit takes several horizontal fits, and one drag step changes it by far less than its
- * standard error. Only for the same data, reference temperature and vertical setting (released
- * curves are fitted in full again, αV included).
- */
-export function heldExpansionFrom(
-  shown: Analysis | null,
-  doc: AnalysisDocument,
-): { expansionPerK: number; expansionStdErr: number | null } | undefined {
-  if (!shown || shown.dataset.name !== doc.dataset.name) return undefined;
-  const tref = doc.options.referenceTemperatureK;
-  if (tref !== undefined && tref !== shown.referenceTemperatureK) return undefined;
-  const mode = doc.options.verticalShift ?? 'auto';
-  const v = shown.vertical;
-  if ((mode !== 'auto' && mode !== 'data') || mode !== (shown.settings.verticalShift ?? 'auto'))
-    return undefined;
-  if (!v || v.chosen !== 'data' || v.expansionPerK === null) return undefined;
-  return { expansionPerK: v.expansionPerK, expansionStdErr: v.expansionStdErr };
 }
 
 export function useWorkbench(engine: UseEngineReturn): UseWorkbenchReturn {
