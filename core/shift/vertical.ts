@@ -73,10 +73,12 @@ export const PLAUSIBLE_MARGIN_STD_ERR = 3;
  * 'auto' applies bT when αV lies more than this many standard errors below 1/Tref (bT ≡ 1). The
  * test is one-sided: a polymer's αV is below 1/T (αV·T ≈ 0.2–0.3, common practice), so a bT
  * always makes bT < 1 above Tref. The standard error propagates the point noise through every
- * pair comparison (expansion-profile.ts); without a bT, z scattered with an RMS of 1.0–1.1 and
- * |z| ≤ 3.3 on 120 seeded melt sets (tests/core/shift/vertical-auto.test.ts), so 4 is crossed by
- * noise alone about once in 5,000 sets; with the entropic bT of αV = 6·10⁻⁴ /K, z lay at −14 to
- * −52 at 2 % noise and around −5 at 8 %.
+ * pair comparison (expansion-profile.ts). Measured without a bT: z scattered with an RMS of
+ * 1.0–1.1 and |z| ≤ 3.3 on 120 seeded melt sets (Arrhenius and WLF melts of
+ * tests/core/shift/fixtures.ts, 5 and 8 points per decade, 2 % noise), |z| ≤ 2.3 on the 80 sets of
+ * tests/core/shift/vertical-auto.test.ts; so 4 is crossed by noise alone about once in 10,000
+ * sets. With the entropic bT of αV = 6·10⁻⁴ /K, z lay at −14 to −28 at 2 % noise and −1.7 to
+ * −8.5 at 8 % on those melts.
  */
 export const AUTO_Z = 4;
 
