@@ -15,12 +15,14 @@
  *      dF/dαV = Σ ψ(z)/z · w · r · ∂r/∂αV,  ∂r/∂αV = β_q (D_i − D_j),  D_k = ∂log10 bT_k/∂αV.
  *    A secant (one-dimensional Newton) on that slope converges in two or three re-fits; each
  *    re-fit starts from the shifts predicted by the last two (∂aT/∂αV), so it takes few steps.
- *  - The trial fits converge to PROFILE_TOLERANCE_DECADES (the slope is only as good as the shifts
- *    it is taken at).
- *  - The curvature F'' and the sensitivity ∂log10 aT/∂αV come from a pair of fits a few standard
- *    errors apart around the optimum; s.e.(αV) = √(2s²/F'') (the pair residuals count each point
- *    twice, docs/shifting.md, uncertainty), and the sensitivity carries αV's uncertainty into the
- *    shifts' covariance.
+ *  - The trial fits converge to PROFILE_TOLERANCE_DECADES or the user's tighter tolerance (the
+ *    slope is only as good as the shifts it is taken at; on 200 × 2000 points a tenth of it moved
+ *    αV by 0.01 of its standard error).
+ *  - The sensitivity ∂log10 aT/∂αV comes from two re-fits a few standard errors of αV apart; with
+ *    it, the curvature of the profile and the noise of its slope follow in one walk over the pair
+ *    residuals (pathInformation: the engine's sandwich along the profile's path), so that
+ *    s.e.(αV) counts that every point enters many pair comparisons. The sensitivity also carries
+ *    αV's uncertainty into the shifts' covariance (shift-isotherms.ts).
  */
 import type { Dataset, QuantityId } from '../data/types';
 import { buildProblem } from './build-problem';
@@ -86,7 +88,7 @@ const MAX_STEPS = 8;
  * changes in its sixth digit), which moves nothing.
  */
 const PREDICTED_TRIAL_ITERATIONS = 2;
-/** The curvature pair lies this many standard errors apart (far enough that the fits' tolerance does not matter). */
+/** The sensitivity pair lies this many (naive) standard errors apart, far enough that the fits' tolerance does not matter. */
 const CURVATURE_SPAN_STD_ERR = 3;
 
 /** The problem with each curve's log ordinate moved by β_q·log10 bT (the same binning). */
