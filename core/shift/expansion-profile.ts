@@ -17,7 +17,7 @@
  *    re-fit starts from the shifts predicted by the last two (∂aT/∂αV), so it takes few steps.
  *  - The trial fits converge to PROFILE_TOLERANCE_DECADES or the user's tighter tolerance (the
  *    slope is only as good as the shifts it is taken at; on 200 × 2000 points a tenth of it moved
- *    αV by 0.01 of its standard error).
+ *    αV by 0.02 of its standard error).
  *  - The sensitivity ∂log10 aT/∂αV comes from two re-fits a few standard errors of αV apart; with
  *    it, the curvature of the profile and the noise of its slope follow in one walk over the pair
  *    residuals (pathInformation: the engine's sandwich along the profile's path), so that
