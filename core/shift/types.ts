@@ -18,7 +18,7 @@ export interface VerticalChoice {
   chosen: 'none' | 'density' | 'data';
   /** One sentence for the user: what was applied and the evidence. */
   reason: string;
-  /** αV of the entropic law (given, or fitted to δ against |G*|), 1/K; null when none. */
+  /** αV of the entropic law (given, or fitted to the moduli), 1/K; null when none. */
   expansionPerK: number | null;
   /** Standard error of a fitted αV, 1/K; null when given or not fitted. */
   expansionStdErr: number | null;

@@ -8,8 +8,8 @@
  *    its one constant αV fitted to the moduli (profileExpansion). When no plausible αV fits, each
  *    isotherm keeps its own bT from δ against |G*| — δ carries no vertical shift, so the offset
  *    along log|G*| is log10 bT itself, free of aT (Mavridis & Shroff, Polym. Eng. Sci. 32, 1992; docs/conventions.md §2);
- *  - 'auto': the same fit, applied only when it lowers the mismatch beyond the noise
- *    (AUTO_CHI2_DROP), reaches AUTO_MIN_EFFECT_DECADES and gives a plausible αV. Relaxation and
+ *  - 'auto': the same fit, applied only when αV lies AUTO_Z standard errors below bT ≡ 1, bT
+ *    reaches AUTO_MIN_EFFECT_DECADES and αV is plausible (judgeExpansion). Relaxation and
  *    creep data cannot tell a vertical from a horizontal shift, so 'auto' keeps bT = 1 there
  *    unless a density is given.
  * Relaxation or creep with 'data' is refused with a ShiftOptionsError (see below).
