@@ -50,7 +50,12 @@ export function buildMasterCurve(dataset: Dataset, options: AnalysisOptions = {}
   const data = applyMasks(dataset, settings.maskedPoints, warnings);
 
   progress(0.05, 'shift');
-  let { result, curves } = runShift(data, settings, options.warmStartLog10aT);
+  let { result, curves } = runShift(
+    data,
+    settings,
+    options.warmStartLog10aT,
+    options.heldExpansion,
+  );
   // An automatic Tref must be an isotherm that stays in the fit: if the one chosen was left out
   // (e.g. it overlaps nothing), aT = 1 would be extrapolated from others. Choose again among the
   // included ones (the one nearest the middle of their range) and shift once more.

@@ -7,6 +7,7 @@ import { QUANTITY_IDS, type DataWarning, type QuantityId } from '../data/types';
 import { extent } from '../data/extent';
 import { shiftModelKinds } from '../models';
 import type { ShiftModelKind } from '../models/types';
+import type { HeldExpansion } from '../shift/types';
 
 const quantityId = z.enum(QUANTITY_IDS as [QuantityId, ...QuantityId[]]);
 
@@ -91,6 +92,11 @@ export type AnalysisOptions = z.input<typeof analysisOptionsSchema> & {
    * skipped. Changes the speed, not the optimum it converges to. Not part of the settings.
    */
   warmStartLog10aT?: Readonly<Record<string, number>>;
+  /**
+   * Live re-fit: with verticalShift 'auto' or 'data', keep the last full fit's bT (its αV,
+   * 1/K, with its standard error, or null for bT = 1) instead of fitting αV again. Not part of the settings.
+   */
+  heldExpansion?: HeldExpansion;
 };
 
 /** The options with every default applied: what the analysis really used. */
@@ -152,6 +158,7 @@ export function resolveAnalysisOptions(
     onProgress: _progress,
     importWarnings: _warnings,
     warmStartLog10aT: _warmStart,
+    heldExpansion: _held,
     ...rest
   } = options;
   const parsed = analysisOptionsSchema.safeParse(rest);

@@ -50,10 +50,12 @@ export function runShift(
   dataset: Dataset,
   s: ResolvedAnalysisOptions,
   warmStartLog10aT?: Readonly<Record<string, number>>,
+  heldExpansion?: ShiftOptions['heldExpansion'],
 ): { result: ShiftResult; curves: AnalysisCurve[] } {
   const result = shiftIsotherms(dataset, {
     ...shiftOptionsFor(s),
     ...(warmStartLog10aT && { initialLog10aT: { ...warmStartLog10aT } }),
+    ...(heldExpansion && { heldExpansion: { ...heldExpansion } }),
   });
   const curves = result.curves.map((c): AnalysisCurve => {
     const note = noteOf(c);

@@ -45,7 +45,7 @@ export function log10bTAt(a: Analysis, temperatureK: number): VerticalShiftAt {
   if (mode === 'data' && a.vertical?.expansionPerK != null)
     return {
       log10bT: entropicLog10bT(temperatureK, s.referenceTemperatureK, a.vertical.expansionPerK),
-      note: 'bT from the entropic law with αV fitted to δ against |G*|',
+      note: 'bT from the entropic law with αV fitted to the moduli',
       extrapolated: false,
     };
   if (mode === 'density' && s.density) {

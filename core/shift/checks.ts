@@ -98,9 +98,12 @@ export function gradeOf(
  * Shifts from two quantities count as disagreeing for a `fair` grade only beyond this many
  * combined standard errors: the largest of many isotherms' differences is compared, and at 2.5
  * about one set in twenty of a simple material with ten isotherms would be called fair by chance
- * (Bonferroni, as in fit-offsets.ts).
+ * (Bonferroni, as in fit-offsets.ts). 4.5 rather than 4: on sparse curves (5–8 points per decade)
+ * the G′-alone and G″-alone shifts differ by 1.1–1.3× their stated combined error (RMS over 120
+ * seeded melt sets at 4 % noise with the true bT), so 4 stated errors are only about 3.3 actual
+ * ones, and a simple melt with ten isotherms was called fair about once in 240 sets.
  */
-export const FAIR_DISAGREE_Z = 4;
+export const FAIR_DISAGREE_Z = 4.5;
 
 /** The grade and, for each criterion that set it, a sentence with its figure and threshold. */
 export function gradeWithReasons(
@@ -109,6 +112,11 @@ export function gradeWithReasons(
   disagreement: number | null,
   z: number | null,
   ignoredBTDecades: number | null,
+  /**
+   * A sentence when the moduli call, beyond their noise, for a vertical shift that no thermal
+   * expansion gives (vertical.ts, judgeExpansion); else null. @default null
+   */
+  implausibleVertical: string | null = null,
 ): { grade: SuperpositionGrade; reasons: string[] } {
   const ratios = [mismatch, vgp].filter((r): r is number => r !== null && Number.isFinite(r));
   if (ratios.length === 0 && disagreement === null) return { grade: 'unknown', reasons: [] };
@@ -128,6 +136,7 @@ export function gradeWithReasons(
     `shifts from different quantities differ by up to ${disagreement!.toFixed(2)} decades (${z!.toFixed(1)} standard errors)`;
   if (disagrees(DISAGREE_DECADES, DISAGREE_Z)) poor.push(dis());
   else if (disagrees(DISAGREE_DECADES / 2, FAIR_DISAGREE_Z)) fair.push(dis());
+  if (implausibleVertical !== null) fair.push(implausibleVertical);
   if (ignoredBTDecades !== null)
     fair.push(
       `the data carry a vertical shift of up to ${ignoredBTDecades.toFixed(3)} decades that was not applied`,

@@ -70,6 +70,16 @@ export function resolveShiftOptions(dataset: Dataset, o: ShiftOptions): Resolved
         `The locked[${i}] option must be { id: string, log10aT: number }.`,
       );
   });
+  if (
+    o.heldExpansion !== undefined &&
+    !(
+      (o.heldExpansion.expansionPerK === null || Number.isFinite(o.heldExpansion.expansionPerK)) &&
+      (o.heldExpansion.expansionStdErr === null || Number.isFinite(o.heldExpansion.expansionStdErr))
+    )
+  )
+    throw new ShiftOptionsError(
+      'The heldExpansion option must be { expansionPerK: number | null, expansionStdErr: number | null } (1/K).',
+    );
   const minOverlapPoints = o.minOverlapPoints ?? 4;
   if (!(Number.isInteger(minOverlapPoints) && minOverlapPoints >= 2))
     throw new ShiftOptionsError(
@@ -83,6 +93,7 @@ export function resolveShiftOptions(dataset: Dataset, o: ShiftOptions): Resolved
     excluded: [...(o.excluded ?? [])],
     locked: locked.map((l) => ({ ...l })),
     initialLog10aT: o.initialLog10aT ? { ...o.initialLog10aT } : null,
+    heldExpansion: o.heldExpansion ? { ...o.heldExpansion } : null,
     robustLoss,
     robustScaleDecades:
       o.robustScaleDecades === undefined

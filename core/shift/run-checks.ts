@@ -66,6 +66,7 @@ export function runChecks(
           dis?.decades ?? null,
           dis?.z ?? null,
           ignoredBTDecades,
+          vertical.implausible,
         )
       : { grade: 'unknown' as const, reasons: [] };
   const checks: ShiftChecks = {

@@ -19,13 +19,7 @@ import type {
   ShiftResult,
   ShiftWarning,
 } from './types';
-import {
-  AUTO_CHI2_DROP,
-  AUTO_MIN_EFFECT_DECADES,
-  AUTO_Z,
-  PLAUSIBLE_EXPANSION_PER_K,
-  verticalShift,
-} from './vertical';
+import { verticalShift } from './vertical';
 import { shiftErrorFloor } from './shift-information';
 import { describeIsotherm, formatC, warn } from './warnings';
 
@@ -65,21 +59,16 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
   let ignoredBTDecades: number | null = null;
   if (
     vc.requested === 'none' &&
-    vc.chi2Drop !== undefined &&
+    vertical.carriesBT &&
     vc.expansionPerK !== null &&
     vc.effectDecades !== null &&
-    vc.chi2Drop > AUTO_CHI2_DROP &&
-    vc.z !== null &&
-    Math.abs(vc.z) > AUTO_Z &&
-    vc.expansionPerK >= PLAUSIBLE_EXPANSION_PER_K[0] &&
-    vc.expansionPerK <= PLAUSIBLE_EXPANSION_PER_K[1] &&
-    vc.effectDecades >= AUTO_MIN_EFFECT_DECADES
+    vc.z !== null
   ) {
     ignoredBTDecades = vc.effectDecades;
     warn(
       warnings,
       'vertical-shift-ignored',
-      `No vertical shift was asked for, but δ against |G*| shows one: with bT (αV ≈ ${(vc.expansionPerK * 1e4).toFixed(1)}·10⁻⁴ /K) the mismatch drops by ${vc.chi2Drop.toFixed(0)} residual variances and bT would reach ${vc.effectDecades.toFixed(3)} decades over the measured temperatures, and leaving it out moves the shifts by about as much divided by the slope of the curves. Use vertical 'auto', 'density' or 'data'.`,
+      `No vertical shift was asked for, but the moduli show one: with bT (αV ≈ ${(vc.expansionPerK * 1e4).toFixed(1)}·10⁻⁴ /K, ${(-vc.z).toFixed(1)} standard errors from bT ≡ 1) the mismatch drops by ${(vc.chi2Drop ?? 0).toFixed(0)} residual variances and bT would reach ${vc.effectDecades.toFixed(3)} decades over the measured temperatures, and leaving it out moves the shifts by about as much divided by the slope of the curves. Use vertical 'auto', 'density' or 'data'.`,
     );
   }
   for (const T of vertical.extrapolatedK)
@@ -91,9 +80,12 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
     const c = activeById.get(l.id);
     if (c !== undefined) lockedByIndex.set(c, l.log10aT);
   });
+  // Warm start: the user's (live re-fit), else the shifts the αV profile found with this bT.
   const initial = s.initialLog10aT
     ? Float64Array.from(active, (k) => s.initialLog10aT![isos[k].id] ?? NaN)
-    : null;
+    : vertical.startLog10aT && lockedByIndex.size === 0
+      ? Float64Array.from(active, (k) => vertical.startLog10aT![k])
+      : null;
   const fit: OffsetFit = fitOffsets({
     build: (dropped) =>
       buildProblem(dataset, {
@@ -137,6 +129,12 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
   active.forEach((k, c) => (position[k] = c));
   const lockedIds = new Set(s.locked.map((l) => l.id));
   const excludedIds = new Set(s.excluded);
+  // With bT from one fitted αV the shifts also carry αV's uncertainty: var(log10 aT_k) gains
+  // (∂log10 aT_k/∂αV)²·var(αV), the covariance S·Sᵀ·var(αV) (delta method; Ku, J. Res. NBS 70C,
+  // 1966, "Notes on the use of propagation of error formulas").
+  const alphaPart = vertical.expansionSensitivity;
+  const sensitivityOf = (k: number): number =>
+    alphaPart && !lockedIds.has(isos[k].id) ? (alphaPart.perIsotherm[k] ?? 0) : 0;
   const curves: CurveShift[] = isos.map((iso, k) => {
     const c = position[k];
     const inc = c >= 0 && fit.included[c] === 1;
@@ -147,7 +145,16 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
       id: iso.id,
       temperatureK: iso.temperatureK,
       log10aT: inc ? fit.theta[c] : null,
-      log10aTStdErr: inc ? finiteOrNull(lockedHere ? 0 : fit.stdErr[c]) : null,
+      log10aTStdErr: inc
+        ? finiteOrNull(
+            lockedHere
+              ? 0
+              : Math.sqrt(
+                  fit.stdErr[c] * fit.stdErr[c] +
+                    sensitivityOf(k) ** 2 * (alphaPart?.variance ?? 0),
+                ),
+          )
+        : null,
       log10bT: bT,
       log10bTStdErr: bErr === null ? null : finiteOrNull(bErr),
       included: inc,
@@ -179,6 +186,9 @@ export function shiftIsotherms(dataset: Dataset, options: ShiftOptions): ShiftRe
       active,
       curves,
       isos.map((i) => i.id),
+      alphaPart
+        ? { sensitivity: isos.map((_, k) => sensitivityOf(k)), variance: alphaPart.variance }
+        : null,
     ),
     warnings,
     settings: s,
@@ -260,6 +270,8 @@ function covarianceOf(
   active: number[],
   curves: CurveShift[],
   ids: string[],
+  /** A rank-one part S·Sᵀ·variance added to the covariance (per dataset index), or null. */
+  extra: { sensitivity: number[]; variance: number } | null,
 ): ShiftCovariance | null {
   const position = new Map(active.map((k, c) => [k, c]));
   const rows = curves.flatMap((cs, k) => (cs.included ? [k] : []));
@@ -269,7 +281,12 @@ function covarianceOf(
   const m = rows.length;
   const locked = rows.map((k) => curves[k].locked);
   const matrix = rows.map((_, a) =>
-    rows.map((__, b) => (locked[a] || locked[b] ? 0 : flat[a * m + b] + 0)),
+    rows.map((__, b) =>
+      locked[a] || locked[b]
+        ? 0
+        : flat[a * m + b] +
+          (extra ? extra.sensitivity[rows[a]] * extra.sensitivity[rows[b]] * extra.variance : 0),
+    ),
   );
   return { ids: rows.map((k) => ids[k]), log10aT: matrix };
 }

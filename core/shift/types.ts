@@ -18,7 +18,7 @@ export interface VerticalChoice {
   chosen: 'none' | 'density' | 'data';
   /** One sentence for the user: what was applied and the evidence. */
   reason: string;
-  /** αV of the entropic law (given, or fitted to δ against |G*|), 1/K; null when none. */
+  /** αV of the entropic law (given, or fitted to the moduli), 1/K; null when none. */
   expansionPerK: number | null;
   /** Standard error of a fitted αV, 1/K; null when given or not fitted. */
   expansionStdErr: number | null;
@@ -100,6 +100,13 @@ export interface ShiftOptions {
    * (all active isotherms must be given for the scan to be skipped). @default undefined
    */
   initialLog10aT?: Record<string, number>;
+  /**
+   * With vertical 'auto' or 'data': take bT from the entropic law with this αV (1/K, and its
+   * standard error) instead of fitting αV again, or keep bT = 1 when expansionPerK is null — for
+   * live re-fits while a curve is dragged, which keep the last full fit's choice. Ignored with
+   * 'none', 'density' or a given density. @default undefined
+   */
+  heldExpansion?: HeldExpansion;
   /** Robust loss on pair residuals. @default 'huber' */
   robustLoss?: RobustLoss;
   /**
@@ -137,13 +144,24 @@ export interface ShiftOptions {
 }
 
 export type ResolvedShiftOptions = Required<
-  Omit<ShiftOptions, 'density' | 'initialLog10aT' | 'robustScaleDecades' | 'drivers'>
+  Omit<
+    ShiftOptions,
+    'density' | 'initialLog10aT' | 'heldExpansion' | 'robustScaleDecades' | 'drivers'
+  >
 > & {
   drivers: QuantityId[];
   density: DensityInput | null;
   initialLog10aT: Record<string, number> | null;
+  heldExpansion: HeldExpansion | null;
   robustScaleDecades: number | null;
 };
+
+/** The vertical shift of the last full fit, kept during a live re-fit (ShiftOptions.heldExpansion). */
+export interface HeldExpansion {
+  /** αV of the entropic bT, 1/K; null: the last full fit applied no bT (bT = 1). */
+  expansionPerK: number | null;
+  expansionStdErr: number | null;
+}
 
 /** Stable warning codes; see docs/shifting.md. */
 export type ShiftWarningCode =

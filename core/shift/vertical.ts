@@ -8,8 +8,8 @@
  *    its one constant αV fitted to the moduli (profileExpansion). When no plausible αV fits, each
  *    isotherm keeps its own bT from δ against |G*| — δ carries no vertical shift, so the offset
  *    along log|G*| is log10 bT itself, free of aT (Mavridis & Shroff, Polym. Eng. Sci. 32, 1992; docs/conventions.md §2);
- *  - 'auto': the same fit, applied only when it lowers the mismatch beyond the noise
- *    (AUTO_CHI2_DROP), reaches AUTO_MIN_EFFECT_DECADES and gives a plausible αV. Relaxation and
+ *  - 'auto': the same fit, applied only when αV lies AUTO_Z standard errors below bT ≡ 1, bT
+ *    reaches AUTO_MIN_EFFECT_DECADES and αV is plausible (judgeExpansion). Relaxation and
  *    creep data cannot tell a vertical from a horizontal shift, so 'auto' keeps bT = 1 there
  *    unless a density is given.
  * Relaxation or creep with 'data' is refused with a ShiftOptionsError (see below).
@@ -17,13 +17,16 @@
 import type { Dataset } from '../data/types';
 import { buildProblem } from './build-problem';
 import { densityLog10bT } from './density-shift';
-import { betaOf, quantityValues } from './drivers';
-import type { FitProblem } from './problem';
-import type { QuantityId } from '../data/types';
+import { quantityValues } from './drivers';
+import { entropicLog10bT, entropicLog10bTSlope, profileExpansion } from './expansion-profile';
+import type { ProfileFit } from './expansion-profile';
 import { fitOffsets, robustFitSettings } from './fit-offsets';
 import type { OffsetFit } from './fit-offsets';
 import type { ResolvedShiftOptions, VerticalChoice } from './types';
 import { ShiftOptionsError } from './options';
+
+export { entropicLog10bT, profileExpansion } from './expansion-profile';
+export type { ProfileFit } from './expansion-profile';
 
 export interface VerticalOutcome {
   /** Per dataset index; NaN where unknown. */
@@ -37,6 +40,20 @@ export interface VerticalOutcome {
   choice: VerticalChoice;
   /** True when bT is a free value per isotherm (isotherms without one are left out). */
   free: boolean;
+  /** True when the data carry a bT by the 'auto' rule (also when it was not applied). */
+  carriesBT: boolean;
+  /**
+   * A sentence when the moduli call, beyond their noise, for a bT that needs an αV no polymer
+   * has (a symptom of thermorheological complexity, for the superposition grade); else null.
+   */
+  implausible: string | null;
+  /**
+   * With bT from one fitted αV: per dataset index ∂log10 aT/∂αV (decades·K) and αV's variance,
+   * to carry αV's uncertainty into the shifts' covariance; null otherwise.
+   */
+  expansionSensitivity: { perIsotherm: number[]; variance: number } | null;
+  /** Per dataset index: log10 aT found with this bT by the profile (NaN unknown), a warm start. */
+  startLog10aT: number[] | null;
 }
 
 /** Largest |log10 bT| between neighbours searched by the van Gurp–Palmen scan, decades. */
@@ -44,173 +61,55 @@ const VGP_MAX_OFFSET = 1;
 /** 'auto' applies bT only when it reaches at least this many decades somewhere (≈ 0.5 %). */
 export const AUTO_MIN_EFFECT_DECADES = 0.002;
 
-/** log10 bT of the entropic law with expansion αV (ρref cancels). */
-export function entropicLog10bT(T: number, referenceK: number, alpha: number): number {
-  return Math.log10((referenceK * (1 + alpha * (T - referenceK))) / T);
-}
-
-/** The problem with each curve's log ordinate moved by β_q·log10 bT (the same binning). */
-function withOffsets(
-  p: FitProblem,
-  drivers: QuantityId[],
-  active: number[],
-  log10bT: number[],
-): FitProblem {
-  const beta = drivers.map(betaOf);
-  return {
-    ...p,
-    curves: p.curves.map((series, c) =>
-      series.map((ser, d) => {
-        const v = beta[d] * log10bT[active[c]];
-        if (v === 0) return ser;
-        // Plain loops: Float64Array.from with a mapping function is several times slower.
-        const y = new Float64Array(ser.y.length);
-        for (let i = 0; i < y.length; i++) y[i] = ser.y[i] + v;
-        const ySorted = new Float64Array(ser.ySorted.length);
-        for (let i = 0; i < ySorted.length; i++) ySorted[i] = ser.ySorted[i] + v;
-        return { ...ser, y, ySorted };
-      }),
-    ),
-  };
-}
-
-/** Result of the profile of the horizontal fit's mismatch over αV. */
-export interface ProfileFit {
-  expansionPerK: number;
-  expansionStdErr: number;
-  /** (Σw r² without bT − Σw r² at the best αV) / s²: the evidence for a bT. */
-  chi2Drop: number;
-  z: number;
-  effectDecades: number;
-}
-
 /** αV outside this range (1/K) is not a polymer's expansion: a bT so found is not trusted. */
 export const PLAUSIBLE_EXPANSION_PER_K: [number, number] = [0, 2e-3];
 /**
- * 'auto' applies bT when the drop of the mismatch exceeds this (in units of the residual
- * variance). Pair residuals use every point twice, so the drop is about twice a χ² with one degree
- * of freedom: 25 is about 3.5 standard errors. Calibrated on the seeded sets of
- * tests/core/shift/vertical-auto.test.ts.
+ * An estimate of αV more than this many of its standard errors outside PLAUSIBLE_EXPANSION_PER_K
+ * is implausible (the isotherms may not superpose); one within it is taken at the nearest end of
+ * the range (the profile is close to a parabola, so that is the best αV inside the range).
  */
-export const AUTO_CHI2_DROP = 25;
+export const PLAUSIBLE_MARGIN_STD_ERR = 3;
 /**
- * … and when the fitted αV lies more than this many of its standard errors from bT ≡ 1. Without
- * a bT, |z| stayed below 4.7 on 80 seeded melt sets (2 % and 8 % noise); with the entropic bT of
- * αV = 6·10⁻⁴ /K it was 22–47 at 2 % and mostly above 5 at 8 % (vertical-auto.test.ts).
+ * 'auto' applies bT when αV lies more than this many standard errors below 1/Tref (bT ≡ 1). The
+ * test is one-sided: a polymer's αV is below 1/T (αV·T ≈ 0.2–0.3, common practice), so a bT
+ * always makes bT < 1 above Tref. The standard error propagates the point noise through every
+ * pair comparison (expansion-profile.ts). Measured without a bT: z scattered with an RMS of
+ * 1.0–1.1 and |z| ≤ 3.3 on 120 seeded melt sets (Arrhenius and WLF melts of
+ * tests/core/shift/fixtures.ts, 5 and 8 points per decade, 2 % noise), |z| ≤ 2.3 on the 80 sets of
+ * tests/core/shift/vertical-auto.test.ts; so 4 is crossed by noise alone about once in 10,000
+ * sets. With the entropic bT of αV = 6·10⁻⁴ /K, z lay at −14 to −28 at 2 % noise and −1.7 to
+ * −8.5 at 8 % on those melts.
  */
-export const AUTO_Z = 5;
+export const AUTO_Z = 4;
 
-/**
- * Profile of the horizontal fit (the user's drivers, usually G′ and G″) over the one constant αV
- * of the entropic law: each αV fixes bT for every isotherm, aT is re-fitted (warm start, outliers
- * of the first fit kept out), and a parabola through the weighted squares finds the best αV. One
- * global constant cannot trade off against the shift of each isotherm the way a free bT per
- * isotherm does, so this is as well determined as the curves allow (G′ and G″ have different
- * slopes, so a vertical shift is not a horizontal one).
- */
-export function profileExpansion(
-  dataset: Dataset,
-  active: number[],
-  s: ResolvedShiftOptions,
-): ProfileFit | null {
-  if (active.length < 3 || s.drivers.every((q) => q === 'tanDelta' || q === 'phaseAngle'))
-    return null;
-  const temps = dataset.isotherms.map((i) => i.temperatureK);
-  const alpha0 = 1 / s.referenceK;
-  let dropped: Set<number>[] | undefined;
-  let start: Float64Array | null = null;
-  const build = (d: Set<number>[] | undefined): FitProblem =>
-    buildProblem(dataset, {
-      active,
-      drivers: s.drivers,
-      fixedLog10bT: null,
-      joint: false,
-      minOverlapPoints: s.minOverlapPoints,
-      maxPointsPerDecade: s.maxPointsPerDecade,
-      dropped: d,
-    });
-  let base: FitProblem | null = null;
-  const run = (beta: number, first: boolean): { ss: number; s2: number } | null => {
-    const log10bT = temps.map((T) => entropicLog10bT(T, s.referenceK, alpha0 + beta));
-    const fit = fitOffsets({
-      // A fixed bT only moves each curve's log ordinate by a constant: the binned curves are
-      // built once (without the outliers of the first fit) and offset for each trial αV.
-      build: (d) => {
-        if (first) return withOffsets(build(d), s.drivers, active, log10bT);
-        base ??= build(dropped);
-        return withOffsets(base, s.drivers, active, log10bT);
-      },
-      temperaturesK: active.map((k) => temps[k]),
-      referenceK: s.referenceK,
-      locked: new Map(),
-      initial: start,
-      ...robustFitSettings(s),
-      flagOutliers: first && s.flagOutliers,
-      // Only the mismatch is compared between trial αV: no standard errors needed.
-      uncertainty: false,
-      scanStep: s.scanStepDecades,
-      directionAllowance: s.reverseAllowanceDecades,
-      maxOffset: Infinity,
-    });
-    if (first) {
-      dropped = fit.outliers;
-      start = fit.theta;
-    }
-    if (!(fit.weightedSquares > 0) || fit.included.reduce((a, b) => a + b, 0) < 3) return null;
-    return { ss: fit.weightedSquares, s2: fit.residualVariance };
-  };
-  // The first fit finds the start and the outliers; the mismatch without bT is then taken from a
-  // re-fit under the same conditions as the others (same points, warm start), so that the
-  // differences between them are differences of bT alone.
-  if (!run(0, true)) return null;
-  const f0 = run(0, false);
-  if (!f0) return null;
-  const h = 1.5e-3;
-  const f1 = run(-h, false);
-  const f2 = run(h, false);
-  if (!f1 || !f2) return null;
-  // Parabola through β = −h, 0, h.
-  const a = (f1.ss + f2.ss - 2 * f0.ss) / (2 * h * h);
-  if (!(a > 0)) return null;
-  const b = (f2.ss - f1.ss) / (2 * h);
-  let beta = Math.max(-2 * alpha0, Math.min(2 * alpha0, -b / (2 * a)));
-  let fb = run(beta, false);
-  if (!fb) return null;
-  // The mismatch is not exactly quadratic over ±1.5·10⁻³ /K: a second parabola, close around
-  // the first estimate, removes most of that bias.
-  let a2 = a;
-  const h2 = Math.min(h, Math.max(2e-4, 3 * Math.sqrt((2 * fb.s2) / a)));
-  const g1 = run(beta - h2, false);
-  const g2 = run(beta + h2, false);
-  if (g1 && g2) {
-    const c = (g1.ss + g2.ss - 2 * fb.ss) / (2 * h2 * h2);
-    if (c > 0) {
-      const step = Math.max(-h2, Math.min(h2, -(g2.ss - g1.ss) / (2 * h2) / (2 * c)));
-      const g = run(beta + step, false);
-      if (g && g.ss <= fb.ss) {
-        beta += step;
-        fb = g;
-      }
-      a2 = c;
-    }
-  }
-  let best = fb;
-  if (f0.ss < fb.ss) {
-    best = f0;
-    beta = 0;
-  }
-  // The pair residuals count each point twice (docs/shifting.md, uncertainty): twice the variance.
-  const se = Math.sqrt((2 * best.s2) / a2);
-  const alpha = alpha0 + beta;
-  let effect = 0;
-  for (const k of active)
-    effect = Math.max(effect, Math.abs(entropicLog10bT(temps[k], s.referenceK, alpha)));
+/** What the data's αV means: the value applied, whether it is plausible, whether bT is needed. */
+export interface ExpansionJudgement {
+  /** The fitted αV taken into PLAUSIBLE_EXPANSION_PER_K, 1/K. */
+  applied: number;
+  plausible: boolean;
+  /** Largest |log10 bT| with the applied αV over the measured temperatures, decades. */
+  effectDecades: number;
+  /** True when 'auto' applies bT from the data (significant, plausible and large enough). */
+  carriesBT: boolean;
+}
+
+export function judgeExpansion(
+  p: ProfileFit,
+  temperaturesK: number[],
+  referenceK: number,
+): ExpansionJudgement {
+  const [lo, hi] = PLAUSIBLE_EXPANSION_PER_K;
+  const margin = PLAUSIBLE_MARGIN_STD_ERR * p.expansionStdErr;
+  const plausible = p.expansionPerK >= lo - margin && p.expansionPerK <= hi + margin;
+  const applied = Math.max(lo, Math.min(hi, p.expansionPerK));
+  let effectDecades = 0;
+  for (const T of temperaturesK)
+    effectDecades = Math.max(effectDecades, Math.abs(entropicLog10bT(T, referenceK, applied)));
   return {
-    expansionPerK: alpha,
-    expansionStdErr: se,
-    chi2Drop: (f0.ss - best.ss) / best.s2,
-    z: beta / se,
-    effectDecades: effect,
+    applied,
+    plausible,
+    effectDecades,
+    carriesBT: plausible && p.z < -AUTO_Z && effectDecades >= AUTO_MIN_EFFECT_DECADES,
   };
 }
 
@@ -260,6 +159,7 @@ export function verticalShift(
 ): VerticalOutcome {
   const n = dataset.isotherms.length;
   const temps = dataset.isotherms.map((i) => i.temperatureK);
+  const activeTemps = active.map((k) => temps[k]);
   const zeros = (): number[] => new Array<number>(n).fill(0);
   const none = (reason: string, extra: Partial<VerticalChoice> = {}): VerticalOutcome => ({
     log10bT: zeros(),
@@ -268,6 +168,10 @@ export function verticalShift(
     vgpFit: null,
     extrapolatedK: [],
     free: false,
+    carriesBT: false,
+    implausible: null,
+    expansionSensitivity: null,
+    startLog10aT: null,
     choice: {
       requested: s.vertical,
       chosen: 'none',
@@ -289,6 +193,10 @@ export function verticalShift(
       vgpFit: null,
       extrapolatedK: d.extrapolatedK,
       free: false,
+      carriesBT: false,
+      implausible: null,
+      expansionSensitivity: null,
+      startLog10aT: null,
       choice: {
         requested: s.vertical,
         chosen: 'density',
@@ -308,7 +216,13 @@ export function verticalShift(
     if (!s.checks || !canVgp || active.length < 3) return none('requested: no vertical shift');
     // Forced off: still look whether the data disagree, to say so (the size in decades).
     const p = profileExpansion(dataset, active, s);
-    return none('requested: no vertical shift', p ? profileStats(p) : {});
+    if (!p) return none('requested: no vertical shift');
+    const j = judgeExpansion(p, activeTemps, s.referenceK);
+    return {
+      ...none('requested: no vertical shift', profileStats(p, j)),
+      carriesBT: j.carriesBT,
+      implausible: implausibleSentence(p, j),
+    };
   }
   if (!canVgp) {
     if (s.vertical === 'auto')
@@ -324,37 +238,68 @@ export function verticalShift(
       "vertical 'data' needs oscillatory data with G' and G'' (or δ and |G*|) in every isotherm, so that bT can be found from δ against |G*|; for relaxation or creep data give a density (vertical 'density') or use 'none'.",
     );
   }
+  if (s.heldExpansion?.expansionPerK === null)
+    return none(
+      'bT = 1 held from the last full fit (live re-fit; whether the data need a bT is judged again when the change is complete)',
+    );
+  if (s.heldExpansion && s.heldExpansion.expansionPerK !== null) {
+    // A live re-fit keeps the αV of the last full fit: bT changes only when the curve is released.
+    const { expansionPerK: alpha, expansionStdErr: se } = s.heldExpansion;
+    const log10bT = temps.map((T) => entropicLog10bT(T, s.referenceK, alpha));
+    return {
+      log10bT,
+      stdErr: temps.map((T) =>
+        se === null ? NaN : Math.abs(entropicLog10bTSlope(T, s.referenceK, alpha)) * se,
+      ),
+      joint: false,
+      vgpFit: null,
+      extrapolatedK: [],
+      free: false,
+      carriesBT: true,
+      implausible: null,
+      expansionSensitivity: null,
+      startLog10aT: null,
+      choice: {
+        requested: s.vertical,
+        chosen: 'data',
+        reason: `bT from the entropic law bT = Tref(1 + αV(T − Tref))/T with αV = ${fmtAlpha(alpha)} held from the last full fit (live re-fit; αV is fitted again when the change is complete)`,
+        expansionPerK: alpha,
+        expansionStdErr: se,
+        effectDecades: largestAbs(active.map((k) => log10bT[k])),
+        z: null,
+      },
+    };
+  }
   const p = profileExpansion(dataset, active, s);
-  const plausible =
-    p !== null &&
-    p.expansionPerK >= PLAUSIBLE_EXPANSION_PER_K[0] &&
-    p.expansionPerK <= PLAUSIBLE_EXPANSION_PER_K[1];
+  const j = p ? judgeExpansion(p, activeTemps, s.referenceK) : null;
   if (s.vertical === 'auto') {
-    if (!p)
+    if (!p || !j)
       return none(
         'bT = 1: too few isotherms overlap (or only tan δ drives the shift) to tell whether a vertical shift is needed',
       );
-    const evidence = `with bT the mismatch of the shifted curves drops by ${p.chi2Drop.toFixed(1)} residual variances (${AUTO_CHI2_DROP} needed) and αV lies ${Math.abs(p.z).toFixed(1)} standard errors from bT ≡ 1 (${AUTO_Z} needed); bT would reach ${p.effectDecades.toFixed(3)} decades`;
-    if (
-      !(p.chi2Drop > AUTO_CHI2_DROP) ||
-      !(Math.abs(p.z) > AUTO_Z) ||
-      p.effectDecades < AUTO_MIN_EFFECT_DECADES
-    )
-      return none(`bT = 1: no vertical shift beyond the noise (${evidence})`, profileStats(p));
-    if (!plausible)
-      return none(
-        `bT = 1: a vertical shift would lower the mismatch (${evidence}) but needs αV = ${fmtAlpha(p.expansionPerK)}, outside what polymers show (0–20·10⁻⁴ /K): the isotherms may not superpose (check the van Gurp–Palmen plot)`,
-        profileStats(p),
-      );
+    const evidence = `αV = ${fmtAlpha(p.expansionPerK)} ± ${fmtAlpha(p.expansionStdErr)} fitted to the moduli lies ${(-p.z).toFixed(1)} standard errors below 1/Tref, where bT ≡ 1 (${AUTO_Z} needed), and the mismatch of the shifted curves drops by ${p.chi2Drop.toFixed(1)} residual variances; bT would reach ${j.effectDecades.toFixed(3)} decades`;
+    if (!j.plausible && p.z < -AUTO_Z)
+      return {
+        ...none(
+          `bT = 1: a vertical shift would lower the mismatch (${evidence}) but needs αV outside what polymers show (0–20·10⁻⁴ /K): the isotherms may not superpose (check the van Gurp–Palmen plot)`,
+          profileStats(p, j),
+        ),
+        implausible: implausibleSentence(p, j),
+      };
+    if (!j.carriesBT)
+      return none(`bT = 1: no vertical shift beyond the noise (${evidence})`, profileStats(p, j));
   }
-  if (p && (s.vertical === 'auto' || plausible)) {
-    const log10bT = temps.map((T) => entropicLog10bT(T, s.referenceK, p.expansionPerK));
+  if (p && j && (s.vertical === 'auto' || j.plausible)) {
+    const alpha = j.applied;
+    const log10bT = temps.map((T) => entropicLog10bT(T, s.referenceK, alpha));
     const stdErr = temps.map(
-      (T) =>
-        Math.abs((T - s.referenceK) / (Math.LN10 * (1 + p.expansionPerK * (T - s.referenceK)))) *
-        p.expansionStdErr,
+      (T) => Math.abs(entropicLog10bTSlope(T, s.referenceK, alpha)) * p.expansionStdErr,
     );
-    const what = `the entropic law bT = Tref(1 + αV(T − Tref))/T with αV = ${fmtAlpha(p.expansionPerK)} ± ${fmtAlpha(p.expansionStdErr)} fitted to the moduli`;
+    const bound =
+      alpha !== p.expansionPerK
+        ? ` (the fit gave ${fmtAlpha(p.expansionPerK)}, within ${PLAUSIBLE_MARGIN_STD_ERR} standard errors of the plausible range 0–20·10⁻⁴ /K, so its nearest end is used)`
+        : '';
+    const what = `the entropic law bT = Tref(1 + αV(T − Tref))/T with αV = ${fmtAlpha(alpha)} ± ${fmtAlpha(p.expansionStdErr)} fitted to the moduli${bound}`;
     return {
       log10bT,
       stdErr,
@@ -362,14 +307,22 @@ export function verticalShift(
       vgpFit: null,
       extrapolatedK: [],
       free: false,
+      carriesBT: j.carriesBT,
+      implausible: null,
+      expansionSensitivity: {
+        perIsotherm: p.sensitivity,
+        variance: p.expansionStdErr * p.expansionStdErr,
+      },
+      startLog10aT: alpha === p.expansionPerK ? p.log10aT : null,
       choice: {
         requested: s.vertical,
         chosen: 'data',
         reason:
           s.vertical === 'auto'
-            ? `bT from the data: with a vertical shift the mismatch of the shifted curves drops by ${p.chi2Drop.toFixed(1)} residual variances (${AUTO_CHI2_DROP} needed) and αV lies ${Math.abs(p.z).toFixed(1)} standard errors from bT ≡ 1 (${AUTO_Z} needed); bT reaches ${p.effectDecades.toFixed(3)} decades; ${what}`
+            ? `bT from the data: αV lies ${(-p.z).toFixed(1)} standard errors below 1/Tref, where bT ≡ 1 (${AUTO_Z} needed), the mismatch of the shifted curves drops by ${p.chi2Drop.toFixed(1)} residual variances, and bT reaches ${j.effectDecades.toFixed(3)} decades; ${what}`
             : `requested: bT from the data; ${what}`,
-        ...profileStats(p),
+        ...profileStats(p, j),
+        expansionPerK: alpha,
       },
     };
   }
@@ -389,6 +342,10 @@ export function verticalShift(
     vgpFit: fit,
     extrapolatedK: [],
     free: true,
+    carriesBT: j?.carriesBT ?? false,
+    implausible: p && j ? implausibleSentence(p, j) : null,
+    expansionSensitivity: null,
+    startLog10aT: null,
     choice: {
       requested: s.vertical,
       chosen: 'data',
@@ -401,13 +358,26 @@ export function verticalShift(
   };
 }
 
+/**
+ * The superposition grade's sentence when the moduli ask, beyond their noise, for a vertical
+ * shift no thermal expansion gives; null otherwise. Two components with different shift laws (a
+ * blend) leave a mismatch that a vertical offset growing with ΔT partly absorbs, in the direction
+ * of an αV below zero: measured on seeded blends (tests/core/shift/verdict.test.ts) αV ran to the
+ * end of the search range (−1/Tref) at 8–15 standard errors from bT ≡ 1.
+ */
+function implausibleSentence(p: ProfileFit, j: ExpansionJudgement): string | null {
+  if (j.plausible || !(p.z < -AUTO_Z)) return null;
+  return `the moduli call for a vertical shift that no thermal expansion gives (αV = ${fmtAlpha(p.expansionPerK)} ± ${fmtAlpha(p.expansionStdErr)}, ${(-p.z).toFixed(1)} standard errors from bT ≡ 1; polymers: 0–20·10⁻⁴ /K)`;
+}
+
 function profileStats(
   p: ProfileFit,
+  j: ExpansionJudgement,
 ): Pick<VerticalChoice, 'expansionPerK' | 'expansionStdErr' | 'effectDecades' | 'z' | 'chi2Drop'> {
   return {
     expansionPerK: p.expansionPerK,
     expansionStdErr: p.expansionStdErr,
-    effectDecades: p.effectDecades,
+    effectDecades: j.effectDecades,
     z: p.z,
     chi2Drop: p.chi2Drop,
   };

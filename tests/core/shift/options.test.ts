@@ -15,6 +15,7 @@ describe('resolveShiftOptions()', () => {
       excluded: [],
       locked: [],
       initialLog10aT: null,
+      heldExpansion: null,
       robustLoss: 'huber',
       robustScaleDecades: null,
       outlierThreshold: 4,

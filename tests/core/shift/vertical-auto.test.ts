@@ -43,9 +43,9 @@ describe("shiftIsotherms() with vertical 'auto'", () => {
             const key = `${withBT ? 'bT' : 'none'} ${noise}`;
             tally[key] = (tally[key] ?? 0) + (r.vertical.chosen === 'data' ? 1 : 0);
           }
-    // Measured: bT chosen 40/40 at 2 %, 35/40 at 8 % (the misses are sets where 8 % noise hides a
-    // bT of 0.03 decades: αV within 5 standard errors of bT ≡ 1); never chosen without a bT
-    // (0/40 at 2 % and at 8 %).
+    // Measured: bT chosen 40/40 at 2 %, 37/40 at 8 % (the misses are Arrhenius sets where 8 %
+    // noise hides a bT of 0.03 decades: αV only 3.1–4 standard errors below 1/Tref); never chosen
+    // without a bT (0/40 at 2 % and at 8 %; |z| at most 2.3 there).
     expect(tally['bT 0.02']).toBe(40);
     expect(tally['bT 0.08']).toBeGreaterThanOrEqual(34);
     expect(tally['none 0.02']).toBe(0);
@@ -54,12 +54,13 @@ describe("shiftIsotherms() with vertical 'auto'", () => {
 
   it("shiftIsotherms() 'data' recovers aT about as well as the true density does (20 seeds each)", () => {
     for (const c of [MELT_ARRHENIUS, MELT_WLF_PB])
-      for (const [noise, rmsLimit, extra] of [
-        [0.02, 0.006, 0.004],
-        [0.08, 0.04, 0.01],
+      for (const [noise, rmsLimit, extra, target, apart] of [
+        [0.02, 0.006, 0.004, 0.005, 0.005],
+        [0.08, 0.04, 0.01, 0.03, 0.03],
       ] as const) {
         const data: number[] = [];
         const dens: number[] = [];
+        let farthest = 0;
         for (const seed of SEEDS) {
           const { dataset, truth } = syntheticIsotherms({
             ...c.options,
@@ -77,16 +78,28 @@ describe("shiftIsotherms() with vertical 'auto'", () => {
           // No isotherm is dropped, and none silently.
           expect(r.curves.every((cv) => cv.included)).toBe(true);
           const e = errors(r, truth.log10aT);
-          // RMS error over the isotherms of one set. Measured: at most 0.0050 decades at 2 % and
-          // 0.036 at 8 % (the largest single error: 0.010 and 0.076; with the true density 0.0082
-          // and 0.033).
+          // RMS error over the isotherms of one set. Measured: at most 0.0043 / 0.0045 decades
+          // (Arrhenius / WLF) at 2 % and 0.018 / 0.017 at 8 % (the largest single error: 0.0089 /
+          // 0.0070 and 0.036 / 0.028; with the true density 0.0082 / 0.0074 and 0.033 / 0.029).
           expect(rms(e), `${c.name} ${noise} seed ${seed}`).toBeLessThan(rmsLimit);
           data.push(maxAbs(e));
           dens.push(maxAbs(errors(d, truth.log10aT)));
+          r.curves.forEach(
+            (cv, k) =>
+              (farthest = Math.max(farthest, Math.abs(cv.log10aT! - d.curves[k].log10aT!))),
+          );
         }
-        // Mean of the largest error per set: measured 0.0043 / 0.0070 (data) against 0.0041 /
-        // 0.0042 (density) at 2 %; 0.021 / 0.024 against 0.017 / 0.017 at 8 %.
+        // Mean of the largest error per set: measured 0.0043 / 0.0044 (data) against 0.0041 /
+        // 0.0044 (density) at 2 %; 0.017 / 0.018 against 0.017 / 0.018 at 8 %.
         expect(mean(data), `${c.name} ${noise}`).toBeLessThan(mean(dens) + extra);
+        // The issue's figures, 0.005 decades at 2 % and 0.03 at 8 %, for the mean of the largest
+        // error per set (the largest single error of the true density itself exceeds them on
+        // these 10-isotherm, 5-points-per-decade sets, see above) …
+        expect(mean(data), `${c.name} ${noise}`).toBeLessThanOrEqual(target);
+        // … and for what not knowing αV costs: the largest |log10 aT from the data's bT − log10 aT
+        // from the true density| over all isotherms and sets. Measured 0.0036 / 0.0027 at 2 %,
+        // 0.015 / 0.011 at 8 %.
+        expect(farthest, `${c.name} ${noise}`).toBeLessThanOrEqual(apart);
       }
   });
 

@@ -1,11 +1,18 @@
 import { describe, expect, it } from 'vitest';
 import { ref } from 'vue';
-import { useWorkbench, warmStartFrom } from '../../../app/renderer/src/composables/useWorkbench';
+import {
+  heldExpansionFrom,
+  useWorkbench,
+  warmStartFrom,
+} from '../../../app/renderer/src/composables/useWorkbench';
 import { newDocument, setLocked } from '../../../app/renderer/src/document/analysis-document';
 import type { EngineRequest, EngineResult } from '../../../app/renderer/src/engine/engine-protocol';
 import type { UseEngineReturn } from '../../../app/renderer/src/engine/useEngine';
 import type { Analysis } from '../../../core/pipeline/types';
 import { tinyDataset } from '../document/tiny-dataset';
+
+/** An invented αV found from the data by the last full fit (1/K). */
+const FITTED = { expansionPerK: 6.1e-4, expansionStdErr: 2e-5 };
 
 /** An engine that answers every analysis with a marker of the options it was asked with. */
 function fakeEngine(seen: EngineRequest[]): UseEngineReturn {
@@ -21,6 +28,14 @@ function fakeEngine(seen: EngineRequest[]): UseEngineReturn {
           settings: req.kind === 'analyse' ? req.options : {},
           dataset: req.kind === 'analyse' ? req.dataset : null,
           referenceTemperatureK: 400,
+          vertical: {
+            requested: 'auto',
+            chosen: 'data',
+            reason: 'invented',
+            ...FITTED,
+            effectDecades: 0.03,
+            z: -20,
+          },
           curves:
             req.kind === 'analyse'
               ? req.dataset.isotherms.map((i, k) => ({ isothermId: i.id, log10aT: -0.5 * k }))
@@ -84,5 +99,44 @@ describe('warmStartFrom()', () => {
     expect(warmStartFrom(null, start)).toBeUndefined();
     const otherTref = { ...start, options: { ...start.options, referenceTemperatureK: 300 } };
     expect(warmStartFrom(wb.analysis.value, otherTref)).toBeUndefined();
+  });
+});
+
+describe('heldExpansionFrom()', () => {
+  it('heldExpansionFrom() keeps the αV of the last full fit during a drag and lets the release fit it again', async () => {
+    const seen: EngineRequest[] = [];
+    const wb = useWorkbench(fakeEngine(seen));
+    const start = newDocument(tinyDataset(), 'tiny');
+    wb.reset(start);
+    await wb.settled();
+    expect(heldExpansionFrom(wb.analysis.value, start)).toEqual(FITTED);
+    const id = start.dataset.isotherms[1].id;
+    wb.preview(setLocked(start, id, 0.2));
+    await wb.settled();
+    const drag = seen[seen.length - 1];
+    expect(drag.kind === 'analyse' && drag.heldExpansion).toEqual(FITTED);
+    wb.commit(setLocked(start, id, 0.2));
+    await wb.settled();
+    const release = seen[seen.length - 1];
+    expect(release.kind === 'analyse' && release.heldExpansion).toBeUndefined();
+    // Not when bT is given (density) or off, nor for another reference temperature.
+    const density = {
+      ...start,
+      options: {
+        ...start.options,
+        verticalShift: 'density' as const,
+        density: { volumetricExpansionPerK: 6e-4 },
+      },
+    };
+    expect(heldExpansionFrom(wb.analysis.value, density)).toBeUndefined();
+    const otherTref = { ...start, options: { ...start.options, referenceTemperatureK: 300 } };
+    expect(heldExpansionFrom(wb.analysis.value, otherTref)).toBeUndefined();
+    expect(heldExpansionFrom(null, start)).toBeUndefined();
+    // 'auto' that found no bT keeps bT = 1 during the drag (no αV fit at every step either).
+    const none = {
+      ...wb.analysis.value!,
+      vertical: { ...wb.analysis.value!.vertical!, chosen: 'none' as const, expansionPerK: null },
+    };
+    expect(heldExpansionFrom(none, start)).toEqual({ expansionPerK: null, expansionStdErr: null });
   });
 });

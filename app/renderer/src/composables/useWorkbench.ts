@@ -16,6 +16,9 @@ import {
 } from '../document/history';
 import type { UseEngineReturn } from '../engine/useEngine';
 import { useLatestRunner } from './useLatestRunner';
+import { heldExpansionFrom } from '../document/live-refit';
+
+export { heldExpansionFrom } from '../document/live-refit';
 
 export interface UseWorkbenchReturn {
   doc: ComputedRef<AnalysisDocument | null>;
@@ -68,12 +71,14 @@ export function useWorkbench(engine: UseEngineReturn): UseWorkbenchReturn {
   const runner = useLatestRunner<{ doc: AnalysisDocument; light: boolean }>(
     async ({ doc, light }) => {
       const warm = light ? warmStartFrom(analysis.value, doc) : undefined;
+      const held = light ? heldExpansionFrom(analysis.value, doc) : undefined;
       const r = await engine.run({
         kind: 'analyse',
         dataset: doc.dataset,
         options: light ? { ...doc.options, models: [], pronyModesPerDecade: 0 } : doc.options,
         importWarnings: doc.importWarnings,
         ...(warm && { warmStartLog10aT: warm }),
+        ...(held && { heldExpansion: held }),
       });
       if (history.value.present !== doc) {
         // A newer document is waiting; still show this result if nothing better exists yet.

@@ -10,7 +10,7 @@ import { SI_DISPLAY, type DisplayUnits } from '../format/display-units';
 /** The serialisable options (no progress callback; import warnings are kept beside them). */
 export type DocumentOptions = Omit<
   AnalysisOptions,
-  'onProgress' | 'importWarnings' | 'warmStartLog10aT'
+  'onProgress' | 'importWarnings' | 'warmStartLog10aT' | 'heldExpansion'
 >;
 
 export interface AnalysisDocument {

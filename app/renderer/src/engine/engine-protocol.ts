@@ -5,6 +5,7 @@
 import type { DataWarning, Dataset } from '@core/data';
 import type { ImportOptions, ImportResult } from '@core/io';
 import type { Analysis } from '@core/pipeline';
+import type { HeldExpansion } from '@core/shift';
 import type { DocumentOptions } from '../document/analysis-document';
 import type { TextFile } from '../platform/file-access';
 
@@ -16,6 +17,8 @@ export type EngineRequest =
       importWarnings: DataWarning[];
       /** Shifts to start from (live re-fit while dragging): log10 aT by isotherm id. */
       warmStartLog10aT?: Record<string, number>;
+      /** The last full fit's bT to keep (live re-fit while dragging): αV is not fitted again. */
+      heldExpansion?: HeldExpansion;
     }
   | { kind: 'import'; files: TextFile[]; options: ImportOptions };
 

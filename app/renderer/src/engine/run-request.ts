@@ -18,6 +18,7 @@ export function runRequest(
       ...req.options,
       importWarnings: req.importWarnings,
       ...(req.warmStartLog10aT && { warmStartLog10aT: req.warmStartLog10aT }),
+      ...(req.heldExpansion && { heldExpansion: req.heldExpansion }),
       onProgress,
     });
     return { kind: 'analysed', analysis };
