@@ -26,6 +26,57 @@ export function reductionFactor(q: QuantityId, aT: number, bT: number): number {
 }
 
 /**
+ * The reduction rules in log form: log10(reduced / measured) = aT · log10 aT + bT · log10 bT for
+ * a quantity (moduli: bT 1; compliance: bT −1; |η*|: aT −1, bT 1; tan δ and δ: 0). The shift fit
+ * works in decades and reads its coefficients here.
+ */
+export function reductionExponents(q: QuantityId): { aT: number; bT: number } {
+  switch (q) {
+    case 'tanDelta':
+    case 'phaseAngle':
+      return { aT: 0, bT: 0 };
+    case 'creepCompliance':
+      return { aT: 0, bT: -1 };
+    case 'complexViscosity':
+      return { aT: -1, bT: 1 };
+    default:
+      return { aT: 0, bT: 1 };
+  }
+}
+
+/**
+ * Sign of log10 aT in the reduced log abscissa: log10 ω_r = log10 ω + log10 aT (frequency, +1),
+ * log10 t_r = log10 t − log10 aT (time, −1).
+ */
+export function abscissaShiftSign(kind: AbscissaKind): 1 | -1 {
+  return kind === 'angularFrequency' ? 1 : -1;
+}
+
+/**
+ * The reduction inverted: the value measured at the temperature with these aT and bT, from the
+ * reduced value (a prediction or a generated measurement): moduli / bT, compliance × bT,
+ * |η*| × aT/bT; tan δ and δ unchanged.
+ */
+export function measuredFromReduced(
+  q: QuantityId,
+  reduced: number,
+  aT: number,
+  bT: number,
+): number {
+  switch (q) {
+    case 'tanDelta':
+    case 'phaseAngle':
+      return reduced;
+    case 'creepCompliance':
+      return reduced * bT;
+    case 'complexViscosity':
+      return (reduced * aT) / bT;
+    default:
+      return reduced / bT;
+  }
+}
+
+/**
  * Entropic vertical shift bT = (Tref·ρref)/(T·ρ(T)); reduced modulus = bT × measured modulus.
  * Ferry (1980). Densities in any consistent unit.
  */

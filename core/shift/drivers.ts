@@ -6,6 +6,7 @@
  *   vertical.ts) → G' and G'' together when both are present, else the first present of
  *   tan δ, |G*|, G', G'', δ, |η*| (one quantity is enough).
  */
+import { reductionExponents } from '../data/reduction';
 import type { Dataset, QuantityId } from '../data/types';
 import type { VerticalMode } from './types';
 
@@ -31,15 +32,14 @@ export function defaultDrivers(dataset: Dataset, _vertical: VerticalMode): Quant
   return first ? [first] : [];
 }
 
-/** Coefficient of log10 aT in the reduced log ordinate: reduced |η*| = |η*|·bT/aT. */
+/** Coefficient of log10 aT in the reduced log ordinate (the reduction rule, core/data/reduction.ts). */
 export function alphaOf(q: QuantityId): number {
-  return q === 'complexViscosity' ? -1 : 0;
+  return reductionExponents(q).aT;
 }
 
-/** Coefficient of log10 bT in the reduced log ordinate (docs/conventions.md §2). */
+/** Coefficient of log10 bT in the reduced log ordinate (the reduction rule, core/data/reduction.ts). */
 export function betaOf(q: QuantityId): number {
-  if (q === 'tanDelta' || q === 'phaseAngle') return 0;
-  return q === 'creepCompliance' ? -1 : 1;
+  return reductionExponents(q).bT;
 }
 
 /** True when logOrdinate(q, value) is finite, without computing the logarithm. */
