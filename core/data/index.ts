@@ -3,3 +3,4 @@ export * from './quantities';
 export * from './reduction';
 export * from './extent';
 export { formatCelsius } from './temperature';
+export * from './derived';

@@ -60,19 +60,5 @@ export function logOrdinate(q: QuantityId, value: number): number {
   return value > 0 ? Math.log10(value) : NaN;
 }
 
-/** Values of a quantity, derived from G' and G'' when not stored (tan δ, |G*|, δ). */
-export function quantityValues(
-  q: QuantityId,
-  quantities: Partial<Record<QuantityId, number[]>>,
-): number[] | undefined {
-  const stored = quantities[q];
-  if (stored) return stored;
-  const gp = quantities.storageModulus;
-  const gpp = quantities.lossModulus;
-  if (!gp || !gpp) return undefined;
-  if (q === 'tanDelta') return gp.map((v, i) => gpp[i] / v);
-  // √(G'² + G''²) directly: Math.hypot is several times slower and moduli never overflow here.
-  if (q === 'complexModulus') return gp.map((v, i) => Math.sqrt(v * v + gpp[i] * gpp[i]));
-  if (q === 'phaseAngle') return gp.map((v, i) => (Math.atan2(gpp[i], v) * 180) / Math.PI);
-  return undefined;
-}
+// Values of a quantity, derived from G' and G'' when not stored: one rule in core/data/derived.ts.
+export { quantityValues } from '../data/derived';

@@ -4,6 +4,7 @@
  * modulus = reduced modulus / bT, measured compliance = reduced compliance × bT,
  * |η*|(T, ω) = |G*_r(ω_r)| / (bT·ω). Every answer carries its extrapolation flags and cautions.
  */
+import { complexModulusOf } from '../data/derived';
 import { extent } from '../data/extent';
 import { measuredFromReduced, reducedAbscissa } from '../data/reduction';
 import { checkShiftModelRange } from '../models/range-check';
@@ -127,7 +128,7 @@ function valueAt(
       );
     case 'complexViscosity': {
       // reduced |η*| = |G*_r(ω_r)| / ω_r
-      const g = Math.hypot(pronyStorage(ctx.series, xr), pronyLoss(ctx.series, xr));
+      const g = complexModulusOf(pronyStorage(ctx.series, xr), pronyLoss(ctx.series, xr));
       return measuredFromReduced('complexViscosity', g / xr, aT, bT);
     }
     case 'relaxation':
