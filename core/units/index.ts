@@ -9,6 +9,14 @@ export {
 } from './parse-unit';
 export { siUnitOf, unitsOf } from './unit-table';
 export { parseTemperatureText } from './temperature';
+export {
+  FREQUENCY_UNIT_CHOICES,
+  QUERY_FREQUENCY_UNITS,
+  QUERY_TIME_UNITS,
+  TIME_UNIT_CHOICES,
+  YEAR_S,
+  type QueryUnitChoice,
+} from './query-units';
 export type { TemperatureReading } from './temperature';
 export {
   MODULUS_UNITS,
