@@ -4,3 +4,4 @@ export * from './reduction';
 export * from './extent';
 export { formatCelsius } from './temperature';
 export * from './derived';
+export * from './conventions';

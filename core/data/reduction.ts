@@ -1,7 +1,6 @@
 /**
- * The reduction rules of time–temperature superposition, kept in one place (docs/conventions.md §2):
- * reduced frequency ω_r = aT·ω, reduced time t_r = t/aT; reduced modulus = bT × measured,
- * reduced compliance = measured / bT, reduced |η*| = |η*|·bT/aT; tan δ and δ are not shifted.
+ * The reduction rules of time–temperature superposition, kept in one place as functions
+ * (docs/conventions.md §2; their wording in outputs: core/data/conventions.ts).
  */
 import type { AbscissaKind, QuantityId } from './types';
 
