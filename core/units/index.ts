@@ -21,6 +21,10 @@ export type { TemperatureReading } from './temperature';
 export {
   MODULUS_UNITS,
   type ModulusUnit,
+  FREQUENCY_UNITS,
+  type FrequencyUnit,
+  type DisplayUnits,
+  SI_DISPLAY,
   modulusFactor,
   toOutputUnit,
   outputUnitLabel,

@@ -10,6 +10,18 @@ export const MODULUS_UNITS: readonly ModulusUnit[] = ['Pa', 'kPa', 'MPa', 'GPa']
 
 const FACTOR: Record<ModulusUnit, number> = { Pa: 1, kPa: 1e3, MPa: 1e6, GPa: 1e9 };
 
+/** The frequency units shown and exported (FrequencyUnit below); the data stay in rad/s. */
+export const FREQUENCY_UNITS: readonly FrequencyUnit[] = ['rad/s', 'Hz'];
+
+/** The units an analysis is shown and exported in (saved with it). */
+export interface DisplayUnits {
+  modulus: ModulusUnit;
+  frequency: FrequencyUnit;
+}
+
+/** What the app showed before display units existed (and shows for SI data). */
+export const SI_DISPLAY: DisplayUnits = { modulus: 'Pa', frequency: 'rad/s' };
+
 /** Pascals per unit: value_in_unit = value_Pa / modulusFactor(unit). */
 export function modulusFactor(unit: ModulusUnit): number {
   return FACTOR[unit];

@@ -6,19 +6,19 @@
  */
 import type { AbscissaKind } from '@core/data';
 import type { ImportResult } from '@core/io';
-import { MODULUS_UNITS, modulusFactor, type ModulusUnit } from '@core/units';
+import {
+  FREQUENCY_UNITS,
+  MODULUS_UNITS,
+  SI_DISPLAY,
+  modulusFactor,
+  type DisplayUnits,
+  type FrequencyUnit,
+  type ModulusUnit,
+} from '@core/units';
 
-export type FrequencyUnit = 'rad/s' | 'Hz';
-export const FREQUENCY_UNITS: readonly FrequencyUnit[] = ['rad/s', 'Hz'];
-export { MODULUS_UNITS, type ModulusUnit };
-
-export interface DisplayUnits {
-  modulus: ModulusUnit;
-  frequency: FrequencyUnit;
-}
-
-/** What the app showed before display units existed (and shows for SI data). */
-export const SI_DISPLAY: DisplayUnits = { modulus: 'Pa', frequency: 'rad/s' };
+// The units themselves are core's (core/units/output-units.ts), saved with every analysis.
+export { FREQUENCY_UNITS, MODULUS_UNITS, SI_DISPLAY, type DisplayUnits, type FrequencyUnit };
+export type { ModulusUnit };
 
 /** The units the imported files used: the first modulus column's unit, Hz if f was given. */
 export function unitsFromImport(r: Pick<ImportResult, 'files'>): DisplayUnits {
