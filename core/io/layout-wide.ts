@@ -3,9 +3,8 @@
  * temperature written in the column header ("G' 40 °C"). A row holds one point of each isotherm,
  * so a bad cell loses only its point, and each temperature column is one sweep.
  */
-import { findBlocks } from './blocks';
+import { longLayout } from './layout-long';
 import type { FileLayout } from './layout-types';
-import { buildRecords } from './records';
 
 export const wideLayout: FileLayout = {
   id: 'wide',
@@ -20,13 +19,6 @@ export const wideLayout: FileLayout = {
       evidence: `${withT.length} column${withT.length === 1 ? '' : 's'} carry a temperature in the header`,
     };
   },
-  read(ctx) {
-    return {
-      perCell: true,
-      assemble(table) {
-        const blocks = findBlocks(table.notes, ctx.structure.header, ctx.delimiter);
-        return { records: buildRecords(table, ctx.plan, undefined, ctx.sink, blocks) };
-      },
-    };
-  },
+  // Rows are read as in the long table, cell by cell: a bad cell loses only its point.
+  read: (ctx) => ({ ...longLayout.read(ctx), perCell: true }),
 };

@@ -1,10 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { newDocument, setLocked } from '../../../app/renderer/src/document/analysis-document';
-import {
-  analysisFileName,
-  parseAnalysis,
-  serializeAnalysis,
-} from '../../../app/renderer/src/document/analysis-file';
+import { parseAnalysis, serializeAnalysis } from '../../../core/document';
+import { analysisFileName } from '../../../app/renderer/src/document/analysis-file';
 import { tinyDataset } from './tiny-dataset';
 
 const doc = setLocked(
