@@ -26,6 +26,8 @@ export {
   type DisplayUnits,
   SI_DISPLAY,
   modulusFactor,
+  outputFrequencyFactor,
+  toOutputFrequency,
   toOutputUnit,
   outputUnitLabel,
 } from './output-units';

@@ -65,3 +65,8 @@ export type FrequencyUnit = 'rad/s' | 'Hz';
 export function toOutputFrequency(omegaRadPerS: number, unit: FrequencyUnit): number {
   return unit === 'Hz' ? omegaRadPerS / (2 * Math.PI) : omegaRadPerS;
 }
+
+/** Factor from rad/s to the chosen frequency unit: 1/(2π) for Hz, 1 for rad/s. */
+export function outputFrequencyFactor(unit: FrequencyUnit): number {
+  return unit === 'Hz' ? 1 / (2 * Math.PI) : 1;
+}

@@ -11,6 +11,8 @@ import {
   MODULUS_UNITS,
   SI_DISPLAY,
   modulusFactor,
+  outputFrequencyFactor,
+  toOutputFrequency,
   type DisplayUnits,
   type FrequencyUnit,
   type ModulusUnit,
@@ -46,7 +48,7 @@ export function toDisplay(
       return { value: value * f, unit: `1/${u.modulus}` };
     case 'rad/s':
       return u.frequency === 'Hz'
-        ? { value: value / (2 * Math.PI), unit: 'Hz' }
+        ? { value: toOutputFrequency(value, 'Hz'), unit: 'Hz' }
         : { value, unit: 'rad/s' };
     default:
       return { value, unit: siUnit };
@@ -55,5 +57,5 @@ export function toDisplay(
 
 /** Factor from the stored abscissa (ω in rad/s, t in s) to the displayed one. */
 export function abscissaFactor(kind: AbscissaKind, u: DisplayUnits): number {
-  return kind === 'angularFrequency' && u.frequency === 'Hz' ? 1 / (2 * Math.PI) : 1;
+  return kind === 'angularFrequency' ? outputFrequencyFactor(u.frequency) : 1;
 }
