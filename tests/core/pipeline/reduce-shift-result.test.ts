@@ -5,26 +5,17 @@
 import { describe, expect, it } from 'vitest';
 import type { Dataset, QuantityId } from '../../../core/data/types';
 import { reduceToMasterCurve } from '../../../core/pipeline/reduce';
-import type { AnalysisCurve } from '../../../core/pipeline/types';
 import { shiftIsotherms } from '../../../core/shift';
 import type { ShiftResult } from '../../../core/shift';
 import { pronyLoss, pronyRelaxation, pronyStorage } from '../../../core/spectrum/prony-model';
 import { syntheticIsotherms } from '../../../core/synthetic';
+import { analysisCurvesOf } from '../../helpers/analysis-curves';
 import { expectRelClose } from '../../helpers/assert-close';
 import { MELT, MELT_ARRHENIUS, RELAX_WLF, RELAXING } from '../shift/fixtures';
 
 /** The master curve of a shift result, as one record per point. */
 function masterCurve(dataset: Dataset, result: ShiftResult) {
-  const curves: AnalysisCurve[] = result.curves.map((c) => ({
-    isothermId: c.id,
-    temperatureK: c.temperatureK,
-    log10aT: c.log10aT,
-    log10aTStdErr: c.log10aTStdErr,
-    log10bT: c.log10bT,
-    log10bTStdErr: c.log10bTStdErr,
-    included: c.included,
-    qualityRmsDecades: null,
-  }));
+  const curves = analysisCurvesOf(result);
   const outliers = Object.fromEntries(result.curves.map((c) => [c.id, c.outlierPoints]));
   const mc = reduceToMasterCurve(dataset, curves, outliers);
   return mc.reducedX.map((reducedX, i) => ({
