@@ -13,5 +13,6 @@ export * from './spectrum';
 export * from './pipeline';
 export * from './report';
 export * from './compare';
+export * from './document';
 // core/pipeline re-exports the kind of shift model from core/models: name the one source.
 export type { ShiftModelKind } from './models';

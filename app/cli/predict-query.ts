@@ -8,6 +8,7 @@ import type { AnalysisQuery } from '@core/pipeline';
 import { findShiftModel, settingTemperatureK, shiftModelKindList } from '@core/pipeline';
 import type { ShiftModelKind } from '@core/pipeline';
 import type { PredictedQuantity } from '@core/spectrum';
+import { QUERY_FREQUENCY_UNITS, QUERY_TIME_UNITS } from '@core/units';
 import { CliError } from './cli-error.ts';
 import { EXIT } from './exit-codes.ts';
 
@@ -26,28 +27,8 @@ export const PREDICT_QUANTITIES: Readonly<Record<string, PredictedQuantity>> = {
   creepcompliance: 'creep',
 };
 
-const YEAR_S = 365.25 * 86400;
-const TIME_UNITS: Readonly<Record<string, number>> = {
-  s: 1,
-  min: 60,
-  h: 3600,
-  d: 86400,
-  day: 86400,
-  days: 86400,
-  y: YEAR_S,
-  yr: YEAR_S,
-  year: YEAR_S,
-  years: YEAR_S,
-};
-/** Case matters only for mHz (millihertz) against MHz, which no rheometer reaches. */
-const FREQUENCY_UNITS: Readonly<Record<string, number>> = {
-  Hz: 2 * Math.PI,
-  hz: 2 * Math.PI,
-  kHz: 2000 * Math.PI,
-  khz: 2000 * Math.PI,
-  mHz: 2e-3 * Math.PI,
-  'rad/s': 1,
-};
+const TIME_UNITS = QUERY_TIME_UNITS;
+const FREQUENCY_UNITS = QUERY_FREQUENCY_UNITS;
 
 const usage = (query: string, why: string): CliError =>
   new CliError(

@@ -2,9 +2,10 @@
  * Reading and writing the user's files (paths always chosen by a dialog in main). Writes go to a
  * temporary file first and are renamed into place, so a crash never leaves half a file.
  */
-import { readdir, readFile, rename, stat, writeFile } from 'node:fs/promises';
+import { readdir, readFile, stat } from 'node:fs/promises';
 import { basename, join } from 'node:path';
 import { isWorkbookName, workbookToSourceFiles } from '@core/io';
+import { writeFileAtomic as writeBytesAtomic } from '../shared/flushed-write';
 import type { TextFile } from '../shared/ipc-channels';
 
 /** File name endings taken from a chosen folder (other files, e.g. notes or images, are skipped). */
@@ -58,12 +59,11 @@ export async function readDataFiles(paths: string[]): Promise<TextFile[]> {
   return (await Promise.all(paths.map(readDataFile))).flat();
 }
 
+/** Writes text (or base64-encoded bytes) as a whole: app/shared/flushed-write.ts. */
 export async function writeFileAtomic(
   path: string,
   content: string,
   encoding: 'utf8' | 'base64' = 'utf8',
 ): Promise<void> {
-  const tmp = `${path}.${process.pid}.tmp`;
-  await writeFile(tmp, Buffer.from(content, encoding));
-  await rename(tmp, path);
+  await writeBytesAtomic(path, Buffer.from(content, encoding));
 }

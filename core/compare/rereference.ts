@@ -3,10 +3,12 @@
  *
  * With aT referred to the analysis's own Tref, the master curve at T* is the same curve moved by
  * log10 aT(T*): ω* = ω_r / aT(T*), t* = t_r · aT(T*) (docs/conventions.md §2: ω_r = aT·ω,
- * t_r = t/aT). Moduli are divided by bT(T*) (bT = Tref·ρref/(T·ρ) re-referenced), |η*| is
- * multiplied by aT(T*)/bT(T*), tan δ is unchanged. The standard error of log10 aT(T*) comes
+ * t_r = t/aT). Moduli are divided by bT(T*) (bT = Tref·ρref/(T·ρ) re-referenced), compliance
+ * multiplied by it, |η*| multiplied by aT(T*)/bT(T*), tan δ and δ unchanged: the reduction rule
+ * inverted, core/data/reduction.ts. The standard error of log10 aT(T*) comes
  * from the model's band (delta method, full covariance; core/models shiftModelBand).
  */
+import { abscissaShiftSign, reductionExponents } from '../data/reduction';
 import { kelvinToCelsius } from '../data/temperature';
 import type { QuantityId } from '../data/types';
 import type { ShiftModelKind } from '../models/types';
@@ -36,14 +38,6 @@ export function pickModel(a: Analysis, requested: ShiftModelKind | null): ShiftM
   if (a.models.hint && modelResult(a.models, a.models.hint.model)) return a.models.hint.model;
   return fittedShiftModels(a.models)[0]?.descriptor.kind ?? null;
 }
-
-/** Quantities whose log changes with the vertical shift. */
-const VERTICAL: ReadonlySet<QuantityId> = new Set<QuantityId>([
-  'storageModulus',
-  'lossModulus',
-  'complexModulus',
-  'relaxationModulus',
-]);
 
 export function moveToTemperature(
   a: Analysis,
@@ -75,10 +69,11 @@ export function moveToTemperature(
     log10bT = v.log10bT;
     if (v.extrapolated) notes.push(`${a.sample.name}: ${v.note}`);
   }
-  const time = a.sample.abscissa === 'time';
   const mc = a.masterCurve;
   const keep = mc.reducedX.map((x, i) => x > 0 && !mc.outlier[i]);
-  const dx = time ? log10aT.value : -log10aT.value;
+  // The reduction rule inverted in log form (core/data/reduction.ts): x* = x_r moved back by aT(T*),
+  // log10 y* = log10 y_r − (its aT and bT exponents) · (log10 aT(T*), log10 bT(T*)).
+  const dx = -abscissaShiftSign(a.sample.abscissa) * log10aT.value;
   const log10x: number[] = [];
   const isothermId: string[] = [];
   const log10y: Partial<Record<QuantityId, number[]>> = {};
@@ -89,10 +84,9 @@ export function moveToTemperature(
     isothermId.push(mc.isothermId[i]);
     for (const q of quantities) {
       const v = mc.quantities[q]?.[i];
-      let y = v !== null && v !== undefined && v > 0 ? Math.log10(v) : NaN;
-      if (VERTICAL.has(q)) y -= log10bT;
-      else if (q === 'complexViscosity') y += log10aT.value - log10bT;
-      (log10y[q] as number[]).push(y);
+      const y = v !== null && v !== undefined && v > 0 ? Math.log10(v) : NaN;
+      const e = reductionExponents(q);
+      (log10y[q] as number[]).push(y - (e.aT * log10aT.value + e.bT * log10bT));
     }
   });
   return { log10x, log10y, isothermId, log10aT, log10bT, model, extrapolated, notes };

@@ -3,3 +3,5 @@ export * from './quantities';
 export * from './reduction';
 export * from './extent';
 export { formatCelsius } from './temperature';
+export * from './derived';
+export * from './conventions';

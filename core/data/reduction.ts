@@ -1,7 +1,6 @@
 /**
- * The reduction rules of time–temperature superposition, kept in one place (docs/conventions.md §2):
- * reduced frequency ω_r = aT·ω, reduced time t_r = t/aT; reduced modulus = bT × measured,
- * reduced compliance = measured / bT, reduced |η*| = |η*|·bT/aT; tan δ and δ are not shifted.
+ * The reduction rules of time–temperature superposition, kept in one place as functions
+ * (docs/conventions.md §2; their wording in outputs: core/data/conventions.ts).
  */
 import type { AbscissaKind, QuantityId } from './types';
 
@@ -22,6 +21,57 @@ export function reductionFactor(q: QuantityId, aT: number, bT: number): number {
       return bT / aT;
     default:
       return bT;
+  }
+}
+
+/**
+ * The reduction rules in log form: log10(reduced / measured) = aT · log10 aT + bT · log10 bT for
+ * a quantity (moduli: bT 1; compliance: bT −1; |η*|: aT −1, bT 1; tan δ and δ: 0). The shift fit
+ * works in decades and reads its coefficients here.
+ */
+export function reductionExponents(q: QuantityId): { aT: number; bT: number } {
+  switch (q) {
+    case 'tanDelta':
+    case 'phaseAngle':
+      return { aT: 0, bT: 0 };
+    case 'creepCompliance':
+      return { aT: 0, bT: -1 };
+    case 'complexViscosity':
+      return { aT: -1, bT: 1 };
+    default:
+      return { aT: 0, bT: 1 };
+  }
+}
+
+/**
+ * Sign of log10 aT in the reduced log abscissa: log10 ω_r = log10 ω + log10 aT (frequency, +1),
+ * log10 t_r = log10 t − log10 aT (time, −1).
+ */
+export function abscissaShiftSign(kind: AbscissaKind): 1 | -1 {
+  return kind === 'angularFrequency' ? 1 : -1;
+}
+
+/**
+ * The reduction inverted: the value measured at the temperature with these aT and bT, from the
+ * reduced value (a prediction or a generated measurement): moduli / bT, compliance × bT,
+ * |η*| × aT/bT; tan δ and δ unchanged.
+ */
+export function measuredFromReduced(
+  q: QuantityId,
+  reduced: number,
+  aT: number,
+  bT: number,
+): number {
+  switch (q) {
+    case 'tanDelta':
+    case 'phaseAngle':
+      return reduced;
+    case 'creepCompliance':
+      return reduced * bT;
+    case 'complexViscosity':
+      return (reduced * aT) / bT;
+    default:
+      return reduced / bT;
   }
 }
 

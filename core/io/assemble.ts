@@ -55,7 +55,7 @@ function sameValues(p: MergedPoints, a: number, b: number): boolean {
  * Groups points into isotherms (groupPoints: steady sweeps, else temperature bands), sorts each by
  * x, drops repeated x (warning), and leaves out groups with fewer than two distinct x values
  * (warning). Isotherms come back sorted by temperature, ids T01, T02 …, with how they were formed;
- * problems go to `report`. `layouts`: per file (default long).
+ * problems go to `report`. `sweeps`: per file, its layout's sweep rule (default 'runs').
  */
 export function assembleIsotherms(
   p: MergedPoints,
@@ -63,11 +63,11 @@ export function assembleIsotherms(
   toleranceK: number,
   xWord: string,
   report: (fileIndex: number, row: number, message: string) => void,
-  layouts: readonly ('long' | 'perIsotherm' | 'wide')[] = files.map(() => 'long'),
+  sweeps: readonly ('runs' | 'temperature')[] = files.map(() => 'runs'),
 ): { isotherms: Isotherm[]; grouping: GroupingSummary } {
   const src = (i: number): PointSource => ({ file: files[p.file[i]], row: p.row[i] });
   const warn = (i: number, message: string) => report(p.file[i], p.row[i], message);
-  const groups = groupPoints({ ...p, layouts }, toleranceK);
+  const groups = groupPoints({ ...p, sweeps }, toleranceK);
   const bands = groups.cut.map((cut, b) => ({ cut, minK: groups.minK[b] }));
   // Counting sort of the points by group, keeping file order inside a group.
   const band = groups.group;

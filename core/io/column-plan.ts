@@ -3,28 +3,19 @@ import { describeConversion, parseUnit } from '../units';
 import type { ColumnDraft } from './column-draft';
 import { ImportError } from './import-error';
 import { ROLE_UNITS, ROLE_WORDS, isFrequency, isQuantity, testKindOf } from './roles';
-import type { ColumnReport, Layout } from './types';
+import { recogniseLayout } from './layouts';
+import type { ColumnPlan, ColumnReport } from './types';
 import type { WarningSink } from './warning-sink';
 
-/** Which columns the importer reads, and how. */
-export interface ColumnPlan {
-  columns: ColumnReport[];
-  layout: Layout;
-  testKind: TestKind;
-  abscissa: AbscissaKind;
-  /** Deformation stated by the symbols or mappings of the used columns, if any. */
-  deformation?: DeformationMode;
-  /** 0-based indices; -1 = none. */
-  temperatureColumn: number;
-  xColumn: number;
-  quantityColumns: { column: number; quantity: QuantityId; temperatureK?: number }[];
-}
+export type { ColumnPlan } from './types';
 
 export interface PlanContext {
   file: string;
   headerRow: number;
   testKind: TestKind | 'auto';
   warnings: WarningSink;
+  /** "key: value" lines above the table, shown to the layouts' recognisers. @default {} */
+  metadata?: Record<string, string>;
 }
 
 const HOW_TO_MAP =
@@ -195,18 +186,29 @@ export function planColumns(drafts: ColumnDraft[], ctx: PlanContext): ColumnPlan
         `one file must hold one deformation mode. Ignore the columns you do not want, or ${HOW_TO_MAP}.`,
     );
   }
+  const temperatureColumn = temperature ? temperature.index : -1;
+  const quantityColumns = used.map((d) => ({
+    column: d.index,
+    quantity: d.role as QuantityId,
+    ...(d.temperatureK !== undefined ? { temperatureK: d.temperatureK } : {}),
+  }));
+  const { layout, match } = recogniseLayout({
+    file: ctx.file,
+    header: drafts.map((d) => d.header),
+    metadata: ctx.metadata ?? {},
+    columns,
+    temperatureColumn,
+    quantityColumns,
+  });
   return {
     columns,
-    layout: wide ? 'wide' : temperature ? 'long' : 'perIsotherm',
+    layout: layout.id,
     testKind,
     abscissa,
     ...(modes.size === 1 ? { deformation: [...modes.keys()][0] } : {}),
-    temperatureColumn: temperature ? temperature.index : -1,
+    temperatureColumn,
     xColumn: x.index,
-    quantityColumns: used.map((d) => ({
-      column: d.index,
-      quantity: d.role as QuantityId,
-      ...(d.temperatureK !== undefined ? { temperatureK: d.temperatureK } : {}),
-    })),
+    quantityColumns,
+    layoutEvidence: match.evidence,
   };
 }

@@ -1,9 +1,9 @@
+import { phaseRadians, storageAndLossOf, tanDeltaOf } from '../data/derived';
 import type { Isotherm, QuantityId } from '../data/types';
 
-const DEG = Math.PI / 180;
-
 /**
- * Fills quantities that follow from others, point by point, where they are missing (docs/conventions.md §1):
+ * Fills quantities that follow from others, point by point, where they are missing (the rules of
+ * core/data/derived.ts, docs/conventions.md §1):
  * G' = |G*| cos δ and G'' = |G*| sin δ from |G*| with δ (degrees) or tan δ (δ = atan tan δ);
  * tan δ = G''/G' from G' and G''. Measured values are never overwritten. Returns what was filled.
  */
@@ -18,14 +18,15 @@ export function deriveQuantities(iso: Isotherm): QuantityId[] {
     const tan = q.tanDelta;
     for (let i = 0; i < n; i++) {
       const m = modulus[i];
-      const d = delta && Number.isFinite(delta[i]) ? delta[i] * DEG : tan ? Math.atan(tan[i]) : NaN;
+      const d = phaseRadians(delta?.[i], tan?.[i]);
       if (!Number.isFinite(m) || !Number.isFinite(d)) continue;
+      const [storage, loss] = storageAndLossOf(m, d);
       if (!Number.isFinite(q.storageModulus?.[i] ?? NaN)) {
-        get('storageModulus')[i] = m * Math.cos(d);
+        get('storageModulus')[i] = storage;
         filled.add('storageModulus');
       }
       if (!Number.isFinite(q.lossModulus?.[i] ?? NaN)) {
-        get('lossModulus')[i] = m * Math.sin(d);
+        get('lossModulus')[i] = loss;
         filled.add('lossModulus');
       }
     }
@@ -35,7 +36,7 @@ export function deriveQuantities(iso: Isotherm): QuantityId[] {
   if (gp && gpp) {
     for (let i = 0; i < n; i++) {
       if (Number.isFinite(q.tanDelta?.[i] ?? NaN)) continue;
-      const t = gpp[i] / gp[i];
+      const t = tanDeltaOf(gp[i], gpp[i]);
       if (!Number.isFinite(t)) continue;
       get('tanDelta')[i] = t;
       filled.add('tanDelta');

@@ -2,12 +2,10 @@ import { draftColumns } from './column-draft';
 import { planColumns } from './column-plan';
 import type { ColumnPlan } from './column-plan';
 import { detectDialect } from './dialect';
-import { temperatureFromFileName } from './file-name';
 import { ImportError } from './import-error';
 import { cleanText, headLines, isBlank, isComment } from './lines';
-import { deformationFromMetadata, quantityFromMetadata, temperatureFromMetadata } from './metadata';
-import { buildRecords } from './records';
-import { findBlocks } from './blocks';
+import { deformationFromMetadata, quantityFromMetadata } from './metadata';
+import { layoutById } from './layouts';
 import type { PointRecords } from './records';
 import { scanTable } from './scan-table';
 import type { ScanSpec, ScannedTable } from './scan-table';
@@ -27,33 +25,6 @@ export interface FileImport {
 }
 
 const HEAD_LINES = 400;
-
-function fileTemperature(
-  file: SourceFile,
-  metadata: Record<string, string>,
-  o: ResolvedImportOptions,
-  sink: WarningSink,
-): { temperatureK: number; from: 'option' | 'metadata' | 'fileName' } {
-  const forced = o.fileTemperatureK[file.name];
-  if (forced !== undefined) return { temperatureK: forced, from: 'option' };
-  const meta = temperatureFromMetadata(metadata);
-  if (meta) {
-    if (meta.reading.assumed)
-      sink.add(0, 0, `the temperature line "${meta.key}" has no unit; °C was assumed`);
-    return { temperatureK: meta.reading.temperatureK, from: 'metadata' };
-  }
-  const named = temperatureFromFileName(file.name);
-  if (named) return { temperatureK: named.temperatureK, from: 'fileName' };
-  throw new ImportError(
-    'noTemperature',
-    file.name,
-    0,
-    0,
-    'no temperature found: no temperature column, no temperatures in the column headers, no line ' +
-      'such as "# temperature: 40 °C" above the table and none in the file name (e.g. "seal_40C.csv"). ' +
-      'Add one of these, or give the temperature of this file explicitly (`--file-temperature` on the command line).',
-  );
-}
 
 /** Reads one file: layout, dialect, header and units, columns, then every row into points. */
 export function importFile(file: SourceFile, o: ResolvedImportOptions): FileImport {
@@ -122,13 +93,21 @@ export function importFile(file: SourceFile, o: ResolvedImportOptions): FileImpo
     headerRow: structure.headerRow,
     testKind: o.testKind,
     warnings: sink,
+    metadata: structure.metadata,
   });
-  const fileT =
-    plan.layout === 'perIsotherm' ? fileTemperature(file, structure.metadata, o, sink) : undefined;
+  const reading = layoutById(plan.layout).read({
+    file: name,
+    options: o,
+    structure,
+    plan,
+    delimiter: dialect.delimiter,
+    sink,
+  });
   const read = new Set([
     plan.xColumn,
     plan.temperatureColumn,
     ...plan.quantityColumns.map((q) => q.column),
+    ...(reading.extraColumns ?? []),
   ]);
   const wanted = plan.columns.map((c) => read.has(c.index - 1));
   if (file.byteLength !== undefined && text.length > structure.firstDataOffset) {
@@ -154,7 +133,7 @@ export function importFile(file: SourceFile, o: ResolvedImportOptions): FileImpo
     decimalComma: dialect.decimalComma,
     wanted,
     maxProblems: o.maxWarningsPerFile,
-    perCell: plan.layout === 'wide',
+    perCell: reading.perCell,
   };
   let table = scanTable(text, structure.firstDataOffset, structure.firstDataRow, spec);
   if (chunks) {
@@ -167,16 +146,7 @@ export function importFile(file: SourceFile, o: ResolvedImportOptions): FileImpo
     }
     table = joinTables(parts, spec.maxProblems);
   }
-  const blocks = findBlocks(table.notes, structure.header, dialect.delimiter);
-  if (fileT?.from === 'option') blocks.starts = [];
-  const records = buildRecords(table, plan, fileT?.temperatureK, sink, blocks);
-  const blockTemperaturesK =
-    plan.layout === 'perIsotherm' && blocks.starts.length > 0
-      ? [
-          ...(blocks.starts[0].row > 0 ? [fileT!.temperatureK] : []),
-          ...blocks.starts.map((b) => b.temperatureK),
-        ]
-      : undefined;
+  const { records, report: layoutReport } = reading.assemble(table);
   if (records.n === 0) {
     const first = sink.list.find((w) => w.row >= structure.firstDataRow);
     throw new ImportError(
@@ -202,8 +172,7 @@ export function importFile(file: SourceFile, o: ResolvedImportOptions): FileImpo
       dataRows: table.rows,
       usedRows: records.usedRows,
       metadata: structure.metadata,
-      ...(fileT ? { temperatureK: fileT.temperatureK, temperatureFrom: fileT.from } : {}),
-      ...(blockTemperaturesK ? { blockTemperaturesK } : {}),
+      ...layoutReport,
       testKind: plan.testKind,
       columns: plan.columns,
     },

@@ -59,15 +59,18 @@ export interface GroupingSummary {
   description: string;
 }
 
-/** The points to group, in file order, with the layout of each file. */
+/** The points to group, in file order, with how each file's layout forms sweeps. */
 export interface GroupingInput {
   n: number;
   temperatureK: ArrayLike<number>;
   x: ArrayLike<number>;
   /** File index of each point. */
   file: ArrayLike<number>;
-  /** Layout of each file: in a wide table each temperature column is one sweep. */
-  layouts: readonly ('long' | 'perIsotherm' | 'wide')[];
+  /**
+   * Per file, its layout's sweep rule (FileLayout.sweeps): 'runs' in file order, or 'temperature'
+   * (one sweep per distinct temperature, as each column of a wide table is one sweep).
+   */
+  sweeps: readonly ('runs' | 'temperature')[];
 }
 
 export interface PointGroups {
@@ -102,7 +105,8 @@ interface Sweeps {
 /**
  * Splits the points into sweeps: in long and one-isotherm files, runs in file order that end
  * where the frequency or time turns back (a new sweep starts) or the temperature jumps by more
- * than the tolerance; in a wide table, one sweep per file and temperature column.
+ * than the tolerance; in a file whose layout forms sweeps by temperature (a wide table), one sweep
+ * per file and temperature.
  */
 function sweepsOf(p: GroupingInput, toleranceK: number): Sweeps {
   const of = new Int32Array(p.n);
@@ -112,7 +116,7 @@ function sweepsOf(p: GroupingInput, toleranceK: number): Sweeps {
   let dir = 0;
   for (let i = 0; i < p.n; i++) {
     const f = p.file[i];
-    if (p.layouts[f] === 'wide') {
+    if (p.sweeps[f] === 'temperature') {
       const key = `${f}:${p.temperatureK[i]}`;
       let id = wide.get(key);
       if (id === undefined) {

@@ -7,6 +7,7 @@ import { sampleNameFromFileName } from './file-name';
 import { importFile } from './file-import';
 import type { FileImport } from './file-import';
 import { ImportError } from './import-error';
+import { layoutById } from './layouts';
 import { nameFromMetadata } from './metadata';
 import { resolveImportOptions } from './options';
 import type { ImportOptions, ImportResult, IsothermGroupReport, SourceFile } from './types';
@@ -85,7 +86,7 @@ export function importFiles(files: SourceFile[], options?: ImportOptions): Impor
     o.groupingToleranceK,
     abscissa === 'time' ? 'time' : 'frequency',
     (f, row, message) => reads[f].sink.add(row, 0, message),
-    reads.map((r) => r.plan.layout),
+    reads.map((r) => layoutById(r.plan.layout).sweeps),
   );
   if (isotherms.length === 0) {
     throw new ImportError(

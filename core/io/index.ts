@@ -6,8 +6,21 @@ export { COLUMN_ROLES } from './roles';
 export { groupTemperatures } from './grouping';
 export type { GroupingSummary, TemperatureBand } from './grouping';
 export { temperatureFromFileName } from './file-name';
+export { fileLayouts, layoutById, layoutText, registerLayout } from './layouts';
+export type {
+  FileLayout,
+  LayoutContext,
+  LayoutMatch,
+  LayoutReading,
+  LayoutReportFields,
+  LayoutSample,
+} from './layout-types';
+export type { PointRecords } from './records';
+export type { ScannedTable } from './scan-table';
+export type { FileStructure } from './structure';
 export type {
   ColumnMapping,
+  ColumnPlan,
   ColumnReport,
   ColumnRole,
   DelimiterName,

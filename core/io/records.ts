@@ -1,8 +1,7 @@
 import type { QuantityId } from '../data/types';
 import type { CellProblem, ScannedTable } from './scan-table';
-import type { ColumnPlan } from './column-plan';
 import { ROLE_WORDS } from './roles';
-import type { ColumnReport } from './types';
+import type { ColumnPlan, ColumnReport } from './types';
 import type { WarningSink } from './warning-sink';
 import type { BlockPlan } from './blocks';
 import { SENTINEL_MAGNITUDE, implausibleValue, implausibleX } from './plausible';

@@ -94,7 +94,11 @@ export type ResolvedImportOptions = Required<Omit<ImportOptions, 'sampleName'>> 
   sampleName: string | undefined;
 };
 
-export type Layout = 'long' | 'perIsotherm' | 'wide';
+/**
+ * Id of the file layout that read a file: one of the built-in layouts, or the id of a layout
+ * added to the registry (core/io/layouts.ts).
+ */
+export type Layout = 'long' | 'perIsotherm' | 'wide' | (string & Record<never, never>);
 export type DelimiterName = 'comma' | 'semicolon' | 'tab' | 'spaces';
 
 /** How one column was understood. */
@@ -123,6 +127,23 @@ export interface ColumnReport {
   recognisedBy: 'header' | 'mapping' | 'none';
   /** Why the column is ignored, or which default was assumed. */
   note?: string;
+}
+
+/** Which columns the importer reads, and how. */
+export interface ColumnPlan {
+  columns: ColumnReport[];
+  /** Id of the file layout that reads the table (see core/io/layouts.ts). */
+  layout: Layout;
+  testKind: TestKind;
+  abscissa: AbscissaKind;
+  /** Deformation stated by the symbols or mappings of the used columns, if any. */
+  deformation?: DeformationMode;
+  /** 0-based indices; -1 = none. */
+  temperatureColumn: number;
+  xColumn: number;
+  quantityColumns: { column: number; quantity: QuantityId; temperatureK?: number }[];
+  /** Why the layout was recognised (its LayoutMatch evidence). */
+  layoutEvidence: string;
 }
 
 /** What the importer recognised in one file. */

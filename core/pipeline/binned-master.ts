@@ -3,6 +3,7 @@
  * confirmed by the data and |η*| is read as bin means, at any number of points. Outliers are left
  * out. |η*| is the measured complex viscosity where given, else √(G′² + G″²)/ω_r.
  */
+import { complexModulusOf } from '../data/derived';
 import { densestRun, logBins, type LogBins } from '../spectrum/log-bins';
 import type { AnalysisMasterCurve } from './types';
 
@@ -31,7 +32,7 @@ export function binnedMaster(mc: AnalysisMasterCurve): BinnedMaster {
     if (a != null) gs[i] = a;
     if (b != null) gl[i] = b;
     const e = v?.[i];
-    eta[i] = e != null ? e : a != null && b != null ? Math.hypot(a, b) / mc.reducedX[i] : NaN;
+    eta[i] = e != null ? e : a != null && b != null ? complexModulusOf(a, b) / mc.reducedX[i] : NaN;
   }
   const bins = logBins(x, [gs, gl, eta], INDICATOR_BINS_PER_DECADE);
   const run = densestRun(bins);

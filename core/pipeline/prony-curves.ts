@@ -5,6 +5,7 @@
  * modulus G(t) = Ge + Σ g_i exp(−t/τ_i) against reduced time (for frequency data over
  * t = 1/ω of the window). null when the analysis has no Prony series or the quantity has no form.
  */
+import { complexModulusOf } from '../data/derived';
 import type { QuantityId } from '../data/types';
 import { pronyLoss, pronyRelaxation, pronyStorage } from '../spectrum/prony-model';
 import type { Analysis } from './types';
@@ -34,9 +35,9 @@ export function pronyCurve(a: Analysis, q: QuantityId, points = 160): PronyCurve
   const f: Partial<Record<QuantityId, (w: number) => number>> = {
     storageModulus: (w) => pronyStorage(p, w),
     lossModulus: (w) => pronyLoss(p, w),
-    complexModulus: (w) => Math.hypot(pronyStorage(p, w), pronyLoss(p, w)),
+    complexModulus: (w) => complexModulusOf(pronyStorage(p, w), pronyLoss(p, w)),
     tanDelta: (w) => pronyLoss(p, w) / pronyStorage(p, w),
-    complexViscosity: (w) => Math.hypot(pronyStorage(p, w), pronyLoss(p, w)) / w,
+    complexViscosity: (w) => complexModulusOf(pronyStorage(p, w), pronyLoss(p, w)) / w,
   };
   const fn = f[q];
   return fn ? { x: ws, y: ws.map(fn), abscissa: 'angularFrequency' } : null;

@@ -1,8 +1,8 @@
 /**
  * The reduced master curve from shift factors (docs/conventions.md §2): x_r = aT·ω or t/aT; moduli × bT,
  * compliance / bT, |η*| × bT/aT, tan δ and δ unchanged. Only included isotherms and unmasked
- * points; sorted by reduced abscissa. (core/shift's `masterCurve` does the same from a ShiftResult;
- * this one works from the analysis's curves, so it also serves curves edited after the fit.)
+ * points; sorted by reduced abscissa. The one master-curve builder: it works from the analysis's
+ * curves, so it also serves curves edited after the fit.
  */
 import type { AbscissaKind, Dataset } from '../data/types';
 import { QUANTITY_IDS } from '../data/types';

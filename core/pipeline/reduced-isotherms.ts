@@ -1,11 +1,12 @@
 /**
  * Every isotherm's points at the reference temperature for one quantity: the measured values,
- * or the ones derived from G′ and G″ (|G*| = √(G′² + G″²), tan δ = G″/G′, δ = atan2(G″, G′),
- * |η*| = |G*|/ω; docs/conventions.md §1), reduced with the isotherm's shift (core/data/reduction: aT·ω or
+ * or the ones derived from them (core/data/derived.ts: |G*| = √(G′² + G″²), tan δ = G″/G′,
+ * δ = atan2(G″, G′), |η*| = |G*|/ω; docs/conventions.md §1), reduced with the isotherm's shift (core/data/reduction: aT·ω or
  * t/aT; moduli × bT, |η*| × bT/aT, tan δ and δ unchanged). Used isotherms come at their fitted
  * shift with the engine's outlier flags; the others at the shift `isothermStates` places them
  * at, so plots can draw them faded. Masked points are left out.
  */
+import { quantityValues } from '../data/derived';
 import type { Isotherm, QuantityId } from '../data/types';
 import { reducedAbscissa, reductionFactor } from '../data/reduction';
 import { isothermStates, type IsothermUse } from './isotherm-states';
@@ -25,29 +26,9 @@ export interface ReducedIsotherm {
   outlier: boolean[];
 }
 
-/** The values of `q` at every point of an isotherm, measured or derived; null when neither. */
+/** The values of `q` at every point of an isotherm, measured or derived (core/data/derived.ts); null when neither. */
 export function isothermValues(iso: Isotherm, q: QuantityId): number[] | null {
-  const v = iso.quantities;
-  if (v[q]) return v[q];
-  const gp = v.storageModulus;
-  const gpp = v.lossModulus;
-  const both = gp && gpp;
-  switch (q) {
-    case 'tanDelta':
-      if (both) return gp.map((g, i) => gpp[i] / g);
-      return v.phaseAngle ? v.phaseAngle.map((d) => Math.tan((d * Math.PI) / 180)) : null;
-    case 'phaseAngle':
-      if (both) return gp.map((g, i) => (Math.atan2(gpp[i], g) * 180) / Math.PI);
-      return v.tanDelta ? v.tanDelta.map((t) => (Math.atan(t) * 180) / Math.PI) : null;
-    case 'complexModulus':
-      return both ? gp.map((g, i) => Math.hypot(g, gpp[i])) : null;
-    case 'complexViscosity': {
-      const gs = isothermValues(iso, 'complexModulus');
-      return gs ? gs.map((g, i) => g / iso.x[i]) : null;
-    }
-    default:
-      return null;
-  }
+  return quantityValues(q, iso.quantities, iso.x) ?? null;
 }
 
 /** True when the data hold `q` for at least one isotherm (measured or derivable). */

@@ -2,9 +2,10 @@
  * The van Gurp–Palmen points of an analysis: phase angle δ against |G*| for every measured,
  * unmasked point, with |G*| multiplied by the isotherm's bT when a vertical shift applies. No
  * horizontal shift is needed (van Gurp & Palmen, Rheology Bulletin 67, 1998): isotherms on one
- * line support superposition. |G*| = √(G′² + G″²) and δ = atan2(G″, G′) when G′ and G″ were
- * measured, else the measured |G*| and δ (docs/conventions.md §1). The report and the app both plot these.
+ * line support superposition. |G*| and δ as measured, else from G′ and G″ (one rule,
+ * core/data/derived.ts; docs/conventions.md §1). The report and the app both plot these.
  */
+import { quantityValues } from '../data/derived';
 import type { Analysis } from './types';
 
 export interface VanGurpPalmenSeries {
@@ -22,19 +23,15 @@ export function vanGurpPalmenSeries(a: Analysis): VanGurpPalmenSeries[] {
   const bT = new Map(a.curves.map((c) => [c.isothermId, 10 ** (c.log10bT ?? 0)]));
   const out: VanGurpPalmenSeries[] = [];
   for (const iso of a.dataset.isotherms) {
-    const {
-      storageModulus: gp,
-      lossModulus: gpp,
-      complexModulus: gs,
-      phaseAngle: ph,
-    } = iso.quantities;
+    const gs = quantityValues('complexModulus', iso.quantities);
+    const ph = quantityValues('phaseAngle', iso.quantities);
     const b = bT.get(iso.id) ?? 1;
     const complexModulusPa: number[] = [];
     const phaseAngleDeg: number[] = [];
     iso.x.forEach((_, i) => {
       if (!iso.mask[i]) return;
-      const g = gp && gpp ? Math.hypot(gp[i], gpp[i]) : gs?.[i];
-      const d = gp && gpp ? (Math.atan2(gpp[i], gp[i]) * 180) / Math.PI : ph?.[i];
+      const g = gs?.[i];
+      const d = ph?.[i];
       if (g === undefined || d === undefined || !(g > 0) || !Number.isFinite(g)) return;
       if (!Number.isFinite(d)) return;
       complexModulusPa.push(b * g);

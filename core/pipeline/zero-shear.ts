@@ -9,6 +9,7 @@
  * Σ g_i τ_i is reported; otherwise η0 lies beyond the data and the law's extrapolation is
  * reported, flagged. A reported η0 below the bound is always flagged (warning `eta0-below-bound`).
  */
+import { complexModulusOf } from '../data/derived';
 import type { DeformationMode } from '../data/types';
 import type { PronySeries } from '../spectrum/prony-model';
 import { pronySymbols } from '../spectrum/prony-symbols';
@@ -37,7 +38,7 @@ function viscosityPoints(mc: AnalysisMasterCurve): { w: Float64Array; eta: Float
     const e = v?.[i];
     const a = s?.[i];
     const b = l?.[i];
-    eta[i] = e != null ? e : a != null && b != null ? Math.hypot(a, b) / x : NaN;
+    eta[i] = e != null ? e : a != null && b != null ? complexModulusOf(a, b) / x : NaN;
   }
   return { w, eta };
 }

@@ -3,6 +3,7 @@
  * log space, masked points left out, fixed vertical offsets (bT from density or from a previous
  * step) added to the ordinate.
  */
+import { abscissaShiftSign } from '../data/reduction';
 import type { Dataset, QuantityId } from '../data/types';
 import { alphaOf, betaOf, logOrdinate, quantityValues } from './drivers';
 import type { FitProblem, FitSeries } from './problem';
@@ -62,7 +63,7 @@ export function buildProblem(dataset: Dataset, spec: ProblemSpec): FitProblem {
   const temps = spec.active.map((k) => dataset.isotherms[k].temperatureK);
   const order = Int32Array.from(spec.active.keys()).sort((a, b) => temps[a] - temps[b] || a - b);
   const problem: FitProblem = {
-    sigma: spec.sigma ?? (dataset.abscissa === 'time' ? -1 : 1),
+    sigma: spec.sigma ?? abscissaShiftSign(dataset.abscissa),
     alpha: Float64Array.from(spec.drivers, alphaOf),
     beta: Float64Array.from(spec.drivers, betaOf),
     joint: spec.joint,

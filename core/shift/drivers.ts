@@ -6,6 +6,7 @@
  *   vertical.ts) → G' and G'' together when both are present, else the first present of
  *   tan δ, |G*|, G', G'', δ, |η*| (one quantity is enough).
  */
+import { reductionExponents } from '../data/reduction';
 import type { Dataset, QuantityId } from '../data/types';
 import type { VerticalMode } from './types';
 
@@ -31,15 +32,14 @@ export function defaultDrivers(dataset: Dataset, _vertical: VerticalMode): Quant
   return first ? [first] : [];
 }
 
-/** Coefficient of log10 aT in the reduced log ordinate: reduced |η*| = |η*|·bT/aT. */
+/** Coefficient of log10 aT in the reduced log ordinate (the reduction rule, core/data/reduction.ts). */
 export function alphaOf(q: QuantityId): number {
-  return q === 'complexViscosity' ? -1 : 0;
+  return reductionExponents(q).aT;
 }
 
-/** Coefficient of log10 bT in the reduced log ordinate (docs/conventions.md §2). */
+/** Coefficient of log10 bT in the reduced log ordinate (the reduction rule, core/data/reduction.ts). */
 export function betaOf(q: QuantityId): number {
-  if (q === 'tanDelta' || q === 'phaseAngle') return 0;
-  return q === 'creepCompliance' ? -1 : 1;
+  return reductionExponents(q).bT;
 }
 
 /** True when logOrdinate(q, value) is finite, without computing the logarithm. */
@@ -60,19 +60,5 @@ export function logOrdinate(q: QuantityId, value: number): number {
   return value > 0 ? Math.log10(value) : NaN;
 }
 
-/** Values of a quantity, derived from G' and G'' when not stored (tan δ, |G*|, δ). */
-export function quantityValues(
-  q: QuantityId,
-  quantities: Partial<Record<QuantityId, number[]>>,
-): number[] | undefined {
-  const stored = quantities[q];
-  if (stored) return stored;
-  const gp = quantities.storageModulus;
-  const gpp = quantities.lossModulus;
-  if (!gp || !gpp) return undefined;
-  if (q === 'tanDelta') return gp.map((v, i) => gpp[i] / v);
-  // √(G'² + G''²) directly: Math.hypot is several times slower and moduli never overflow here.
-  if (q === 'complexModulus') return gp.map((v, i) => Math.sqrt(v * v + gpp[i] * gpp[i]));
-  if (q === 'phaseAngle') return gp.map((v, i) => (Math.atan2(gpp[i], v) * 180) / Math.PI);
-  return undefined;
-}
+// Values of a quantity, derived from G' and G'' when not stored: one rule in core/data/derived.ts.
+export { quantityValues } from '../data/derived';

@@ -3,6 +3,5 @@ export * from './types';
 export { shiftIsotherms, SHIFT_CONVENTION, COVARIANCE_MAX_ISOTHERMS } from './shift-isotherms';
 export { resolveShiftOptions, ShiftOptionsError } from './options';
 export { defaultDrivers } from './drivers';
-export { masterCurve } from './master-curve';
 export { prepareOverlap, overlapMismatch, NO_OVERLAP_PENALTY } from './overlap';
 export type { PreparedOverlap } from './overlap';

@@ -3,6 +3,7 @@
  * isotherm by a global robust overlap fit, with standard errors, quality figures, superposition
  * checks and warnings. Method and conventions: docs/shifting.md, docs/conventions.md §2 and §4.
  */
+import { SHIFT_CONVENTION } from '../data/conventions';
 import type { Dataset } from '../data/types';
 import { buildProblem } from './build-problem';
 import { activeIsotherms } from './active';
@@ -23,9 +24,8 @@ import { verticalShift } from './vertical';
 import { shiftErrorFloor } from './shift-information';
 import { describeIsotherm, formatC, warn } from './warnings';
 
-export const SHIFT_CONVENTION =
-  'ω_r = aT·ω and t_r = t/aT; aT(Tref) = 1, log10 aT < 0 above Tref; reduced modulus = bT × measured, ' +
-  'reduced compliance = measured / bT, reduced |η*| = |η*|·bT/aT; tan δ and δ are not shifted vertically.';
+// The conventions' wording, once for the whole program: core/data/conventions.ts.
+export { SHIFT_CONVENTION };
 
 /** Standard errors above this many decades are called out. */
 const LARGE_STD_ERR_DECADES = 0.1;

@@ -288,19 +288,3 @@ export interface ShiftResult {
   /** The vertical-shift mode applied and why. */
   vertical: VerticalChoice;
 }
-
-/** One point of the master curve: reduced abscissa and reduced quantities. */
-export interface MasterCurvePoint {
-  isothermId: string;
-  temperatureK: number;
-  /** Index of the point in its isotherm. */
-  pointIndex: number;
-  /** Reduced abscissa: ω_r = aT·ω (rad/s) or t_r = t/aT (s). */
-  reducedX: number;
-  /** Reduced quantities (SI): moduli × bT, compliance / bT, |η*| × bT/aT, tan δ and δ as measured. */
-  values: Partial<Record<QuantityId, number>>;
-  /** False when the point is masked in the dataset. */
-  used: boolean;
-  /** True when the engine flagged the point as an outlier. */
-  outlier: boolean;
-}

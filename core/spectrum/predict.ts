@@ -4,7 +4,9 @@
  * modulus = reduced modulus / bT, measured compliance = reduced compliance × bT,
  * |η*|(T, ω) = |G*_r(ω_r)| / (bT·ω). Every answer carries its extrapolation flags and cautions.
  */
+import { complexModulusOf } from '../data/derived';
 import { extent } from '../data/extent';
+import { measuredFromReduced, reducedAbscissa } from '../data/reduction';
 import { checkShiftModelRange } from '../models/range-check';
 import { shiftModelBand } from '../models/shift-model-band';
 import type { ShiftModelSpec } from '../models/types';
@@ -105,19 +107,34 @@ function valueAt(
   creepOf: () => ReturnType<typeof creepFromProny>,
 ): number {
   const aT = 10 ** log10aT;
+  // The reduction rules inverted (core/data/reduction.ts): read the series at the reduced
+  // abscissa, then turn the reduced value into the one measured at this temperature.
+  const xr = reducedAbscissa(
+    q === 'relaxation' || q === 'creep' ? 'time' : 'angularFrequency',
+    x,
+    aT,
+  );
   switch (q) {
     case 'storage':
-      return pronyStorage(ctx.series, aT * x) / bT;
+      return measuredFromReduced('storageModulus', pronyStorage(ctx.series, xr), aT, bT);
     case 'loss':
-      return pronyLoss(ctx.series, aT * x) / bT;
+      return measuredFromReduced('lossModulus', pronyLoss(ctx.series, xr), aT, bT);
     case 'tanDelta':
-      return pronyLoss(ctx.series, aT * x) / pronyStorage(ctx.series, aT * x);
-    case 'complexViscosity':
-      return Math.hypot(pronyStorage(ctx.series, aT * x), pronyLoss(ctx.series, aT * x)) / (bT * x);
+      return measuredFromReduced(
+        'tanDelta',
+        pronyLoss(ctx.series, xr) / pronyStorage(ctx.series, xr),
+        aT,
+        bT,
+      );
+    case 'complexViscosity': {
+      // reduced |η*| = |G*_r(ω_r)| / ω_r
+      const g = complexModulusOf(pronyStorage(ctx.series, xr), pronyLoss(ctx.series, xr));
+      return measuredFromReduced('complexViscosity', g / xr, aT, bT);
+    }
     case 'relaxation':
-      return pronyRelaxation(ctx.series, x / aT) / bT;
+      return measuredFromReduced('relaxationModulus', pronyRelaxation(ctx.series, xr), aT, bT);
     case 'creep':
-      return creepCompliance(creepOf(), x / aT) * bT;
+      return measuredFromReduced('creepCompliance', creepCompliance(creepOf(), xr), aT, bT);
   }
 }
 
@@ -134,7 +151,7 @@ export function predictQuantity(query: PredictionQuery, ctx: PredictionContext):
   const [band] = shiftModelBand(ctx.shiftModel, [query.temperatureK]);
   const value = valueAt(query.quantity, ctx, x, band.log10aT, bT, creepOf);
   const aT = 10 ** band.log10aT;
-  const reducedX = kind === 'time' ? x / aT : aT * x;
+  const reducedX = reducedAbscissa(kind === 'time' ? 'time' : 'angularFrequency', x, aT);
   // compare in the window's own abscissa (time windows: t_r; frequency windows: ω_r; across kinds ω ≈ 1/t)
   const [flo, fhi] = frequencyWindow(ctx.window);
   const asFrequency = kind === 'time' ? 1 / reducedX : reducedX;

@@ -8,6 +8,7 @@
  * (docs/conventions.md §2: reduced compliance = measured / bT). Noise is multiplicative and seeded, as in
  * syntheticIsotherms. Everything is invented and reproducible from the seed.
  */
+import { measuredFromReduced, reducedAbscissa } from '../data/reduction';
 import type { Dataset, DeformationMode, Isotherm } from '../data/types';
 import type { PronySeries } from '../spectrum/prony-model';
 import type { RetardationSeries } from '../spectrum/creep-from-prony';
@@ -77,7 +78,8 @@ export function syntheticCreep(o: SyntheticCreepOptions): {
     const aT = 10 ** log10aT;
     const compliance = ts.map((t, i) => {
       const sd = pointNoise(o.relativeNoise, o.outliers, k, i);
-      return bT * creepCompliance(retardation, t / aT) * Math.exp(sd * rng.normal());
+      const reduced = creepCompliance(retardation, reducedAbscissa('time', t, aT));
+      return measuredFromReduced('creepCompliance', reduced, aT, bT) * Math.exp(sd * rng.normal());
     });
     return syntheticIsotherm(k, T, ts, { creepCompliance: compliance }, file);
   });

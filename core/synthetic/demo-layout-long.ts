@@ -3,6 +3,7 @@
  * - 'long' (melt): comma-delimited, a header row and a units row under it, LF line ends.
  * - 'ramp' (multi-frequency heating ramp): columns aligned with runs of spaces, units in brackets.
  */
+import { complexModulusOf } from '../data/derived';
 import type { DemoMeasurements, DemoWritten } from './demo-types';
 import { headerLines, paPerUnit } from './demo-header';
 import { formatCelsius, formatSignificant } from './number-text';
@@ -30,7 +31,7 @@ function meltTable(m: DemoMeasurements): { head: string[]; rows: string[] } {
   );
   const rows = m.isotherms.flatMap((iso) =>
     iso.points.map((p) => {
-      const etaPaS = Math.hypot(p.primaryPa, p.lossPa) / p.xSI;
+      const etaPaS = complexModulusOf(p.primaryPa, p.lossPa) / p.xSI;
       return [
         formatCelsius(p.temperatureC, 2),
         formatSignificant(p.xFile, 5),

@@ -4,7 +4,12 @@
  * Conventions as in docs/conventions.md §2: measured at T, G(ω) = G_ref(aT·ω) / bT and G(t) = G_ref(t/aT) / bT.
  */
 import { ZERO_CELSIUS_K } from '../data/temperature';
-import { densityFromExpansion, entropicBT } from '../data/reduction';
+import {
+  densityFromExpansion,
+  entropicBT,
+  measuredFromReduced,
+  reducedAbscissa,
+} from '../data/reduction';
 import { pronyLoss, pronyRelaxation, pronyStorage } from '../spectrum/prony-model';
 import type { DemoMeasurements, DemoPoint, DemoScenario } from './demo-types';
 import { shiftLawLog10aT } from './isotherm-set';
@@ -48,11 +53,16 @@ export function demoModelAt(
   const aT = 10 ** log10aT;
   const bT = 10 ** log10bT;
   if (s.testKind === 'relaxation') {
-    return { primaryPa: pronyRelaxation(s.prony, xSI / aT) / bT, lossPa: Number.NaN };
+    const reduced = pronyRelaxation(s.prony, reducedAbscissa('time', xSI, aT));
+    return {
+      primaryPa: measuredFromReduced('relaxationModulus', reduced, aT, bT),
+      lossPa: Number.NaN,
+    };
   }
+  const wr = reducedAbscissa('angularFrequency', xSI, aT);
   return {
-    primaryPa: pronyStorage(s.prony, aT * xSI) / bT,
-    lossPa: pronyLoss(s.prony, aT * xSI) / bT,
+    primaryPa: measuredFromReduced('storageModulus', pronyStorage(s.prony, wr), aT, bT),
+    lossPa: measuredFromReduced('lossModulus', pronyLoss(s.prony, wr), aT, bT),
   };
 }
 

@@ -2,6 +2,7 @@
  * The invented demo samples as text files and as a Dataset: what `npm run samples` writes to
  * samples/, and what the app can rebuild without reading any file. Pure: no file system here.
  */
+import { complexModulusOf, tanDeltaOf } from '../data/derived';
 import { celsiusToKelvin } from '../data/temperature';
 import type { Dataset, Isotherm, QuantityId } from '../data/types';
 import { maxOf, minOf } from '../data/extent';
@@ -103,10 +104,10 @@ export function demoDataset(sample: DemoSample): Dataset {
       const loss = iso.points.map((p) => p.lossPa);
       quantities.storageModulus = primary;
       quantities.lossModulus = loss;
-      quantities.tanDelta = loss.map((l, i) => l / primary[i]);
+      quantities.tanDelta = loss.map((l, i) => tanDeltaOf(primary[i], l));
       if (s.layout === 'long') {
         quantities.complexViscosity = iso.points.map(
-          (p) => Math.hypot(p.primaryPa, p.lossPa) / p.xSI,
+          (p) => complexModulusOf(p.primaryPa, p.lossPa) / p.xSI,
         );
       }
     }

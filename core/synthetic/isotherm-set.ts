@@ -3,6 +3,7 @@
  * accuracy test and the source of the invented demo samples. Everything is reproducible from the
  * seed. Sign conventions as in docs/conventions.md §2: measured at T, G(ω) = G_ref(aT·ω) / bT.
  */
+import { measuredFromReduced } from '../data/reduction';
 import type { Dataset, DeformationMode, Isotherm, QuantityId, TestKind } from '../data/types';
 import type { PronySeries } from '../spectrum/prony-model';
 import { pronyLoss, pronyRelaxation, pronyStorage } from '../spectrum/prony-model';
@@ -74,8 +75,9 @@ export function syntheticIsotherms(o: SyntheticOptions): {
           s += pronyStorage(c.prony, shifts[j] * w);
           l += pronyLoss(c.prony, shifts[j] * w);
         });
-        gp.push(noisy(s / bT, i));
-        gpp.push(noisy(l / bT, i));
+        // Each component has its own aT (thermorheologically complex); moduli do not depend on it.
+        gp.push(noisy(measuredFromReduced('storageModulus', s, shifts[0], bT), i));
+        gpp.push(noisy(measuredFromReduced('lossModulus', l, shifts[0], bT), i));
       });
       quantities.storageModulus = gp;
       quantities.lossModulus = gpp;
@@ -84,7 +86,7 @@ export function syntheticIsotherms(o: SyntheticOptions): {
       quantities.relaxationModulus = xs.map((t, i) => {
         let s = 0;
         o.components.forEach((c, j) => (s += pronyRelaxation(c.prony, t / shifts[j])));
-        return noisy(s / bT, i);
+        return noisy(measuredFromReduced('relaxationModulus', s, shifts[0], bT), i);
       });
     }
     return syntheticIsotherm(k, T, xs, quantities, file);

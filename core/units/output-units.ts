@@ -10,6 +10,18 @@ export const MODULUS_UNITS: readonly ModulusUnit[] = ['Pa', 'kPa', 'MPa', 'GPa']
 
 const FACTOR: Record<ModulusUnit, number> = { Pa: 1, kPa: 1e3, MPa: 1e6, GPa: 1e9 };
 
+/** The frequency units shown and exported (FrequencyUnit below); the data stay in rad/s. */
+export const FREQUENCY_UNITS: readonly FrequencyUnit[] = ['rad/s', 'Hz'];
+
+/** The units an analysis is shown and exported in (saved with it). */
+export interface DisplayUnits {
+  modulus: ModulusUnit;
+  frequency: FrequencyUnit;
+}
+
+/** What the app showed before display units existed (and shows for SI data). */
+export const SI_DISPLAY: DisplayUnits = { modulus: 'Pa', frequency: 'rad/s' };
+
 /** Pascals per unit: value_in_unit = value_Pa / modulusFactor(unit). */
 export function modulusFactor(unit: ModulusUnit): number {
   return FACTOR[unit];
@@ -52,4 +64,9 @@ export type FrequencyUnit = 'rad/s' | 'Hz';
 /** Radians per second to the chosen frequency unit: f = ω/(2π) for Hz, ω itself for rad/s. */
 export function toOutputFrequency(omegaRadPerS: number, unit: FrequencyUnit): number {
   return unit === 'Hz' ? omegaRadPerS / (2 * Math.PI) : omegaRadPerS;
+}
+
+/** Factor from rad/s to the chosen frequency unit: 1/(2π) for Hz, 1 for rad/s. */
+export function outputFrequencyFactor(unit: FrequencyUnit): number {
+  return unit === 'Hz' ? 1 / (2 * Math.PI) : 1;
 }

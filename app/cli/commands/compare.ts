@@ -19,7 +19,7 @@ import type { Comparison } from '@core/compare';
 import { buildMasterCurve } from '@core/pipeline';
 import { settingTemperatureK, type Settings } from '@core/pipeline';
 import type { Analysis } from '@core/pipeline';
-import { parseAnalysis, ANALYSIS_FILE_SUFFIX } from '../../renderer/src/document/analysis-file.ts';
+import { parseAnalysis, ANALYSIS_FILE_SUFFIX } from '@core/document';
 import { addSampleOptions, resolveSettings, type SampleOptionValues } from '../sample-options.ts';
 import { readInputs } from '../io/read-inputs.ts';
 import { analyseSample } from '../run-sample.ts';

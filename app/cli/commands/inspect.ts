@@ -6,7 +6,7 @@ import { basename } from 'node:path';
 import { Command, Option } from 'commander';
 import { kelvinToCelsius, quantitySymbol } from '@core/data';
 import type { ColumnMapping, ColumnRole, ImportResult } from '@core/io';
-import { COLUMN_ROLES, expandWorkbooks, ImportError, importFiles } from '@core/io';
+import { COLUMN_ROLES, expandWorkbooks, ImportError, importFiles, layoutText } from '@core/io';
 import { parseTemperatureText } from '@core/units';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
@@ -145,12 +145,6 @@ const DELIMITER_WORDS = {
   tab: 'tab',
   spaces: 'spaces',
 } as const;
-const LAYOUT_WORDS = {
-  long: 'long table (temperature column)',
-  perIsotherm: 'one isotherm',
-  wide: 'wide table (one column per temperature)',
-} as const;
-
 /** The inspection as text for people. */
 export function inspectionText(r: ImportResult): string {
   const v = inspection(r);
@@ -165,7 +159,7 @@ export function inspectionText(r: ImportResult): string {
         : '';
     out.push(
       '',
-      `${f.file}: ${LAYOUT_WORDS[f.layout]}${t}; delimiter ${DELIMITER_WORDS[f.delimiter]}, decimal "${f.decimalSeparator}", ${f.encoding}; ` +
+      `${f.file}: ${layoutText(f.layout).name}${t}; delimiter ${DELIMITER_WORDS[f.delimiter]}, decimal "${f.decimalSeparator}", ${f.encoding}; ` +
         `header row ${f.headerRow || '–'}, units row ${f.unitsRow || '–'}; ${f.usedRows} of ${f.dataRows} rows used`,
     );
     for (const c of f.columns) {

@@ -10,22 +10,19 @@
  */
 import { createHash, randomBytes } from 'node:crypto';
 import {
-  closeSync,
   existsSync,
-  fsyncSync,
   mkdirSync,
-  openSync,
   readdirSync,
   readFileSync,
   renameSync,
   rmSync,
   statSync,
-  writeSync,
 } from 'node:fs';
 import { basename, dirname, join, resolve } from 'node:path';
 import { CliError } from '../cli-error.ts';
 import { EXIT } from '../exit-codes.ts';
 import { THERMOSHIFT_VERSION } from '@core/pipeline';
+import { writeFlushedSync } from '../../shared/flushed-write.ts';
 
 /** The manifest written last into every output set. */
 export const MANIFEST_NAME = 'thermoshift-manifest.json';
@@ -86,15 +83,7 @@ export function assertOutputSetWritable(dir: string, force: boolean): void {
 }
 
 function writeFlushed(path: string, content: string): void {
-  const fd = openSync(path, 'wx');
-  try {
-    const bytes = Buffer.from(content, 'utf8');
-    let done = 0;
-    while (done < bytes.length) done += writeSync(fd, bytes, done, bytes.length - done);
-    fsyncSync(fd);
-  } finally {
-    closeSync(fd);
-  }
+  writeFlushedSync(path, Buffer.from(content, 'utf8'));
 }
 
 /** Writes the set into `dir` as a whole; returns the paths written (manifest last). */

@@ -8,6 +8,7 @@ import { describe, expect, it } from 'vitest';
 import type { Dataset } from '../../../core/data/types';
 import { reduceToMasterCurve } from '../../../core/pipeline/reduce';
 import { shiftIsotherms } from '../../../core/shift';
+import { analysisCurvesOf } from '../../helpers/analysis-curves';
 import { expectAbsClose } from '../../helpers/assert-close';
 import { expectShiftsWithin, inventedMelt, maxError } from './fixtures';
 
@@ -45,17 +46,7 @@ describe('shiftIsotherms() at scale', () => {
         1e-12,
         'diagonal = s.e.²',
       );
-      const curves = r.curves.map((c) => ({
-        isothermId: c.id,
-        temperatureK: c.temperatureK,
-        log10aT: c.log10aT,
-        log10aTStdErr: c.log10aTStdErr,
-        log10bT: c.log10bT,
-        log10bTStdErr: c.log10bTStdErr,
-        included: c.included,
-        qualityRmsDecades: c.rmsResidualDecades,
-      }));
-      const reduced = reduceToMasterCurve(d.dataset, curves);
+      const reduced = reduceToMasterCurve(d.dataset, analysisCurvesOf(r));
       expect(reduced.reducedX).toHaveLength(1_000_000);
       expect(reduced.reducedX.every((x, i) => i === 0 || x >= reduced.reducedX[i - 1])).toBe(true);
     },

@@ -5,7 +5,7 @@
  */
 import { onScopeDispose, ref, watch, type Ref } from 'vue';
 import type { AnalysisDocument } from '../document/analysis-document';
-import { serializeAnalysis } from '../document/analysis-file';
+import { serializeAnalysis } from '@core/document';
 import type { FileAccess } from '../platform/file-access';
 
 export interface UseAutosaveOptions {

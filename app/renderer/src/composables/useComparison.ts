@@ -12,7 +12,7 @@ import type { Analysis } from '@core/pipeline';
 import { compareAnalyses, parseSpecification, type Specification } from '@core/compare';
 import type { Comparison } from '@core/compare';
 import { lotReleaseFiles } from '@core/synthetic';
-import { parseAnalysis, ANALYSIS_FILE_SUFFIX } from '../document/analysis-file';
+import { parseAnalysis, ANALYSIS_FILE_SUFFIX } from '@core/document';
 import type { TextFile } from '../platform/file-access';
 
 export interface ComparedEntry {

@@ -6,12 +6,8 @@ import { ref, type Ref, type ShallowRef } from 'vue';
 import type { Analysis } from '@core/pipeline';
 import type { AnalysisDocument } from '../document/analysis-document';
 import { newDocument } from '../document/analysis-document';
-import {
-  ANALYSIS_FORMAT,
-  analysisFileName,
-  parseAnalysis,
-  serializeAnalysis,
-} from '../document/analysis-file';
+import { ANALYSIS_FORMAT, parseAnalysis, serializeAnalysis } from '@core/document';
+import { analysisFileName } from '../document/analysis-file';
 import { exportName, fileStem } from '../exports/export-files';
 import { bytesToBase64, zipFiles, type ZipEntry } from '../exports/zip-exports';
 import { unitsFromImport } from '../format/display-units';

@@ -4,27 +4,13 @@
  * computes. Stored immutably: every edit makes a new document (history.ts keeps the old ones).
  */
 import type { DataWarning, Dataset } from '@core/data';
-import type { AnalysisOptions } from '@core/pipeline';
+import type { DocumentOptions, SavedAnalysis } from '@core/document';
 import { SI_DISPLAY, type DisplayUnits } from '../format/display-units';
 
-/** The serialisable options (no progress callback; import warnings are kept beside them). */
-export type DocumentOptions = Omit<
-  AnalysisOptions,
-  'onProgress' | 'importWarnings' | 'warmStartLog10aT' | 'heldExpansion'
->;
+export type { DocumentOptions };
 
-export interface AnalysisDocument {
-  dataset: Dataset;
-  options: DocumentOptions;
-  /** True for the invented demo data, so the UI keeps saying so. */
-  invented: boolean;
-  /** Short description of where the data came from, shown in the title bar. */
-  origin: string;
-  /** Problems the importer found in the files (shown with the analysis warnings). */
-  importWarnings: DataWarning[];
-  /** Units the app shows and exports in (the data stay SI). */
-  display: DisplayUnits;
-}
+/** The document is what an analysis file holds (core/document/analysis-file.ts). */
+export type AnalysisDocument = SavedAnalysis;
 
 export function newDocument(
   dataset: Dataset,

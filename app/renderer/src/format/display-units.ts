@@ -6,19 +6,21 @@
  */
 import type { AbscissaKind } from '@core/data';
 import type { ImportResult } from '@core/io';
-import { MODULUS_UNITS, modulusFactor, type ModulusUnit } from '@core/units';
+import {
+  FREQUENCY_UNITS,
+  MODULUS_UNITS,
+  SI_DISPLAY,
+  modulusFactor,
+  outputFrequencyFactor,
+  toOutputFrequency,
+  type DisplayUnits,
+  type FrequencyUnit,
+  type ModulusUnit,
+} from '@core/units';
 
-export type FrequencyUnit = 'rad/s' | 'Hz';
-export const FREQUENCY_UNITS: readonly FrequencyUnit[] = ['rad/s', 'Hz'];
-export { MODULUS_UNITS, type ModulusUnit };
-
-export interface DisplayUnits {
-  modulus: ModulusUnit;
-  frequency: FrequencyUnit;
-}
-
-/** What the app showed before display units existed (and shows for SI data). */
-export const SI_DISPLAY: DisplayUnits = { modulus: 'Pa', frequency: 'rad/s' };
+// The units themselves are core's (core/units/output-units.ts), saved with every analysis.
+export { FREQUENCY_UNITS, MODULUS_UNITS, SI_DISPLAY, type DisplayUnits, type FrequencyUnit };
+export type { ModulusUnit };
 
 /** The units the imported files used: the first modulus column's unit, Hz if f was given. */
 export function unitsFromImport(r: Pick<ImportResult, 'files'>): DisplayUnits {
@@ -46,7 +48,7 @@ export function toDisplay(
       return { value: value * f, unit: `1/${u.modulus}` };
     case 'rad/s':
       return u.frequency === 'Hz'
-        ? { value: value / (2 * Math.PI), unit: 'Hz' }
+        ? { value: toOutputFrequency(value, 'Hz'), unit: 'Hz' }
         : { value, unit: 'rad/s' };
     default:
       return { value, unit: siUnit };
@@ -55,5 +57,5 @@ export function toDisplay(
 
 /** Factor from the stored abscissa (ω in rad/s, t in s) to the displayed one. */
 export function abscissaFactor(kind: AbscissaKind, u: DisplayUnits): number {
-  return kind === 'angularFrequency' && u.frequency === 'Hz' ? 1 / (2 * Math.PI) : 1;
+  return kind === 'angularFrequency' ? outputFrequencyFactor(u.frequency) : 1;
 }

@@ -1,12 +1,35 @@
+/**
+ * reduceToMasterCurve() fed straight from a shift result: the tests of the former
+ * core/shift/master-curve.ts (a second master-curve builder, removed), on the one kept builder.
+ */
 import { describe, expect, it } from 'vitest';
-import { masterCurve, shiftIsotherms } from '../../../core/shift';
+import type { Dataset, QuantityId } from '../../../core/data/types';
+import { reduceToMasterCurve } from '../../../core/pipeline/reduce';
+import { shiftIsotherms } from '../../../core/shift';
+import type { ShiftResult } from '../../../core/shift';
 import { pronyLoss, pronyRelaxation, pronyStorage } from '../../../core/spectrum/prony-model';
 import { syntheticIsotherms } from '../../../core/synthetic';
+import { analysisCurvesOf } from '../../helpers/analysis-curves';
 import { expectRelClose } from '../../helpers/assert-close';
-import { MELT, MELT_ARRHENIUS, RELAX_WLF, RELAXING } from './fixtures';
+import { MELT, MELT_ARRHENIUS, RELAX_WLF, RELAXING } from '../shift/fixtures';
 
-describe('masterCurve()', () => {
-  it('masterCurve() of noise-free isotherms lies on the reference curve G(ω_r) (ω_r = aT·ω, × bT)', () => {
+/** The master curve of a shift result, as one record per point. */
+function masterCurve(dataset: Dataset, result: ShiftResult) {
+  const curves = analysisCurvesOf(result);
+  const outliers = Object.fromEntries(result.curves.map((c) => [c.id, c.outlierPoints]));
+  const mc = reduceToMasterCurve(dataset, curves, outliers);
+  return mc.reducedX.map((reducedX, i) => ({
+    reducedX,
+    isothermId: mc.isothermId[i],
+    outlier: mc.outlier[i],
+    values: Object.fromEntries(
+      Object.entries(mc.quantities).map(([q, v]) => [q, v![i] ?? undefined]),
+    ) as Partial<Record<QuantityId, number>>,
+  }));
+}
+
+describe('reduceToMasterCurve() from a shift result', () => {
+  it('reduceToMasterCurve() of noise-free isotherms lies on the reference curve G(ω_r) (ω_r = aT·ω, × bT)', () => {
     const { dataset } = syntheticIsotherms({
       ...MELT_ARRHENIUS.options,
       relativeNoise: 0,
@@ -38,7 +61,7 @@ describe('masterCurve()', () => {
     }
   });
 
-  it('masterCurve() reduces time as t/aT for relaxation data', () => {
+  it('reduceToMasterCurve() reduces time as t/aT for relaxation data', () => {
     const { dataset } = syntheticIsotherms({ ...RELAX_WLF.options, relativeNoise: 0, seed: 1 });
     const result = shiftIsotherms(dataset, { referenceK: 300, toleranceDecades: 1e-6 });
     for (const p of masterCurve(dataset, result))
@@ -50,7 +73,7 @@ describe('masterCurve()', () => {
       );
   });
 
-  it('masterCurve() leaves out excluded isotherms and keeps masks and outlier flags', () => {
+  it('reduceToMasterCurve() leaves out excluded isotherms and masked points, and keeps outlier flags', () => {
     const { dataset } = syntheticIsotherms({
       ...MELT_ARRHENIUS.options,
       relativeNoise: 0.02,
@@ -60,17 +83,20 @@ describe('masterCurve()', () => {
     const result = shiftIsotherms(dataset, { referenceK: 463.15, excluded: ['T10'] });
     const pts = masterCurve(dataset, result);
     expect(pts.some((p) => p.isothermId === 'T10')).toBe(false);
-    expect(pts.find((p) => p.isothermId === 'T01' && p.pointIndex === 3)!.used).toBe(false);
-    const flagged = result.curves.flatMap((c) => c.outlierPoints.map((i) => `${c.id}:${i}`));
+    // The removed builder kept a masked point with used = false; this one leaves it out.
+    expect(pts.filter((p) => p.isothermId === 'T01').length).toBe(
+      dataset.isotherms[0].x.length - 1,
+    );
+    const flagged = result.curves.flatMap((c) => c.outlierPoints.map(() => c.id));
     expect(
       pts
         .filter((p) => p.outlier)
-        .map((p) => `${p.isothermId}:${p.pointIndex}`)
+        .map((p) => p.isothermId)
         .sort(),
-    ).toEqual(flagged.filter((f) => !f.startsWith('T10')).sort());
+    ).toEqual(flagged.filter((f) => f !== 'T10').sort());
   });
 
-  it('masterCurve() of a result with nothing included is empty', () => {
+  it('reduceToMasterCurve() of a result with nothing included is empty', () => {
     const { dataset } = syntheticIsotherms({
       ...MELT_ARRHENIUS.options,
       temperaturesK: [480],

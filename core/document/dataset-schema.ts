@@ -3,7 +3,7 @@
  * damaged or hand-edited file gives a message naming the bad field instead of a broken screen.
  */
 import { z } from 'zod';
-import { QUANTITY_IDS, type QuantityId } from '@core/data';
+import { QUANTITY_IDS, type QuantityId } from '../data/types';
 
 const num = z.number().or(z.null().transform(() => Number.NaN));
 
