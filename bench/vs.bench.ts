@@ -11,7 +11,8 @@
  * number of isotherms and of points. Last, two big runs of Thermoshift alone (the yardstick is
  * not timed on them): 10⁶ points (500 × 2000, Prony series off) and 10,000 isotherms of three
  * points. Options after `vs`: `--repeat N` (whole-process runs per tool and size, the fastest is
- * kept; default 1), `--only LABEL` (one case), `--no-big` (skip the big runs).
+ * kept; default 1), `--median` (keep the median of the N runs instead), `--only LABEL` (one
+ * case), `--no-big` (skip the big runs).
  */
 import { spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
@@ -123,13 +124,15 @@ function buildArgs(path: string, extra: string[]): string[] {
   ];
 }
 
+/**
+ * `runs` whole-process runs of one tool: the fastest, or with `--median` the median run (on a
+ * machine shared with other jobs the median is the steadier figure).
+ */
 function fastest(runs: number, make: () => ProcessRun): ProcessRun {
-  let best: ProcessRun | null = null;
-  for (let i = 0; i < runs; i++) {
-    const r = make();
-    if (!best || r.seconds < best.seconds) best = r;
-  }
-  return best!;
+  const all: ProcessRun[] = [];
+  for (let i = 0; i < runs; i++) all.push(make());
+  all.sort((a, b) => a.seconds - b.seconds);
+  return process.argv.includes('--median') ? all[(all.length - 1) >> 1] : all[0];
 }
 
 /** Largest |estimated − true| over the isotherms matched by temperature (within 0.01 K). */

@@ -84,7 +84,15 @@ export function assembleIsotherms(
     let idx = order.subarray(start[b], start[b + 1]);
     let ascending = true;
     for (let k = 1; k < idx.length && ascending; k++) ascending = p.x[idx[k]] >= p.x[idx[k - 1]];
-    if (!ascending) idx = Int32Array.from(idx).sort((a, c) => p.x[a] - p.x[c] || a - c);
+    if (!ascending) {
+      // a sweep from high to low x is put in order by reversing it (what the sort gives when
+      // every x is below the one before); anything else is sorted
+      let descending = true;
+      for (let k = 1; k < idx.length && descending; k++) descending = p.x[idx[k]] < p.x[idx[k - 1]];
+      idx = descending
+        ? Int32Array.from(idx).reverse()
+        : Int32Array.from(idx).sort((a, c) => p.x[a] - p.x[c] || a - c);
+    }
     if (bands[b].cut && !reportedCut.has(p.file[idx[0]])) {
       reportedCut.add(p.file[idx[0]]);
       warn(

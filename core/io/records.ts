@@ -116,6 +116,8 @@ export function buildRecords(
   };
   const xWord = plan.abscissa === 'time' ? 'time' : 'frequency';
   const qArrays = [...groups.values()].map((list) => list.map((e) => out.quantities.get(e.q)!));
+  // the groups as an array: the loop below visits them once per row
+  const groupList = [...groups];
   // One-isotherm files made of several temperature blocks: the block's temperature applies.
   const starts = plan.layout === 'perIsotherm' ? blocks.starts : [];
   let block = -1;
@@ -168,7 +170,8 @@ export function buildRecords(
     }
     let used = false;
     let g = 0;
-    for (const [groupT, list] of groups) {
+    for (let gi = 0; gi < groupList.length; gi++) {
+      const [groupT, list] = groupList[gi];
       const arrays = qArrays[g++];
       const T = tc ? rowT : block >= 0 ? blockT : groupT;
       let ok = true;

@@ -73,6 +73,84 @@ function isPlainNumberChar(c: number): boolean {
   return (c >= 48 && c <= 57) || c === 46 || c === 45 || c === 43 || c === 101 || c === 69;
 }
 
+/** 10⁰ … 10²²: every one exact in a double (Clinger's fast path, see plainNumber). */
+const POW10 = [
+  1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15, 1e16, 1e17,
+  1e18, 1e19, 1e20, 1e21, 1e22,
+];
+
+/** Where the last readPlainNumber stopped: the first character not part of the number. */
+let readEnd = 0;
+
+/**
+ * Reads a number in place from `from` (before `to`), without making a string: [+-] digits
+ * [. or , digits] [e [+-] digits], stopping at the first character that does not continue it
+ * (its position is left in `readEnd`). Only numbers of at most 15 significant digits with a decimal
+ * exponent within ±22 are read, else NaN. Then the digits m are an exact integer and m·10^e (or
+ * m/10^−e) is one correctly rounded operation on exact operands, so the result is the correctly
+ * rounded value of the decimal, exactly what Number() returns for the same text (Clinger, "How
+ * to read floating point numbers accurately", PLDI 1990: the fast path). `comma`: "," is a
+ * decimal separator too (as `cell.replace(',', '.')` makes it). The caller takes the value only
+ * when the cell ends at `readEnd`; any other cell is read as a string, as before.
+ */
+function readPlainNumber(text: string, from: number, to: number, comma: boolean): number {
+  let i = from;
+  let negative = false;
+  let c = i < to ? text.charCodeAt(i) : -1;
+  if (c === 45 || c === 43) {
+    negative = c === 45;
+    c = ++i < to ? text.charCodeAt(i) : -1;
+  }
+  let m = 0;
+  let digits = 0; // significant digits taken into m
+  let any = false;
+  let fraction = 0; // digits after the separator
+  let separator = false;
+  for (; i < to; c = ++i < to ? text.charCodeAt(i) : -1) {
+    if (c >= 48 && c <= 57) {
+      any = true;
+      if (separator) fraction++;
+      if (m === 0 && c === 48) continue;
+      if (++digits > 15) return NaN;
+      m = m * 10 + (c - 48);
+    } else if ((c === 46 || (c === 44 && comma)) && !separator) separator = true;
+    else break;
+  }
+  if (!any) return NaN;
+  let exponent = 0;
+  if (c === 101 || c === 69) {
+    c = ++i < to ? text.charCodeAt(i) : -1;
+    let expNegative = false;
+    if (c === 45 || c === 43) {
+      expNegative = c === 45;
+      c = ++i < to ? text.charCodeAt(i) : -1;
+    }
+    if (!(c >= 48 && c <= 57)) return NaN;
+    for (; c >= 48 && c <= 57; c = ++i < to ? text.charCodeAt(i) : -1) {
+      exponent = exponent * 10 + (c - 48);
+      if (exponent > 1000) return NaN;
+    }
+    if (expNegative) exponent = -exponent;
+  }
+  readEnd = i;
+  const e = exponent - fraction;
+  let v: number;
+  if (m === 0) v = 0;
+  else if (e >= 0 && e <= 22) v = m * POW10[e];
+  else if (e < 0 && e >= -22) v = m / POW10[-e];
+  else return NaN;
+  return negative ? -v : v;
+}
+
+/** Whether the cell is plain (see scanTable's store): digits, signs, ".", exponents, "," with a decimal comma. */
+function isPlainCell(cell: string, decimalComma: boolean): boolean {
+  for (let i = 0; i < cell.length; i++) {
+    const c = cell.charCodeAt(i);
+    if (!isPlainNumberChar(c) && !(c === 44 && decimalComma)) return false;
+  }
+  return true;
+}
+
 /**
  * Reads the table body from `start` (offset of the first data row, whose line is `firstLine`).
  * Fast path: unquoted lines are cut at the delimiter by hand and plain numeric cells go straight to
@@ -102,6 +180,9 @@ export function scanTable(
           ? 9
           : -1;
   const spaces = delim < 0;
+  const lastWanted = spec.wanted.lastIndexOf(true);
+  // a comma delimiter never sits inside a cell, whatever the decimal mark
+  const commaDecimal = spec.decimalComma && delim !== 44;
   const quoted = new QuotedLines(text, spec.delimiter);
   const decimalComma = spec.decimalComma;
   let rows = 0;
@@ -168,9 +249,36 @@ export function scanTable(
           if (c >= cells.length) flag(c, 'missing', '');
           else store(c, cells[c], false);
         }
+      } else if (!spaces) {
+        // Cells read in place (readPlainNumber); a cell it cannot read goes the string way.
+        let col = 0;
+        let i = pos;
+        while (col <= lastWanted) {
+          const out = values[col];
+          let end = -1;
+          if (out) {
+            const v = readPlainNumber(text, i, stop, commaDecimal);
+            if (v === v && (readEnd === stop || text.charCodeAt(readEnd) === delim)) {
+              out[rows] = v;
+              end = readEnd;
+            }
+          }
+          if (end < 0) {
+            end = i;
+            while (end < stop && text.charCodeAt(end) !== delim) end++;
+            if (out) {
+              const cell = text.slice(i, end);
+              store(col, cell, isPlainCell(cell, decimalComma));
+            }
+          }
+          col++;
+          if (end >= stop) break;
+          i = end + 1;
+        }
+        for (; col < ncols; col++) if (values[col]) flag(col, 'missing', '');
       } else {
         let col = 0;
-        let cellStart = spaces ? k : pos;
+        let cellStart = k;
         let plain = true;
         let i = cellStart;
         for (; i <= stop && col < ncols; i++) {

@@ -158,6 +158,37 @@ export function weightingOfPoints(
   diagonalReason?: string,
 ): ShiftWeighting {
   if (!covariance) return shiftWeighting(pts.sigma, null, diagonalReason);
+  // The shift-model fits of one analysis (WLF, Arrhenius, polynomial) weight the same points with
+  // the same covariance: the factorisations (O(n³), a few tens of ms at 500 isotherms) are made
+  // once per covariance and set of points. The weighting is read only, so sharing it is safe.
+  const cached = weightingCache.get(covariance);
+  const hit = cached?.find(
+    (e) =>
+      e.diagonalReason === diagonalReason &&
+      sameNumbers(e.index, pts.index) &&
+      sameNumbers(e.sigma, pts.sigma),
+  );
+  if (hit) return hit.weighting;
   const pick = pts.index.map((i) => pts.index.map((j) => covariance[i]?.[j] ?? NaN));
-  return shiftWeighting(pts.sigma, pick, diagonalReason);
+  const weighting = shiftWeighting(pts.sigma, pick, diagonalReason);
+  const entry = { index: [...pts.index], sigma: [...pts.sigma], diagonalReason, weighting };
+  if (cached) cached.push(entry);
+  else weightingCache.set(covariance, [entry]);
+  return weighting;
+}
+
+interface CachedWeighting {
+  index: number[];
+  sigma: number[];
+  diagonalReason: string | undefined;
+  weighting: ShiftWeighting;
+}
+
+/** Weightings by the covariance they were made from (dropped with it). */
+const weightingCache = new WeakMap<object, CachedWeighting[]>();
+
+function sameNumbers(a: readonly number[], b: readonly number[]): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (!Object.is(a[i], b[i])) return false;
+  return true;
 }

@@ -8,6 +8,7 @@ import type { AbscissaKind, Dataset } from '../data/types';
 import { QUANTITY_IDS } from '../data/types';
 import { reducedAbscissa, reductionFactor } from '../data/reduction';
 import type { AnalysisCurve, AnalysisMasterCurve } from './types';
+import { stableOrder } from './stable-order';
 
 export function reduceToMasterCurve(
   dataset: Dataset,
@@ -50,9 +51,7 @@ export function reduceToMasterCurve(
     }
   });
   // stable order by x (ties keep the isotherm order, as the former sort of rows did)
-  const order = new Uint32Array(total);
-  for (let i = 0; i < total; i++) order[i] = i;
-  order.sort((a, b) => xs[a] - xs[b] || a - b);
+  const order = stableOrder(xs);
   const quantities: AnalysisMasterCurve['quantities'] = {};
   present.forEach((q, j) => {
     const v = values[j];

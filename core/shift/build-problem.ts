@@ -9,6 +9,7 @@ import { alphaOf, betaOf, logOrdinate, quantityValues } from './drivers';
 import type { FitProblem, FitSeries } from './problem';
 import { buildSeries } from './series';
 import { candidatePairs } from './pairs';
+import { informativePairs } from './informative-pairs';
 
 export interface ProblemSpec {
   /** Dataset indices of the isotherms in the fit. */
@@ -72,6 +73,6 @@ export function buildProblem(dataset: Dataset, spec: ProblemSpec): FitProblem {
     order,
     minOverlapPoints: spec.minOverlapPoints,
   };
-  problem.pairs = candidatePairs(problem);
+  problem.pairs = informativePairs(problem, candidatePairs(problem), temps);
   return problem;
 }

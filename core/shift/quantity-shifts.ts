@@ -15,6 +15,7 @@ import { buildProblem } from './build-problem';
 import { DISAGREE_DECADES } from './checks';
 import type { OffsetFit } from './fit-offsets';
 import { candidatePairs } from './pairs';
+import { informativePairs } from './informative-pairs';
 import type { FitProblem } from './problem';
 import { offsetStdErrors } from './covariance';
 import type { SolveSettings } from './solve';
@@ -63,7 +64,11 @@ function singleDriver(
       alpha: fit.problem.alpha.subarray(d, d + 1),
       beta: fit.problem.beta.subarray(d, d + 1),
     };
-    p.pairs = candidatePairs(p);
+    p.pairs = informativePairs(
+      p,
+      candidatePairs(p),
+      active.map((k) => dataset.isotherms[k].temperatureK),
+    );
   } else
     p = buildProblem(dataset, {
       active,

@@ -93,6 +93,17 @@ export function solveOffsets(
     if (sameSets(next, sets)) break;
     let moved = 0;
     for (const i of free) moved = Math.max(moved, Math.abs(theta[i] - before[i]));
+    // A later round that moved no shift by the tolerance has found the optimum of points compared
+    // that differ from the last ones only at the ends of the overlaps (a point that crosses the
+    // other curve's end and back): another round would move the shifts by as little again. The
+    // normal equations at θ are those of this round's points.
+    if (round >= 2 && moved < s.toleranceDecades) break;
+    // Out of iterations: the fit stops here, and re-evaluating with the new points would be lost.
+    if (iterations >= s.maxIterations) {
+      outcome.converged = false;
+      outcome.reason = `iteration limit (${s.maxIterations})`;
+      break;
+    }
     sets = next;
     outcome.cur = evaluate(theta, sets);
     if (round >= MAX_ROUNDS) {
@@ -100,11 +111,6 @@ export function solveOffsets(
         outcome.converged = false;
         outcome.reason = `the points compared still changed after ${MAX_ROUNDS} rounds (last round moved ${moved.toPrecision(2)} decades)`;
       }
-      break;
-    }
-    if (iterations >= s.maxIterations) {
-      outcome.converged = false;
-      outcome.reason = `iteration limit (${s.maxIterations})`;
       break;
     }
   }

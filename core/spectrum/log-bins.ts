@@ -56,12 +56,15 @@ export function logBins(
   const stride = 1 + q * SUMS;
   let slots = 0;
   const idx: number[] = [];
+  // a sorted curve stays in one bin for many points: look the slot up only when the bin changes
+  let lastB = NaN;
+  let lastS = -1;
   for (let i = 0; i < x.length; i++) {
     const xi = x[i];
     if (!(xi > 0) || !Number.isFinite(xi)) continue;
     const lx = Math.log10(xi);
     const b = Math.floor(lx * binsPerDecade);
-    let s = slotOf.get(b);
+    let s = b === lastB ? lastS : slotOf.get(b);
     if (s === undefined) {
       s = slots++;
       slotOf.set(b, s);
@@ -72,6 +75,8 @@ export function logBins(
         sums = bigger;
       }
     }
+    lastB = b;
+    lastS = s;
     const base = s * stride;
     let any = false;
     for (let k = 0; k < q; k++) {

@@ -176,11 +176,15 @@ export function fitProny(curve: ReducedCurve, options: PronyFitOptions = {}): Pr
   let min = Infinity;
   let max = -Infinity;
   let used = 0;
+  // when the densest run holds every bin, every usable point is inside it: no log10 needed
+  const everyBin = run.first === 0 && run.last === bins.index.length - 1;
   for (let i = 0; i < n; i++) {
     const x = curve.x[i];
     if (!(x > 0) || !Number.isFinite(x)) continue;
-    const b = Math.floor(Math.log10(x) * o.binsPerDecade);
-    if (b < loIdx || b > hiIdx) continue;
+    if (!everyBin) {
+      const b = Math.floor(Math.log10(x) * o.binsPerDecade);
+      if (b < loIdx || b > hiIdx) continue;
+    }
     if (!kinds.some((k, q) => present[q] && ys[q][i] > 0 && Number.isFinite(ys[q][i]))) continue;
     used++;
     if (x < min) min = x;
@@ -304,13 +308,17 @@ function errors(
   max: number,
 ): PronyFitError {
   const acc: Record<Kind, [number, number]> = { storage: [0, 0], loss: [0, 0], relaxation: [0, 0] };
-  for (let i = 0; i < curve.x.length; i++) {
-    const x = curve.x[i];
-    if (!(x >= min && x <= max)) continue;
-    kinds.forEach((k, q) => {
-      if (!present[q]) return;
-      const yv = curve[k]![i];
-      if (!(yv > 0) || !Number.isFinite(yv)) return;
+  // plain loops (no closure per point): this pass visits every point of the master curve
+  for (let q = 0; q < kinds.length; q++) {
+    if (!present[q]) continue;
+    const k = kinds[q];
+    const ys = curve[k]!;
+    const a = acc[k];
+    for (let i = 0; i < curve.x.length; i++) {
+      const x = curve.x[i];
+      if (!(x >= min && x <= max)) continue;
+      const yv = ys[i];
+      if (!(yv > 0) || !Number.isFinite(yv)) continue;
       const m =
         k === 'storage'
           ? pronyStorage(s, x)
@@ -318,9 +326,9 @@ function errors(
             ? pronyLoss(s, x)
             : pronyRelaxation(s, x);
       const e = m / yv - 1;
-      acc[k][0] += e * e;
-      acc[k][1]++;
-    });
+      a[0] += e * e;
+      a[1]++;
+    }
   }
   const rms = (k: Kind): number => (acc[k][1] ? Math.sqrt(acc[k][0] / acc[k][1]) : NaN);
   return { storageRms: rms('storage'), lossRms: rms('loss'), relaxationRms: rms('relaxation') };

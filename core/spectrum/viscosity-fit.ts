@@ -66,10 +66,10 @@ const COX_MERZ =
   'η0 from the oscillatory master curve. Reading it as steady-shear viscosity η(γ̇) relies on the Cox–Merz rule (Cox & Merz 1958), which is empirical: confirm by steady-shear testing.';
 
 function evaluate(model: ViscosityModel, p: number[], lw: number): number {
-  const [logEta0, logLam, e, aRaw] = p;
-  const x = 10 ** (logLam + lw); // λω
-  if (model === 'cross') return logEta0 - Math.log10(1 + x ** e);
-  return logEta0 + ((e - 1) / aRaw) * Math.log10(1 + x ** aRaw);
+  // indexed, not destructured: called some 10⁵ times per fit, often before it is optimised
+  const x = 10 ** (p[1] + lw); // λω
+  if (model === 'cross') return p[0] - Math.log10(1 + x ** p[2]);
+  return p[0] + ((p[2] - 1) / p[3]) * Math.log10(1 + x ** p[3]);
 }
 
 /** One law fitted to binned log10 |η*| (x ascending) with statistical weights w. */

@@ -84,4 +84,51 @@ describe('scanTable()', () => {
     const t = scanTable('1\n', 0, 1, spec());
     expect(t.problems[0]).toMatchObject({ column: 2, kind: 'missing' });
   });
+
+  it('scanTable() reads plain cells in place exactly as Number() reads their text', () => {
+    // seeded cells of every plain shape: signs, leading and trailing zeros, separators, exponents,
+    // 1–20 digits; Number() (ECMA-262 StringToNumber, correctly rounded) is the reference
+    let s = 12345;
+    const rand = (): number => {
+      s = (Math.imul(s, 1664525) + 1013904223) >>> 0;
+      return s / 4294967296;
+    };
+    const digits = (n: number): string =>
+      Array.from({ length: n }, () => String(Math.floor(rand() * 10))).join('');
+    const cells: string[] = ['0', '-0', '+0', '1.', '.5', '-.5e1', '0.000123', '60002.0', '1e22'];
+    cells.push(
+      '123456789012345',
+      '1234567890123456',
+      '9007199254740993',
+      '1e-22',
+      '1e23',
+      '5e-324',
+    );
+    for (let k = 0; k < 3000; k++) {
+      const sign = ['', '-', '+'][Math.floor(rand() * 3)];
+      const int = digits(Math.floor(rand() * 12));
+      const frac = rand() < 0.6 ? `.${digits(Math.floor(rand() * 10))}` : '';
+      const exp =
+        rand() < 0.3
+          ? `${rand() < 0.5 ? 'e' : 'E'}${['', '-', '+'][Math.floor(rand() * 3)]}${digits(1 + Math.floor(rand() * 2))}`
+          : '';
+      const cell = `${sign}${int}${frac}${exp}`;
+      if (Number.isFinite(Number(cell)) && cell !== '' && cell !== sign) cells.push(cell);
+    }
+    for (const decimalComma of [false, true]) {
+      const text = cells
+        .map((c) => (decimalComma ? `${c.replace('.', ',')};1` : `${c},1`))
+        .join('\n');
+      const t = scanTable(
+        text,
+        0,
+        1,
+        spec({ delimiter: decimalComma ? 'semicolon' : 'comma', decimalComma }),
+      );
+      const read = [...t.values[0]!.subarray(0, t.rows)];
+      expect(read.map((v) => (Object.is(v, -0) ? 'neg0' : v))).toEqual(
+        cells.map((c) => (Object.is(Number(c), -0) ? 'neg0' : Number(c))),
+      );
+    }
+  });
 });
