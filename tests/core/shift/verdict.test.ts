@@ -83,6 +83,52 @@ describe('superposition verdict', () => {
     }
   });
 
+  it('calls a G′/G″ shift disagreement fair or poor (20 seeds × 2 melts at 2 % and at 8 % noise)', () => {
+    // G″ taken from a twin data set whose shift law is stronger: ×1.2 (Ea 72 instead of 60 kJ/mol,
+    // WLF C1 ×1.2) at 2 % noise, ×1.5 at 8 % — G′ and G″ then call for shifts up to about 0.1–0.13
+    // decades apart at the ends (0.3 decades at ×1.5). Measured: 40/40 fair or poor at each noise
+    // level, the disagreement 11–16 combined errors at 2 %, 7–16 at 8 % (a ×1.2 law at 8 % noise
+    // sits at 2–8 errors and is not always caught).
+    for (const [noise, factor] of [
+      [0.02, 1.2],
+      [0.08, 1.5],
+    ] as const)
+      for (const c of [MELT_ARRHENIUS, MELT_WLF_PB]) {
+        const law = c.options.components[0].law;
+        const stronger =
+          law.kind === 'arrhenius'
+            ? { ...law, activationEnergyJPerMol: law.activationEnergyJPerMol * factor }
+            : law.kind === 'wlf'
+              ? { ...law, c1: law.c1 * factor }
+              : law;
+        for (let seed = 1; seed <= 20; seed++) {
+          const a = syntheticIsotherms({ ...c.options, relativeNoise: noise, seed });
+          const b = syntheticIsotherms({
+            ...c.options,
+            components: [{ ...c.options.components[0], law: stronger }],
+            relativeNoise: noise,
+            seed: seed + 1000,
+          });
+          const dataset = {
+            ...a.dataset,
+            isotherms: a.dataset.isotherms.map((iso, k) => ({
+              ...iso,
+              quantities: {
+                storageModulus: iso.quantities.storageModulus,
+                lossModulus: b.dataset.isotherms[k].quantities.lossModulus,
+              },
+            })),
+          };
+          const r = shiftIsotherms(dataset, { referenceK: c.options.referenceK });
+          expect(['fair', 'poor'], `${c.name} ${noise} seed ${seed}`).toContain(r.checks.grade);
+          expect(
+            r.checks.quantityDisagreementZ!,
+            `${c.name} ${noise} seed ${seed}`,
+          ).toBeGreaterThan(4.5);
+        }
+      }
+  });
+
   it('words a fair or poor verdict with the figures that set it, never a ratio below its threshold', () => {
     for (let seed = 1; seed <= 4; seed++) {
       const { dataset } = syntheticIsotherms({ ...BLEND.options, relativeNoise: 0.02, seed });
