@@ -152,18 +152,21 @@ function vgpOffsets(dataset: Dataset, active: number[], s: ResolvedShiftOptions)
 
 const fmtAlpha = (a: number): string => `${(a * 1e4).toFixed(2)}·10⁻⁴ /K`;
 
-export function verticalShift(
-  dataset: Dataset,
-  active: number[],
+/**
+ * One outcome: `fields` that differ from a plain bT (no joint fit, no free per-isotherm bT, no
+ * αV sensitivity or warm start; bT = 1 unless given), with the choice `chosen` and its reason.
+ */
+function outcome(
   s: ResolvedShiftOptions,
+  n: number,
+  chosen: VerticalChoice['chosen'],
+  reason: string,
+  choice: Partial<VerticalChoice>,
+  fields: Partial<Omit<VerticalOutcome, 'choice'>> = {},
 ): VerticalOutcome {
-  const n = dataset.isotherms.length;
-  const temps = dataset.isotherms.map((i) => i.temperatureK);
-  const activeTemps = active.map((k) => temps[k]);
-  const zeros = (): number[] => new Array<number>(n).fill(0);
-  const none = (reason: string, extra: Partial<VerticalChoice> = {}): VerticalOutcome => ({
-    log10bT: zeros(),
-    stdErr: zeros(),
+  return {
+    log10bT: new Array<number>(n).fill(0),
+    stdErr: new Array<number>(n).fill(0),
     joint: false,
     vgpFit: null,
     extrapolatedK: [],
@@ -172,41 +175,61 @@ export function verticalShift(
     implausible: null,
     expansionSensitivity: null,
     startLog10aT: null,
+    ...fields,
     choice: {
       requested: s.vertical,
-      chosen: 'none',
+      chosen,
       reason,
       expansionPerK: null,
       expansionStdErr: null,
       effectDecades: null,
       z: null,
-      ...extra,
+      ...choice,
     },
-  });
+  };
+}
+
+/** Entropic log10 bT at each temperature for one αV, with its s.e. from αV's (NaN when none). */
+function entropicFromExpansion(
+  temps: number[],
+  referenceK: number,
+  alpha: number,
+  alphaStdErr: number | null,
+): { log10bT: number[]; stdErr: number[] } {
+  return {
+    log10bT: temps.map((T) => entropicLog10bT(T, referenceK, alpha)),
+    stdErr: temps.map((T) =>
+      alphaStdErr === null
+        ? NaN
+        : Math.abs(entropicLog10bTSlope(T, referenceK, alpha)) * alphaStdErr,
+    ),
+  };
+}
+
+export function verticalShift(
+  dataset: Dataset,
+  active: number[],
+  s: ResolvedShiftOptions,
+): VerticalOutcome {
+  const n = dataset.isotherms.length;
+  const temps = dataset.isotherms.map((i) => i.temperatureK);
+  const activeTemps = active.map((k) => temps[k]);
+  const none = (
+    reason: string,
+    extra: Partial<VerticalChoice> = {},
+    fields: Partial<Omit<VerticalOutcome, 'choice'>> = {},
+  ): VerticalOutcome => outcome(s, n, 'none', reason, extra, fields);
   const densityMode = (reason: string): VerticalOutcome => {
     const d = densityLog10bT(temps, s.referenceK, s.density!);
     const alpha = s.density!.kind === 'expansion' ? s.density!.volumetricExpansionPerK : null;
-    return {
-      log10bT: d.log10bT,
-      stdErr: zeros(),
-      joint: false,
-      vgpFit: null,
-      extrapolatedK: d.extrapolatedK,
-      free: false,
-      carriesBT: false,
-      implausible: null,
-      expansionSensitivity: null,
-      startLog10aT: null,
-      choice: {
-        requested: s.vertical,
-        chosen: 'density',
-        reason,
-        expansionPerK: alpha,
-        expansionStdErr: null,
-        effectDecades: largestAbs(d.log10bT),
-        z: null,
-      },
-    };
+    return outcome(
+      s,
+      n,
+      'density',
+      reason,
+      { expansionPerK: alpha, effectDecades: largestAbs(d.log10bT) },
+      { log10bT: d.log10bT, extrapolatedK: d.extrapolatedK },
+    );
   };
   if (s.vertical === 'density') return densityMode('requested: bT from density');
   if (s.vertical === 'auto' && s.density)
@@ -218,11 +241,10 @@ export function verticalShift(
     const p = profileExpansion(dataset, active, s);
     if (!p) return none('requested: no vertical shift');
     const j = judgeExpansion(p, activeTemps, s.referenceK);
-    return {
-      ...none('requested: no vertical shift', profileStats(p, j)),
+    return none('requested: no vertical shift', profileStats(p, j), {
       carriesBT: j.carriesBT,
       implausible: implausibleSentence(p, j),
-    };
+    });
   }
   if (!canVgp) {
     if (s.vertical === 'auto')
@@ -245,30 +267,19 @@ export function verticalShift(
   if (s.heldExpansion && s.heldExpansion.expansionPerK !== null) {
     // A live re-fit keeps the αV of the last full fit: bT changes only when the curve is released.
     const { expansionPerK: alpha, expansionStdErr: se } = s.heldExpansion;
-    const log10bT = temps.map((T) => entropicLog10bT(T, s.referenceK, alpha));
-    return {
-      log10bT,
-      stdErr: temps.map((T) =>
-        se === null ? NaN : Math.abs(entropicLog10bTSlope(T, s.referenceK, alpha)) * se,
-      ),
-      joint: false,
-      vgpFit: null,
-      extrapolatedK: [],
-      free: false,
-      carriesBT: true,
-      implausible: null,
-      expansionSensitivity: null,
-      startLog10aT: null,
-      choice: {
-        requested: s.vertical,
-        chosen: 'data',
-        reason: `bT from the entropic law bT = Tref(1 + αV(T − Tref))/T with αV = ${fmtAlpha(alpha)} held from the last full fit (live re-fit; αV is fitted again when the change is complete)`,
+    const bT = entropicFromExpansion(temps, s.referenceK, alpha, se);
+    return outcome(
+      s,
+      n,
+      'data',
+      `bT from the entropic law bT = Tref(1 + αV(T − Tref))/T with αV = ${fmtAlpha(alpha)} held from the last full fit (live re-fit; αV is fitted again when the change is complete)`,
+      {
         expansionPerK: alpha,
         expansionStdErr: se,
-        effectDecades: largestAbs(active.map((k) => log10bT[k])),
-        z: null,
+        effectDecades: largestAbs(active.map((k) => bT.log10bT[k])),
       },
-    };
+      { ...bT, carriesBT: true },
+    );
   }
   const p = profileExpansion(dataset, active, s);
   const j = p ? judgeExpansion(p, activeTemps, s.referenceK) : null;
@@ -279,52 +290,39 @@ export function verticalShift(
       );
     const evidence = `αV = ${fmtAlpha(p.expansionPerK)} ± ${fmtAlpha(p.expansionStdErr)} fitted to the moduli lies ${(-p.z).toFixed(1)} standard errors below 1/Tref, where bT ≡ 1 (${AUTO_Z} needed), and the mismatch of the shifted curves drops by ${p.chi2Drop.toFixed(1)} residual variances; bT would reach ${j.effectDecades.toFixed(3)} decades`;
     if (!j.plausible && p.z < -AUTO_Z)
-      return {
-        ...none(
-          `bT = 1: a vertical shift would lower the mismatch (${evidence}) but needs αV outside what polymers show (0–20·10⁻⁴ /K): the isotherms may not superpose (check the van Gurp–Palmen plot)`,
-          profileStats(p, j),
-        ),
-        implausible: implausibleSentence(p, j),
-      };
+      return none(
+        `bT = 1: a vertical shift would lower the mismatch (${evidence}) but needs αV outside what polymers show (0–20·10⁻⁴ /K): the isotherms may not superpose (check the van Gurp–Palmen plot)`,
+        profileStats(p, j),
+        { implausible: implausibleSentence(p, j) },
+      );
     if (!j.carriesBT)
       return none(`bT = 1: no vertical shift beyond the noise (${evidence})`, profileStats(p, j));
   }
   if (p && j && (s.vertical === 'auto' || j.plausible)) {
     const alpha = j.applied;
-    const log10bT = temps.map((T) => entropicLog10bT(T, s.referenceK, alpha));
-    const stdErr = temps.map(
-      (T) => Math.abs(entropicLog10bTSlope(T, s.referenceK, alpha)) * p.expansionStdErr,
-    );
     const bound =
       alpha !== p.expansionPerK
         ? ` (the fit gave ${fmtAlpha(p.expansionPerK)}, within ${PLAUSIBLE_MARGIN_STD_ERR} standard errors of the plausible range 0–20·10⁻⁴ /K, so its nearest end is used)`
         : '';
     const what = `the entropic law bT = Tref(1 + αV(T − Tref))/T with αV = ${fmtAlpha(alpha)} ± ${fmtAlpha(p.expansionStdErr)} fitted to the moduli${bound}`;
-    return {
-      log10bT,
-      stdErr,
-      joint: false,
-      vgpFit: null,
-      extrapolatedK: [],
-      free: false,
-      carriesBT: j.carriesBT,
-      implausible: null,
-      expansionSensitivity: {
-        perIsotherm: p.sensitivity,
-        variance: p.expansionStdErr * p.expansionStdErr,
+    return outcome(
+      s,
+      n,
+      'data',
+      s.vertical === 'auto'
+        ? `bT from the data: αV lies ${(-p.z).toFixed(1)} standard errors below 1/Tref, where bT ≡ 1 (${AUTO_Z} needed), the mismatch of the shifted curves drops by ${p.chi2Drop.toFixed(1)} residual variances, and bT reaches ${j.effectDecades.toFixed(3)} decades; ${what}`
+        : `requested: bT from the data; ${what}`,
+      { ...profileStats(p, j), expansionPerK: alpha },
+      {
+        ...entropicFromExpansion(temps, s.referenceK, alpha, p.expansionStdErr),
+        carriesBT: j.carriesBT,
+        expansionSensitivity: {
+          perIsotherm: p.sensitivity,
+          variance: p.expansionStdErr * p.expansionStdErr,
+        },
+        startLog10aT: alpha === p.expansionPerK ? p.log10aT : null,
       },
-      startLog10aT: alpha === p.expansionPerK ? p.log10aT : null,
-      choice: {
-        requested: s.vertical,
-        chosen: 'data',
-        reason:
-          s.vertical === 'auto'
-            ? `bT from the data: αV lies ${(-p.z).toFixed(1)} standard errors below 1/Tref, where bT ≡ 1 (${AUTO_Z} needed), the mismatch of the shifted curves drops by ${p.chi2Drop.toFixed(1)} residual variances, and bT reaches ${j.effectDecades.toFixed(3)} decades; ${what}`
-            : `requested: bT from the data; ${what}`,
-        ...profileStats(p, j),
-        expansionPerK: alpha,
-      },
-    };
+    );
   }
   // Explicit 'data' where one αV does not fit: each isotherm's own bT from δ against |G*|.
   const fit = vgpOffsets(dataset, active, s);
@@ -335,27 +333,21 @@ export function verticalShift(
     free[k] = fit.theta[c];
     freeErr[k] = fit.stdErr[c];
   });
-  return {
-    log10bT: free,
-    stdErr: freeErr,
-    joint: false,
-    vgpFit: fit,
-    extrapolatedK: [],
-    free: true,
-    carriesBT: j?.carriesBT ?? false,
-    implausible: p && j ? implausibleSentence(p, j) : null,
-    expansionSensitivity: null,
-    startLog10aT: null,
-    choice: {
-      requested: s.vertical,
-      chosen: 'data',
-      reason: `requested: bT from the data; ${p ? `one αV does not describe the data (αV = ${fmtAlpha(p.expansionPerK)})` : 'no αV could be fitted'}, so each isotherm keeps its own bT from δ against |G*|`,
-      expansionPerK: null,
-      expansionStdErr: null,
-      effectDecades: largestAbs(free),
-      z: null,
+  return outcome(
+    s,
+    n,
+    'data',
+    `requested: bT from the data; ${p ? `one αV does not describe the data (αV = ${fmtAlpha(p.expansionPerK)})` : 'no αV could be fitted'}, so each isotherm keeps its own bT from δ against |G*|`,
+    { effectDecades: largestAbs(free) },
+    {
+      log10bT: free,
+      stdErr: freeErr,
+      vgpFit: fit,
+      free: true,
+      carriesBT: j?.carriesBT ?? false,
+      implausible: p && j ? implausibleSentence(p, j) : null,
     },
-  };
+  );
 }
 
 /**
