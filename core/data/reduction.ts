@@ -89,6 +89,19 @@ export function entropicBT(
 }
 
 /**
+ * log10 bT of the entropic law with the linearised density of `densityFromExpansion`:
+ * bT = Tref(1 + αV(T − Tref))/T (ρref cancels).
+ */
+export function entropicLog10bT(T: number, referenceK: number, alpha: number): number {
+  return Math.log10((referenceK * (1 + alpha * (T - referenceK))) / T);
+}
+
+/** ∂log10 bT/∂αV of the entropic law, K. */
+export function entropicLog10bTSlope(T: number, referenceK: number, alpha: number): number {
+  return (T - referenceK) / (Math.LN10 * (1 + alpha * (T - referenceK)));
+}
+
+/**
  * Density from a volumetric thermal expansion coefficient αV (1/K), linearised about Tref:
  * ρ(T) = ρref / (1 + αV (T − Tref)).
  */

@@ -6,7 +6,7 @@
  */
 import { densityFromExpansion, entropicBT } from '../data/reduction';
 import type { Analysis } from './types';
-import { entropicLog10bT } from '../shift/vertical';
+import { entropicLog10bT } from '../data/reduction';
 
 /** The vertical-shift mode the analysis applied ('auto' resolved to its choice). */
 export function appliedVertical(a: Analysis): 'none' | 'density' | 'data' {

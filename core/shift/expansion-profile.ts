@@ -34,16 +34,7 @@ import { forEachPair } from './residuals';
 import { ResidualBuffer } from './residual-buffer';
 import { lossCode, robustRho, robustWeight } from './robust';
 import type { ResolvedShiftOptions } from './types';
-
-/** log10 bT of the entropic law with expansion αV (ρref cancels). */
-export function entropicLog10bT(T: number, referenceK: number, alpha: number): number {
-  return Math.log10((referenceK * (1 + alpha * (T - referenceK))) / T);
-}
-
-/** ∂log10 bT/∂αV of the entropic law, K. */
-export function entropicLog10bTSlope(T: number, referenceK: number, alpha: number): number {
-  return (T - referenceK) / (Math.LN10 * (1 + alpha * (T - referenceK)));
-}
+import { entropicLog10bT, entropicLog10bTSlope } from '../data/reduction';
 
 /** Result of the profile of the horizontal fit's mismatch over αV. */
 export interface ProfileFit {

@@ -18,14 +18,16 @@ import type { Dataset } from '../data/types';
 import { buildProblem } from './build-problem';
 import { densityLog10bT } from './density-shift';
 import { quantityValues } from './drivers';
-import { entropicLog10bT, entropicLog10bTSlope, profileExpansion } from './expansion-profile';
+import { profileExpansion } from './expansion-profile';
+import { entropicLog10bT, entropicLog10bTSlope } from '../data/reduction';
 import type { ProfileFit } from './expansion-profile';
 import { fitOffsets, robustFitSettings } from './fit-offsets';
 import type { OffsetFit } from './fit-offsets';
 import type { ResolvedShiftOptions, VerticalChoice } from './types';
 import { ShiftOptionsError } from './options';
 
-export { entropicLog10bT, profileExpansion } from './expansion-profile';
+export { profileExpansion } from './expansion-profile';
+export { entropicLog10bT } from '../data/reduction';
 export type { ProfileFit } from './expansion-profile';
 
 export interface VerticalOutcome {
