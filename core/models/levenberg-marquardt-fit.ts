@@ -247,6 +247,8 @@ export function levenbergMarquardtFit(
       );
     }
     const gain = ss - nextSs;
+    // the next round starts where this one did when it found nothing better
+    const sameStart = nextSs > ss || next.every((v, k) => v === params[k]);
     if (nextSs <= ss) {
       params = next;
       ss = nextSs;
@@ -260,9 +262,11 @@ export function levenbergMarquardtFit(
         offset,
       );
     }
-    // a round that no longer lowers the residual, three times in a row, is a stall
+    // a round that no longer lowers the residual, three times in a row, is a stall; a round that
+    // kept its starting constants is one at once: the library is deterministic, so the next round
+    // would start from the same constants and damping and repeat this one step for step
     stalls = gain <= o.relativeTolerance * ss ? stalls + 1 : 0;
-    if (stalls >= 3) break;
+    if (stalls >= 3 || sameStart) break;
   }
   const why =
     iterations >= o.maxIterations
