@@ -6,7 +6,9 @@
  *
  * 5.0.1 minimises Σ (v_i r_i)² for its `weights` option v; we take statistical weights
  * w_i = 1/σ_i² and pass v_i = √w_i. The library stops only when the error reaches its tolerance,
- * so we run it in short rounds. Whether the fit has converged is decided here, not by the rounds:
+ * so we run it in short rounds: 4 iterations first, doubling up to `roundIterations`, so a fit
+ * that converges in a few steps stops after a few (a round that finds nothing better goes straight
+ * to full length). Whether the fit has converged is decided here, not by the rounds:
  * by the relative-offset criterion of Bates & Watts (Technometrics 23, 179–183, 1981), the size of
  * the Gauss–Newton step still available compared with the statistical noise of the residuals.
  * A fit that stops (rounds no longer improve it, or the budget runs out) without meeting that
@@ -33,7 +35,10 @@ export interface NonlinearFitProblem {
 export interface NonlinearFitOptions {
   /** Total iteration budget. @default 1000 */
   maxIterations?: number;
-  /** Iterations per round of the library. @default 20 */
+  /**
+   * Longest round of the library, in iterations; the first rounds are shorter (4, 8, 16, … up to
+   * this). @default 20
+   */
   roundIterations?: number;
   /** A round that lowers Σ w r² by less than this fraction counts as settled. @default 1e-12 */
   relativeTolerance?: number;
@@ -81,6 +86,9 @@ function resolveOptions(o: NonlinearFitOptions, initial: number[]): Required<Non
   }
   return r;
 }
+
+/** Iterations of the first round (see the module comment). */
+const FIRST_ROUND = 4;
 
 /** Weighted Σ w (y − f(x))². */
 function sumSquares(p: NonlinearFitProblem, params: number[], w: ArrayLike<number>): number {
@@ -223,8 +231,9 @@ export function levenbergMarquardtFit(
   let iterations = 0;
   let stalls = 0;
   let offset = Infinity;
+  let length = Math.min(FIRST_ROUND, o.roundIterations);
   while (iterations < o.maxIterations) {
-    const round = Math.min(o.roundIterations, o.maxIterations - iterations);
+    const round = Math.min(length, o.maxIterations - iterations);
     const r = levenbergMarquardt({ x: problem.x, y: problem.y }, problem.model, {
       initialValues: params,
       weights: libWeights,
@@ -262,11 +271,14 @@ export function levenbergMarquardtFit(
         offset,
       );
     }
-    // a round that no longer lowers the residual, three times in a row, is a stall; a round that
-    // kept its starting constants is one at once: the library is deterministic, so the next round
-    // would start from the same constants and damping and repeat this one step for step
-    stalls = gain <= o.relativeTolerance * ss ? stalls + 1 : 0;
-    if (stalls >= 3 || sameStart) break;
+    // a full round that no longer lowers the residual, three times in a row, is a stall; a full
+    // round that kept its starting constants is one at once: the library is deterministic, so the
+    // next round would start from the same constants and damping and repeat this one step for step
+    const full = length >= o.roundIterations;
+    stalls = full && gain <= o.relativeTolerance * ss ? stalls + 1 : 0;
+    if (full && (stalls >= 3 || sameStart)) break;
+    // a short round that found nothing better is the start of a full one: go to full length
+    length = sameStart ? o.roundIterations : Math.min(2 * length, o.roundIterations);
   }
   const why =
     iterations >= o.maxIterations
