@@ -66,10 +66,11 @@ const COX_MERZ =
   'η0 from the oscillatory master curve. Reading it as steady-shear viscosity η(γ̇) relies on the Cox–Merz rule (Cox & Merz 1958), which is empirical: confirm by steady-shear testing.';
 
 function evaluate(model: ViscosityModel, p: number[], lw: number): number {
-  // indexed, not destructured: called some 10⁵ times per fit, often before it is optimised
-  const x = 10 ** (p[1] + lw); // λω
-  if (model === 'cross') return p[0] - Math.log10(1 + x ** p[2]);
-  return p[0] + ((p[2] - 1) / p[3]) * Math.log10(1 + x ** p[3]);
+  // indexed, not destructured: called some 10⁵ times per fit, often before it is optimised;
+  // log10(1 + (λω)^e) as ln(1 + e^(e·ln λω))/ln 10: exp and log1p cost far less than two powers
+  const lx = (p[1] + lw) * Math.LN10; // ln λω
+  if (model === 'cross') return p[0] - Math.log1p(Math.exp(p[2] * lx)) / Math.LN10;
+  return p[0] + ((p[2] - 1) / (p[3] * Math.LN10)) * Math.log1p(Math.exp(p[3] * lx));
 }
 
 /** One law fitted to binned log10 |η*| (x ascending) with statistical weights w. */
