@@ -6,6 +6,7 @@
 import { spawnSync } from 'node:child_process';
 import { randomUUID } from 'node:crypto';
 import { renameSync, rmSync, writeFileSync } from 'node:fs';
+import { dirname } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 let build;
@@ -23,6 +24,20 @@ const root = fileURLToPath(new URL('..', import.meta.url));
 // names this build: the code cache is used only with the bundle it was made from
 const buildId = randomUUID();
 
+// zod brings the error messages of some forty languages, a quarter of the bundle's bytes, which
+// every start would read; the command line speaks English only (zod's default), so its locale
+// index is reduced to English here.
+const zodEnglishOnly = {
+  name: 'zod-english-only',
+  setup(b) {
+    b.onLoad({ filter: /[\\/]zod[\\/]v4[\\/]locales[\\/]index\.c?js$/ }, (args) => ({
+      contents: "export { default as en } from './en.js';\n",
+      resolveDir: dirname(args.path),
+      loader: 'js',
+    }));
+  },
+};
+
 await build({
   absWorkingDir: root,
   entryPoints: ['app/cli/main.ts'],
@@ -37,6 +52,7 @@ await build({
   external: [],
   // the first line names the build (bin/load-bundle.mjs reads it)
   banner: { js: `// thermoshift-bundle ${buildId}` },
+  plugins: [zodEnglishOnly],
   minify: true,
   sourcemap: 'linked',
   logLevel: 'warning',
