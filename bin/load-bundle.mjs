@@ -6,7 +6,7 @@
 // or with other V8 flags (cachedDataRejected), and the bundle is then compiled as usual.
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
-import { dirname } from 'node:path';
+import { dirname, resolve } from 'node:path';
 import vm from 'node:vm';
 
 /** First line of the bundle: `// thermoshift-bundle <build id>` (scripts/build-cli.mjs). */
@@ -19,7 +19,8 @@ export const cacheHeader = (buildId) => `thermoshift-v8-cache ${buildId}\n`;
  * Compiles and runs the bundle (a CommonJS script) and returns its exports with the compiled
  * script (whose createCachedData() gives the cache) and whether a cache was used.
  */
-export function loadBundle(bundlePath, cachePath = `${bundlePath}.v8cache`) {
+export function loadBundle(path, cachePath = `${path}.v8cache`) {
+  const bundlePath = resolve(path);
   const source = readFileSync(bundlePath, 'utf8');
   const buildId = BUILD_LINE.exec(source)?.[1];
   let cachedData;
