@@ -82,14 +82,7 @@ export function buildMasterCurve(dataset: Dataset, options: AnalysisOptions = {}
   );
 
   progress(0.75, 'spectrum');
-  const { prony, indicators } = runSpectrum(
-    data,
-    masterCurve,
-    models,
-    settings,
-    warnings,
-    columns,
-  );
+  const { prony, indicators } = runSpectrum(data, masterCurve, models, settings, warnings, columns);
 
   progress(1, 'done');
   return {

@@ -110,5 +110,8 @@ export function reduceMasterCurve(
     columns.outlier[i] = f;
     flags[i] = f === 1;
   }
-  return { masterCurve: { reducedX, quantities, isothermId, temperatureK, outlier: flags }, columns };
+  return {
+    masterCurve: { reducedX, quantities, isothermId, temperatureK, outlier: flags },
+    columns,
+  };
 }

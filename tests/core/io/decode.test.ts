@@ -63,7 +63,8 @@ describe('ChunkDecoder', () => {
   it('ChunkDecoder drops a UTF-8 byte-order mark split over chunks, but keeps U+FEFF later on', () => {
     const bytes = utf8('\ufeffab\ufeffc');
     const d = new ChunkDecoder('utf-8 (BOM)');
-    const out = d.push(bytes.subarray(0, 2)) + d.push(bytes.subarray(2, 5)) + d.push(bytes.subarray(5));
+    const out =
+      d.push(bytes.subarray(0, 2)) + d.push(bytes.subarray(2, 5)) + d.push(bytes.subarray(5));
     expect(out + d.end()).toBe('ab\ufeffc');
   });
 
