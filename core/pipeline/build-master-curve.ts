@@ -11,7 +11,7 @@ import { applyMasks, checkExcluded } from './apply-masks';
 import { runShift } from './run-shift';
 import { fitShiftModels } from './fit-models';
 import { shiftCovarianceFor } from './shift-covariance';
-import { reduceToMasterCurve } from './reduce';
+import { reduceMasterCurve } from './reduce';
 import { runSpectrum } from './run-spectrum';
 import { PipelineError } from './errors';
 import { THERMOSHIFT_VERSION } from './version';
@@ -70,7 +70,7 @@ export function buildMasterCurve(dataset: Dataset, options: AnalysisOptions = {}
     }
   }
   for (const w of result.warnings) warnings.push({ code: w.code, message: w.message });
-  const masterCurve = reduceToMasterCurve(
+  const { masterCurve, columns } = reduceMasterCurve(
     data,
     curves,
     Object.fromEntries(result.curves.map((c) => [c.id, c.outlierPoints])),
@@ -82,7 +82,7 @@ export function buildMasterCurve(dataset: Dataset, options: AnalysisOptions = {}
   );
 
   progress(0.75, 'spectrum');
-  const { prony, indicators } = runSpectrum(data, masterCurve, models, settings, warnings);
+  const { prony, indicators } = runSpectrum(data, masterCurve, models, settings, warnings, columns);
 
   progress(1, 'done');
   return {

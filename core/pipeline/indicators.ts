@@ -20,6 +20,7 @@ import type { ShiftModelSpec } from '../models/types';
 import { toCelsius } from './temperature';
 import { fittedShiftModels, modelConstant } from './model-results';
 import { binnedMaster } from './binned-master';
+import type { MasterColumns } from './master-columns';
 import { zeroShearIndicators } from './zero-shear';
 import type {
   AnalysisIndicator,
@@ -50,6 +51,8 @@ export function computeIndicators(
   window: ReducedWindow,
   models: AnalysisModels,
   warnings: AnalysisWarning[],
+  /** The master curve's typed columns, when the caller has them (reduceMasterCurve). */
+  columns?: MasterColumns,
 ): AnalysisIndicator[] {
   const out: AnalysisIndicator[] = [];
   const G = (q: 'storageModulus' | 'lossModulus' | 'complexModulus'): string =>
@@ -75,7 +78,7 @@ export function computeIndicators(
     series.equilibriumModulusPa <= 1e-4 * g0 ||
     (oscillatory && pronyLoss(series, lowW) > pronyStorage(series, lowW));
 
-  const binned = oscillatory ? binnedMaster(mc) : null;
+  const binned = oscillatory ? binnedMaster(mc, columns) : null;
   if (oscillatory && binned) {
     attempt('Crossover', () => {
       const w = logSpace(window.min, window.max, 50);
@@ -125,6 +128,7 @@ export function computeIndicators(
         terminal.reached,
         dataset.deformation,
         warnings,
+        binned.viscosity,
       ))
         out.push(i);
     });

@@ -14,45 +14,60 @@ import type {
   AnalysisWarning,
 } from './types';
 import { computeIndicators } from './indicators';
+import { masterColumns, type MasterColumns } from './master-columns';
 
 const finite = (v: number): number | null => (Number.isFinite(v) ? v : null);
 
-const positive = (v: number | null | undefined): v is number =>
-  typeof v === 'number' && Number.isFinite(v) && v > 0;
+/** A finite positive value (NaN, ±Infinity, 0 and negatives fail). */
+const positive = (v: number): boolean => v > 0 && v < Infinity;
 
-/** The master curve as the Prony fit takes it; only points with every used value positive. */
-export function reducedCurveOf(dataset: Dataset, mc: AnalysisMasterCurve): ReducedCurve | null {
-  // plain loops over the points (no index arrays and closures): 10⁶ points take milliseconds
-  const x: number[] = [];
+/**
+ * The master curve as the Prony fit takes it; only points with every used value positive.
+ * `columns`: the master curve's typed columns, when the caller has them (reduceMasterCurve).
+ */
+export function reducedCurveOf(
+  dataset: Dataset,
+  mc: AnalysisMasterCurve,
+  columns: MasterColumns = masterColumns(mc),
+): ReducedCurve | null {
+  // plain loops over typed columns, kept points written in place: no growing arrays
+  const n = columns.x.length;
+  const cx = columns.x;
+  const out = columns.outlier;
+  const x = new Float64Array(n);
+  let m = 0;
   if (dataset.abscissa === 'angularFrequency') {
-    const s = mc.quantities.storageModulus;
-    const l = mc.quantities.lossModulus;
+    const s = columns.quantities.storageModulus;
+    const l = columns.quantities.lossModulus;
     if (!s && !l) return null;
-    const storage: number[] = [];
-    const loss: number[] = [];
-    for (let i = 0; i < mc.reducedX.length; i++) {
-      const xi = mc.reducedX[i];
-      if (mc.outlier[i] || !positive(xi)) continue;
-      const si = s?.[i];
-      const li = l?.[i];
-      if ((s && !positive(si)) || (l && !positive(li))) continue;
-      x.push(xi);
-      if (s) storage.push(si as number);
-      if (l) loss.push(li as number);
+    const storage = s ? new Float64Array(n) : null;
+    const loss = l ? new Float64Array(n) : null;
+    for (let i = 0; i < n; i++) {
+      const xi = cx[i];
+      if (out[i] || !positive(xi)) continue;
+      if ((s && !positive(s[i])) || (l && !positive(l[i]))) continue;
+      x[m] = xi;
+      if (storage) storage[m] = s![i];
+      if (loss) loss[m] = l![i];
+      m++;
     }
-    return { x, ...(s && { storage }), ...(l && { loss }) };
+    return {
+      x: x.subarray(0, m),
+      ...(storage && { storage: storage.subarray(0, m) }),
+      ...(loss && { loss: loss.subarray(0, m) }),
+    };
   }
-  const g = mc.quantities.relaxationModulus;
+  const g = columns.quantities.relaxationModulus;
   if (!g) return null;
-  const relaxation: number[] = [];
-  for (let i = 0; i < mc.reducedX.length; i++) {
-    const xi = mc.reducedX[i];
-    const gi = g[i];
-    if (mc.outlier[i] || !positive(xi) || !positive(gi)) continue;
-    x.push(xi);
-    relaxation.push(gi);
+  const relaxation = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const xi = cx[i];
+    if (out[i] || !positive(xi) || !positive(g[i])) continue;
+    x[m] = xi;
+    relaxation[m] = g[i];
+    m++;
   }
-  return { x, relaxation };
+  return { x: x.subarray(0, m), relaxation: relaxation.subarray(0, m) };
 }
 
 export function runSpectrum(
@@ -61,9 +76,12 @@ export function runSpectrum(
   models: AnalysisModels,
   settings: ResolvedAnalysisOptions,
   warnings: AnalysisWarning[],
+  /** The master curve's typed columns, when the caller has them (reduceMasterCurve). */
+  columns?: MasterColumns,
 ): { prony: AnalysisProny | null; indicators: AnalysisIndicator[] } {
   if (settings.pronyModesPerDecade === 0) return { prony: null, indicators: [] };
-  const curve = reducedCurveOf(dataset, masterCurve);
+  const cols = columns ?? masterColumns(masterCurve);
+  const curve = reducedCurveOf(dataset, masterCurve, cols);
   if (!curve) {
     warnings.push({
       code: 'prony-not-fitted',
@@ -119,6 +137,7 @@ export function runSpectrum(
       fit.window,
       models,
       warnings,
+      cols,
     );
     return { prony, indicators };
   } catch (e) {

@@ -25,7 +25,7 @@ const LAW: Record<ViscosityFitResult['model'], string> = {
 const fmt = (v: number): string => v.toPrecision(3);
 
 /** |η*| points of the master curve (measured |η*|, else |G*|/ω_r), outliers left out. */
-function viscosityPoints(mc: AnalysisMasterCurve): { w: Float64Array; eta: Float64Array } {
+export function viscosityPoints(mc: AnalysisMasterCurve): { w: Float64Array; eta: Float64Array } {
   const n = mc.reducedX.length;
   const w = new Float64Array(n);
   const eta = new Float64Array(n);
@@ -49,8 +49,10 @@ export function zeroShearIndicators(
   terminalReached: boolean,
   deformation: DeformationMode,
   warnings: AnalysisWarning[],
+  /** The |η*| points when the caller has them (binnedMaster), else taken from `mc`. */
+  points: { w: Float64Array; eta: Float64Array } = viscosityPoints(mc),
 ): AnalysisIndicator[] {
-  const { w, eta } = viscosityPoints(mc);
+  const { w, eta } = points;
   const fit = fitViscosityCurve(w, eta, 'auto');
   const shear = deformation === 'shear';
   const y = pronySymbols(deformation);

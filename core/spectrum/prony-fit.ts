@@ -144,6 +144,8 @@ export function fitProny(curve: ReducedCurve, options: PronyFitOptions = {}): Pr
   const note = (i: number, message: string) => {
     if (++skipped <= MAX_POINT_WARNINGS) warnings.push({ pointIndex: i, message });
   };
+  // plain loops (no closure per point): this pass visits every point of the master curve
+  const given = kinds.map((k, q) => (present[q] ? curve[k]! : null));
   for (let i = 0; i < n; i++) {
     const x = curve.x[i];
     if (!(x > 0) || !Number.isFinite(x)) {
@@ -153,12 +155,16 @@ export function fitProny(curve: ReducedCurve, options: PronyFitOptions = {}): Pr
       );
       continue;
     }
-    kinds.forEach((k, q) => {
-      if (!present[q]) return;
-      const y = curve[k]![i];
+    for (let q = 0; q < given.length; q++) {
+      const ys = given[q];
+      if (!ys) continue;
+      const y = ys[i];
       if (!(y > 0) || !Number.isFinite(y))
-        note(i, `Point ${i + 1}: ${LABEL[k]} ${y} is not a positive number; left out of the fit.`);
-    });
+        note(
+          i,
+          `Point ${i + 1}: ${LABEL[kinds[q]]} ${y} is not a positive number; left out of the fit.`,
+        );
+    }
   }
   if (skipped > MAX_POINT_WARNINGS)
     warnings.push({
@@ -185,7 +191,12 @@ export function fitProny(curve: ReducedCurve, options: PronyFitOptions = {}): Pr
       const b = Math.floor(Math.log10(x) * o.binsPerDecade);
       if (b < loIdx || b > hiIdx) continue;
     }
-    if (!kinds.some((k, q) => present[q] && ys[q][i] > 0 && Number.isFinite(ys[q][i]))) continue;
+    let any = false;
+    for (let q = 0; q < given.length && !any; q++) {
+      const y = ys[q][i];
+      any = given[q] !== null && y > 0 && Number.isFinite(y);
+    }
+    if (!any) continue;
     used++;
     if (x < min) min = x;
     if (x > max) max = x;

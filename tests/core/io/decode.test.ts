@@ -51,6 +51,30 @@ describe('ChunkDecoder', () => {
     expect(out + d.end()).toBe(text);
   });
 
+  it('ChunkDecoder decodes UTF-8 fed one byte at a time, a 4-byte character included', () => {
+    const text = 'T (°C),G′ (Pa) 𝜔\n40,1\n';
+    const bytes = utf8(text);
+    const d = new ChunkDecoder('utf-8');
+    let out = '';
+    for (let i = 0; i < bytes.length; i++) out += d.push(bytes.subarray(i, i + 1));
+    expect(out + d.end()).toBe(text);
+  });
+
+  it('ChunkDecoder drops a UTF-8 byte-order mark split over chunks, but keeps U+FEFF later on', () => {
+    const bytes = utf8('\ufeffab\ufeffc');
+    const d = new ChunkDecoder('utf-8 (BOM)');
+    const out =
+      d.push(bytes.subarray(0, 2)) + d.push(bytes.subarray(2, 5)) + d.push(bytes.subarray(5));
+    expect(out + d.end()).toBe('ab\ufeffc');
+  });
+
+  it('ChunkDecoder throws InvalidUtf8Error on a character cut off at the end of the file', () => {
+    const bytes = utf8('a°');
+    const d = new ChunkDecoder('utf-8');
+    expect(d.push(bytes.subarray(0, 2))).toBe('a');
+    expect(() => d.end()).toThrow(InvalidUtf8Error);
+  });
+
   it('ChunkDecoder throws InvalidUtf8Error on a byte that is not UTF-8', () => {
     const d = new ChunkDecoder('utf-8');
     expect(() => d.push(Uint8Array.from([0x41, 0xb0, 0x43]))).toThrow(InvalidUtf8Error);

@@ -19,7 +19,11 @@ const mc: AnalysisMasterCurve = {
 
 describe('reducedCurveOf()', () => {
   it('reducedCurveOf() keeps points with every value positive and no outlier flag', () => {
-    expect(reducedCurveOf(osc, mc)).toEqual({ x: [0.1, 100], storage: [1, 4], loss: [1, 4] });
+    expect(reducedCurveOf(osc, mc)).toEqual({
+      x: Float64Array.of(0.1, 100),
+      storage: Float64Array.of(1, 4),
+      loss: Float64Array.of(1, 4),
+    });
   });
   it('reducedCurveOf() returns null for creep data', () => {
     const creep = { ...osc, abscissa: 'time', testKind: 'creep' } as Dataset;
