@@ -29,7 +29,7 @@ export function detectEncoding(head: Uint8Array): TextEncodingName {
  * Where the last complete UTF-8 character of `bytes` ends: the length, less an incomplete
  * trailing sequence (at most 3 bytes) that the next chunk may complete.
  */
-function completeUtf8End(bytes: Uint8Array): number {
+export function completeUtf8End(bytes: Uint8Array): number {
   const len = bytes.length;
   for (let k = 1; k <= 3 && len - k >= 0; k++) {
     const b = bytes[len - k];

@@ -39,5 +39,12 @@ export {
   splitSheetName,
   workbookToSourceFiles,
 } from './workbook';
-export { ChunkDecoder, InvalidUtf8Error, LineChunker, decodeBytes, detectEncoding } from './decode';
+export {
+  ChunkDecoder,
+  InvalidUtf8Error,
+  completeUtf8End,
+  LineChunker,
+  decodeBytes,
+  detectEncoding,
+} from './decode';
 export type { TextEncodingName } from './decode';

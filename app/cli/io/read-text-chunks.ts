@@ -7,7 +7,7 @@
  */
 import { isUtf8 } from 'node:buffer';
 import { closeSync, openSync, readSync } from 'node:fs';
-import { ChunkDecoder, LineChunker, detectEncoding } from '@core/io';
+import { ChunkDecoder, LineChunker, completeUtf8End, detectEncoding } from '@core/io';
 import type { TextEncodingName } from '@core/io';
 
 /** Bytes read per call: large enough for few calls, small enough to stay far below string limits. */
@@ -74,15 +74,7 @@ export function allUtf8(path: string): boolean {
       const len = carried + n;
       if (n === 0) return carried === 0 || isUtf8(buf.subarray(0, len));
       // Keep an incomplete trailing sequence (at most 3 bytes) for the next piece.
-      let end = len;
-      for (let k = 1; k <= 3 && len - k >= 0; k++) {
-        const b = buf[len - k];
-        if ((b & 0xc0) !== 0x80) {
-          const need = b >= 0xf0 ? 4 : b >= 0xe0 ? 3 : b >= 0xc0 ? 2 : 1;
-          if (need > k) end = len - k;
-          break;
-        }
-      }
+      const end = completeUtf8End(buf.subarray(0, len));
       if (!isUtf8(buf.subarray(0, end))) return false;
       buf.copy(buf, 0, end, len);
       carried = len - end;
